@@ -1,0 +1,181 @@
+/**
+ * Reading CSV (papaparse) and XLSX (exceljs) into a header and string rows, and writing
+ * them back with every text cell that a spreadsheet program could run as a formula escaped.
+ *
+ * The reader is generic: it knows nothing of plans. `readTable` in ./columns matches the
+ * headers to a column list (plan library now; lots and equipment catalog later).
+ */
+import ExcelJS from "exceljs";
+import Papa from "papaparse";
+import type { RawTable } from "./columns";
+
+export class TableFileError extends Error {
+  constructor(message: string) {
+    super(message);
+    this.name = "TableFileError";
+  }
+}
+
+/**
+ * Text that a spreadsheet program could read as a formula: it begins (after any spaces)
+ * with = + - @, or begins with a tab or carriage return (OWASP "CSV injection" guidance;
+ * full-width ＝＋－＠ included because some programs fold them).
+ */
+export const FORMULA_TRIGGER = /^(?:[\t\r]|\s*[=+\-@\uFF1D\uFF0B\uFF0D\uFF20])/;
+
+/** True when a text cell must be escaped before it is written. */
+export function needsFormulaEscape(text: string): boolean {
+  return FORMULA_TRIGGER.test(text);
+}
+
+/** The quote-prefixed form written to CSV ("'=1+1"). */
+export function escapeCsvText(text: string): string {
+  return needsFormulaEscape(text) ? `'${text}` : text;
+}
+
+/**
+ * Undoes our own CSV escape on read: a leading single quote followed by a formula trigger is
+ * the escape we wrote, so "'=38*9" reads back as "=38*9". Any other leading quote is kept.
+ */
+export function unescapeCsvText(text: string): string {
+  return text.startsWith("'") && needsFormulaEscape(text.slice(1)) ? text.slice(1) : text;
+}
+
+export type OutputCell = string | number | null | undefined;
+
+/** Reads CSV text: the first record is the header; records keep their 1-based numbers. */
+export function readCsv(text: string): RawTable {
+  const withoutBom = text.replace(/^\uFEFF/, "");
+  const parsed = Papa.parse<string[]>(withoutBom, { header: false, skipEmptyLines: false, delimiter: "," });
+  const fatal = parsed.errors.find((error) => error.type === "Quotes");
+  if (fatal) {
+    throw new TableFileError(`CSV row ${(fatal.row ?? 0) + 1}: ${fatal.message}`);
+  }
+  const records = parsed.data;
+  // A file ending in a newline yields one empty trailing record.
+  while (records.length > 0 && records[records.length - 1].every((cell) => cell.trim() === "")) records.pop();
+  if (records.length === 0) throw new TableFileError("the file is empty: a header row is needed");
+  const [headers, ...rest] = records;
+  return {
+    headers: headers.map((cell) => cell.trim()),
+    rows: rest.map((cells, index) => ({ rowNumber: index + 2, cells: cells.map(unescapeCsvText) })),
+  };
+}
+
+function xlsxCellText(cell: ExcelJS.Cell): string {
+  const value = cell.value;
+  if (value === null || value === undefined) return "";
+  if (typeof value === "number") {
+    // A cell formatted as a percentage holds 0.7 for "70%": keep what the user sees.
+    if (typeof cell.numFmt === "string" && cell.numFmt.includes("%")) {
+      return `${Number((value * 100).toPrecision(12))}%`;
+    }
+    return String(value);
+  }
+  if (typeof value === "string") return value;
+  if (typeof value === "boolean") return value ? "TRUE" : "FALSE";
+  if (value instanceof Date) return value.toISOString().slice(0, 10);
+  if (typeof value === "object") {
+    if ("richText" in value) return value.richText.map((part) => part.text).join("");
+    if ("formula" in value || "sharedFormula" in value) {
+      // The spreadsheet program's computed result is what the user saw; without one, hand
+      // the formula to our own evaluator.
+      const result = value.result;
+      if (result === undefined || result === null) return "formula" in value && value.formula ? `=${value.formula}` : "";
+      if (typeof result === "object" && "error" in result) return String(result.error);
+      if (result instanceof Date) return result.toISOString().slice(0, 10);
+      return String(result);
+    }
+    if ("error" in value) return String(value.error);
+    if ("text" in value) return String(value.text);
+  }
+  return String(cell.text ?? "");
+}
+
+/** Reads the first worksheet (or the one named `sheetName`): row 1 is the header. */
+export async function readXlsx(data: ArrayBuffer | Uint8Array, sheetName?: string): Promise<RawTable> {
+  const workbook = new ExcelJS.Workbook();
+  try {
+    // exceljs' typings want a Node Buffer; a Uint8Array view over the same bytes works.
+    const bytes = data instanceof Uint8Array ? data : new Uint8Array(data);
+    await workbook.xlsx.load(Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength) as unknown as ExcelJS.Buffer);
+  } catch (error) {
+    throw new TableFileError(`the file cannot be read as XLSX (${error instanceof Error ? error.message : String(error)})`);
+  }
+  const sheet = sheetName ? workbook.getWorksheet(sheetName) : workbook.worksheets[0];
+  if (!sheet) throw new TableFileError(sheetName ? `the workbook has no sheet named "${sheetName}"` : "the workbook has no sheets");
+  const columnCount = sheet.columnCount;
+  const headerRow = sheet.getRow(1);
+  const headers: string[] = [];
+  for (let column = 1; column <= columnCount; column += 1) headers.push(xlsxCellText(headerRow.getCell(column)).trim());
+  while (headers.length > 0 && headers[headers.length - 1] === "") headers.pop();
+  if (headers.length === 0) throw new TableFileError("the first row of the sheet is empty: a header row is needed");
+  const rows: RawTable["rows"] = [];
+  for (let rowNumber = 2; rowNumber <= sheet.rowCount; rowNumber += 1) {
+    const row = sheet.getRow(rowNumber);
+    const cells: string[] = [];
+    for (let column = 1; column <= Math.max(columnCount, headers.length); column += 1) cells.push(xlsxCellText(row.getCell(column)));
+    rows.push({ rowNumber, cells });
+  }
+  return { headers, rows };
+}
+
+/** Reads a CSV or XLSX file's bytes, choosing by the file name's extension. */
+export async function readTableFile(fileName: string, data: Uint8Array): Promise<RawTable> {
+  const lower = fileName.toLowerCase();
+  if (lower.endsWith(".csv")) return readCsv(new TextDecoder("utf-8").decode(data));
+  if (lower.endsWith(".xlsx")) return readXlsx(data);
+  if (lower.endsWith(".xls")) throw new TableFileError("old .xls workbooks are not read; save the sheet as .xlsx or .csv");
+  throw new TableFileError(`"${fileName}" is neither .csv nor .xlsx`);
+}
+
+/**
+ * Writes CSV. Numbers are written as numbers; text that could run as a formula gets a
+ * leading single quote (papaparse's escapeFormulae with our wider trigger pattern).
+ */
+export function writeCsv(headers: readonly string[], rows: readonly (readonly OutputCell[])[]): string {
+  return Papa.unparse(
+    { fields: [...headers], data: rows.map((row) => row.map((cell) => (cell === undefined ? null : cell))) },
+    { escapeFormulae: FORMULA_TRIGGER, newline: "\r\n" },
+  );
+}
+
+/**
+ * Writes XLSX: numbers as numbers, every text as a plain string cell — never a formula,
+ * whatever it begins with. The header row is bold and frozen.
+ */
+export async function writeXlsx(
+  headers: readonly string[],
+  rows: readonly (readonly OutputCell[])[],
+  options: { sheetName?: string; columnWidths?: readonly number[] } = {},
+): Promise<Uint8Array> {
+  const workbook = new ExcelJS.Workbook();
+  workbook.creator = "Platload";
+  const sheet = workbook.addWorksheet(options.sheetName ?? "Sheet1", { views: [{ state: "frozen", ySplit: 1 }] });
+  const header = sheet.addRow([...headers]);
+  header.font = { bold: true };
+  for (const row of rows) {
+    const added = sheet.addRow([]);
+    row.forEach((cell, index) => {
+      if (cell === null || cell === undefined || cell === "") return;
+      // Assigning a JS string makes a string cell; exceljs writes a formula only for { formula }.
+      added.getCell(index + 1).value = typeof cell === "number" ? cell : String(cell);
+    });
+  }
+  headers.forEach((text, index) => {
+    sheet.getColumn(index + 1).width = options.columnWidths?.[index] ?? Math.min(40, Math.max(10, text.length + 2));
+  });
+  const buffer = await workbook.xlsx.writeBuffer();
+  return new Uint8Array(buffer as ArrayBuffer);
+}
+
+/**
+ * Parses a block pasted from a spreadsheet (tab-separated, one line per row) into cells.
+ * Quoted cells with embedded tabs or newlines are handled by papaparse.
+ */
+export function parsePastedBlock(text: string): string[][] {
+  const trimmed = text.replace(/\r?\n$/, "");
+  if (trimmed === "") return [];
+  const parsed = Papa.parse<string[]>(trimmed, { delimiter: "\t", header: false, skipEmptyLines: false });
+  return parsed.data;
+}
