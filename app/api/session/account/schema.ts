@@ -1,0 +1,3 @@
+import { z } from "zod";
+
+export const chooseAccountSchema = z.object({ accountId: z.number().int().positive() });
