@@ -132,9 +132,12 @@ export async function readTableFile(fileName: string, data: Uint8Array): Promise
 /**
  * Writes CSV. Numbers are written as numbers; text that could run as a formula gets a
  * leading single quote (papaparse's escapeFormulae with our wider trigger pattern).
+ * With `bom` (default true) the text starts with a UTF-8 byte-order mark so that spreadsheet
+ * programs read "ft²" and "°F" as UTF-8; readCsv drops it again.
  */
-export function writeCsv(headers: readonly string[], rows: readonly (readonly OutputCell[])[]): string {
-  return Papa.unparse(
+export function writeCsv(headers: readonly string[], rows: readonly (readonly OutputCell[])[], options: { bom?: boolean } = {}): string {
+  const bom = options.bom === false ? "" : "\uFEFF";
+  return bom + Papa.unparse(
     { fields: [...headers], data: rows.map((row) => row.map((cell) => (cell === undefined ? null : cell))) },
     { escapeFormulae: FORMULA_TRIGGER, newline: "\r\n" },
   );
