@@ -213,9 +213,6 @@ export function readQuantity(text: string, kind: QuantityKind): UnitReadResult {
     unitText = suffix[2];
   }
 
-  const number = readPlainNumber(numberText, kind);
-  if (!number.ok) return number;
-
   let factor = 1;
   if (unitText !== "") {
     const unit = findUnit(unitText);
@@ -234,6 +231,8 @@ export function readQuantity(text: string, kind: QuantityKind): UnitReadResult {
     }
     factor = unitFactor;
   }
+  const number = readPlainNumber(numberText, kind);
+  if (!number.ok) return number;
   // Round away binary noise from a conversion (70 % × 0.01 = 0.7000000000000001).
   const value = factor === 1 ? number.value : Number((number.value * factor).toPrecision(12));
   return checkKindRange(value, kind);
