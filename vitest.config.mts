@@ -1,5 +1,6 @@
 import { fileURLToPath } from "node:url";
 import { defineConfig } from "vitest/config";
+import { INTEGRATION_DATABASE, TEST_MAILBOX_DIR, TEST_NEXTAUTH_SECRET, TEST_SMTP_PORT, testDatabaseUrl } from "./tests/support/test-env";
 
 const root = fileURLToPath(new URL("./", import.meta.url));
 
@@ -17,9 +18,18 @@ export default defineConfig({
           name: "integration",
           include: ["tests/integration/**/*.test.ts"],
           environment: "node",
+          globalSetup: ["tests/support/integration-setup.ts"],
           fileParallelism: false,
           testTimeout: 60_000,
           hookTimeout: 120_000,
+          env: {
+            DATABASE_URL: testDatabaseUrl(INTEGRATION_DATABASE),
+            NEXTAUTH_SECRET: TEST_NEXTAUTH_SECRET,
+            NEXTAUTH_URL: "http://127.0.0.1:3720",
+            SMTP_HOST: "127.0.0.1",
+            SMTP_PORT: String(TEST_SMTP_PORT),
+            PLATLOAD_MAILBOX_DIR: TEST_MAILBOX_DIR,
+          },
         },
       },
     ],

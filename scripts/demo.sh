@@ -1,0 +1,43 @@
+#!/usr/bin/env bash
+# Starts Platload with the demo data on http://127.0.0.1:3710 — the README's first command.
+# Installs what is missing, starts MariaDB and the mail fake on loopback, migrates, seeds when
+# empty, builds and serves. Ctrl-C stops the app, the database and the mail fake.
+set -euo pipefail
+cd "$(dirname "${BASH_SOURCE[0]}")/.."
+source scripts/lib.sh
+export NEXT_TELEMETRY_DISABLED=1
+
+PORT="${PORT:-3710}"
+ensure_apt mariadbd mariadb-server
+ensure_node_modules
+bash scripts/db.sh start demo
+bash scripts/mail.sh start demo
+
+export DATABASE_URL="$(bash scripts/db.sh url demo)"
+export NEXTAUTH_SECRET="$(ensure_secret)"
+export NEXTAUTH_URL="http://127.0.0.1:$PORT"
+export SMTP_HOST=127.0.0.1 SMTP_PORT=3712
+export PLATLOAD_MAILBOX_DIR="$(bash scripts/mail.sh dir demo)"
+
+npx tsx scripts/migrate.ts
+npx tsx db/seed.ts
+npx next build
+
+stop_all() { bash scripts/mail.sh stop demo || true; bash scripts/db.sh stop demo || true; }
+trap stop_all EXIT
+
+cat <<MSG
+
+Platload is starting on $NEXTAUTH_URL  (development mailbox: $NEXTAUTH_URL/dev/mailbox)
+Demo sign-ins (password for all: platload-demo-1):
+  admin@marrowfinch.test       Admin      (Marrow & Finch Homes)
+  designer@marrowfinch.test    Designer
+  reviewer@marrowfinch.test    Reviewer
+  purchasing@marrowfinch.test  Purchasing
+  viewer@marrowfinch.test      Viewer
+  consultant@loadworks.test    Reviewer at Marrow & Finch, Designer at Bramblewood (picks the account)
+  admin@bramblewood.test       Admin      (Bramblewood Residential, the second account)
+Press Ctrl-C to stop.
+
+MSG
+npx next start -H 127.0.0.1 -p "$PORT"

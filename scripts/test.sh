@@ -1,0 +1,29 @@
+#!/usr/bin/env bash
+# Runs every Platload test — the README's second command. Installs what is missing, starts its
+# own MariaDB and mail fake on loopback, runs Vitest (unit, then integration against the real
+# database), builds, runs Playwright in Debian's Chromium, and stops everything it started.
+set -euo pipefail
+cd "$(dirname "${BASH_SOURCE[0]}")/.."
+source scripts/lib.sh
+export NEXT_TELEMETRY_DISABLED=1 VITE_CONFIG_NATIVE_IGNORE_WARNING=true
+
+ensure_apt mariadbd mariadb-server chromium chromium
+ensure_node_modules
+
+stop_all() { bash scripts/mail.sh stop test >/dev/null || true; bash scripts/db.sh stop test >/dev/null || true; }
+trap stop_all EXIT
+bash scripts/db.sh start test
+bash scripts/mail.sh start test
+
+started=$(date +%s)
+echo "== type check"
+npx tsc --noEmit -p .
+echo "== unit and integration tests (Vitest)"
+npx vitest run
+echo "== build"
+export NEXTAUTH_SECRET="platload-e2e-secret"
+npx next build >.data/e2e-build.log 2>&1 || { cat .data/e2e-build.log; exit 1; }
+echo "== end-to-end tests (Playwright, Chromium)"
+npx tsx tests/e2e/prepare-database.ts
+npx playwright test
+echo "== all tests passed in $(( $(date +%s) - started )) s"

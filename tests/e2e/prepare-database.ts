@@ -1,0 +1,20 @@
+// Before the end-to-end run: a fresh, migrated and seeded database for the app under test.
+import { seedDatabase } from "@/db/seed";
+import { connect, freshDatabase } from "../support/database";
+import { E2E_DATABASE } from "../support/test-env";
+
+async function main() {
+  await freshDatabase(E2E_DATABASE);
+  const { db, close } = connect(E2E_DATABASE);
+  try {
+    await seedDatabase(db);
+  } finally {
+    await close();
+  }
+  console.log(`e2e database ${E2E_DATABASE} ready`);
+}
+
+main().catch((error: Error) => {
+  console.error(error);
+  process.exit(1);
+});

@@ -1,0 +1,27 @@
+// Calls route handlers the way Next does, with a real signed session cookie (next-auth's own
+// encode) and the account cookie, so the tests go through the same checks as the browser.
+import { encode } from "next-auth/jwt";
+import { NextRequest } from "next/server";
+import { ACCOUNT_COOKIE } from "@/lib/auth/route";
+import { TEST_NEXTAUTH_SECRET } from "./test-env";
+
+export async function sessionCookie({ userId, accountId }: { userId: number; accountId?: number }): Promise<string> {
+  const token = await encode({ token: { uid: userId, sub: String(userId) }, secret: TEST_NEXTAUTH_SECRET });
+  return [`next-auth.session-token=${token}`, accountId ? `${ACCOUNT_COOKIE}=${accountId}` : ""].filter(Boolean).join("; ");
+}
+
+type Handler = (request: NextRequest, context: { params: Promise<Record<string, string>> }) => Promise<Response>;
+
+export async function callRoute(
+  handler: unknown,
+  { path, method = "GET", params = {}, body, cookie }: { path: string; method?: string; params?: Record<string, string>; body?: unknown; cookie?: string },
+): Promise<{ status: number; json: any }> {
+  const request = new NextRequest(new URL(path, "http://127.0.0.1:3720"), {
+    method,
+    headers: { ...(cookie ? { cookie } : {}), ...(body !== undefined ? { "content-type": "application/json" } : {}) },
+    body: body !== undefined ? JSON.stringify(body) : undefined,
+  });
+  const response = await (handler as Handler)(request, { params: Promise.resolve(params) });
+  const text = await response.text();
+  return { status: response.status, json: text ? JSON.parse(text) : null };
+}
