@@ -228,6 +228,8 @@ export const atticSchema = z.object({
   roofPitchRisePer12In: ranged(0, 24, "in/12 in").default(6),
   /** Solar absorptance of the roofing; 0.90 dark asphalt shingle, from memory (HoF ch. 18 roof tables). */
   roofSolarAbsorptance: ranged(0.1, 1, "").default(0.9),
+  /** Vented-attic ventilation, cfm per ft² of ceiling (0.30 ≈ 3–4 attic air changes per hour, from memory). */
+  ventilationCfmPerFt2: ranged(0, 5, "cfm/ft²").default(0.3),
 });
 export type AtticInput = z.output<typeof atticSchema>;
 
@@ -388,6 +390,8 @@ export const planInputSchema = z
     volumeFt3: ranged(500, 1_500_000, "ft³").optional(),
     /** Exterior wall construction for every facade (a facade may override it). */
     wall: wallConstructionSchema.prefault({ baseId: "wood-2x4-16in-oc", cavityR: 13 }),
+    /** Solar absorptance of the exterior wall finish (0.6 medium colour, from memory) and doors. */
+    wallSolarAbsorptance: ranged(0.1, 1, "").default(0.6),
     facades: facadesSchema,
     attic: atticSchema.prefault({}),
     vaultedCeiling: vaultedCeilingSchema.prefault({}),

@@ -1,0 +1,252 @@
+/**
+ * Assembly U-factors from a base-assembly library plus the user's added insulation
+ * (parallel-path method, HoF 2021 ch. 27/26: U = Σ fᵢ / Rᵢ over the framing and cavity paths,
+ * each path's R the sum of its layers in series).
+ *
+ * Material and film resistances (h·ft²·°F/Btu):
+ * - surface films, HoF 2021 ch. 26 Table 10: inside vertical 0.68, heat flow up 0.61, heat flow
+ *   down 0.92, outside winter 15 mph 0.17, outside summer 7.5 mph 0.25; 45° slopes up 0.62 /
+ *   down 0.76 (from memory).
+ * - materials, HoF 2021 ch. 26 Table 1: gypsum ½ in 0.45; OSB 7/16 in 0.62; plywood ¾ in 1.08;
+ *   vinyl siding 0.62; asphalt shingles 0.44; softwood 1.25 per inch (from memory, the ASHRAE
+ *   90.1 Appendix A convention); 8 in hollow normal-weight block 1.1 (ENGINE.md: about 1.0–1.1),
+ *   core-filled (perlite) 2.0 (from memory); stucco ⅞ in 0.18 (from memory); unventilated
+ *   vertical air space ¾–3½ in about 1.0 (from memory, HoF ch. 26 Table 3 order of magnitude).
+ * - framing fractions, 90.1 Appendix A (from memory): walls 25 % at 16 in o.c., 22 % at 24 in;
+ *   attic ceilings 85 % full-depth insulation, 5 % half depth (eaves), 10 % joist (truss chord);
+ *   rafters and floor joists 10 % at 16 in, 7 % at 24 in (from memory).
+ *
+ * Walls follow the 90.1 Appendix A wall convention (films, siding, studs and cavity, gypsum; the
+ * structural sheathing is not counted), which reproduces its published U-factors and errs a few
+ * per cent high (conservative) for a sheathed wall.
+ */
+import type {
+  CeilingConstruction,
+  FloorConstruction,
+  RoofConstruction,
+  WallBaseAssembly,
+  WallConstruction,
+} from "./input";
+
+export const FILM_R = {
+  insideVertical: 0.68,
+  insideHeatFlowUp: 0.61,
+  insideHeatFlowDown: 0.92,
+  insideSlopedUp: 0.62,
+  insideSlopedDown: 0.76,
+  outsideWinter: 0.17,
+  outsideSummer: 0.25,
+} as const;
+
+export const MATERIAL_R = {
+  gypsumHalfInch: 0.45,
+  osbSevenSixteenthsInch: 0.62,
+  plywoodThreeQuarterInch: 1.08,
+  vinylSiding: 0.62,
+  asphaltShingles: 0.44,
+  softwoodPerInch: 1.25,
+  cmu8inHollow: 1.1,
+  cmu8inCoreFilled: 2.0,
+  stuccoSevenEighthsInch: 0.18,
+  airSpaceVertical: 1.0,
+  /** Blown loose-fill insulation per inch, used only to find how much lies over a ceiling joist (from memory). */
+  looseFillPerInch: 3.1,
+} as const;
+
+export type Season = "heating" | "cooling";
+export type MassClass = "light-frame" | "masonry";
+
+interface Path {
+  fraction: number;
+  r: number;
+}
+
+/** Parallel-path U-factor: U = Σ fᵢ/Rᵢ (HoF 2021 ch. 27 parallel-path method). */
+export function parallelPathU(paths: readonly Path[]): number {
+  let u = 0;
+  for (const p of paths) u += p.fraction / p.r;
+  return u;
+}
+
+function outsideFilm(season: Season): number {
+  return season === "heating" ? FILM_R.outsideWinter : FILM_R.outsideSummer;
+}
+
+interface WallBase {
+  kind: "wood" | "cmu";
+  /** Stud or furring depth, in. */
+  framingDepthIn: number;
+  framingFraction: number;
+  /** Mass class for the cooling time lag. */
+  mass: MassClass;
+  /** R of the block itself (cmu only). */
+  blockR?: number;
+}
+
+const WALL_BASES: Record<WallBaseAssembly, WallBase> = {
+  "wood-2x4-16in-oc": { kind: "wood", framingDepthIn: 3.5, framingFraction: 0.25, mass: "light-frame" },
+  "wood-2x4-24in-oc": { kind: "wood", framingDepthIn: 3.5, framingFraction: 0.22, mass: "light-frame" },
+  "wood-2x6-16in-oc": { kind: "wood", framingDepthIn: 5.5, framingFraction: 0.25, mass: "light-frame" },
+  "wood-2x6-24in-oc": { kind: "wood", framingDepthIn: 5.5, framingFraction: 0.22, mass: "light-frame" },
+  // Block walls: interior 1½ in wood furring at 24 in o.c. (10 %, from memory) holds any cavity insulation.
+  "cmu-8in-hollow": {
+    kind: "cmu",
+    framingDepthIn: 1.5,
+    framingFraction: 0.1,
+    mass: "masonry",
+    blockR: MATERIAL_R.cmu8inHollow,
+  },
+  "cmu-8in-core-filled": {
+    kind: "cmu",
+    framingDepthIn: 1.5,
+    framingFraction: 0.1,
+    mass: "masonry",
+    blockR: MATERIAL_R.cmu8inCoreFilled,
+  },
+};
+
+export function wallMassClass(baseId: WallBaseAssembly): MassClass {
+  return WALL_BASES[baseId].mass;
+}
+
+/** Wall U-factor, Btu/h·ft²·°F, for a base assembly plus added cavity/continuous insulation. */
+export function wallU(construction: WallConstruction, season: Season = "heating"): number {
+  const base = WALL_BASES[construction.baseId];
+  const framingR = base.framingDepthIn * MATERIAL_R.softwoodPerInch;
+  const cavityR = construction.cavityR > 0 ? construction.cavityR : MATERIAL_R.airSpaceVertical;
+  const exteriorR = base.kind === "wood" ? MATERIAL_R.vinylSiding : MATERIAL_R.stuccoSevenEighthsInch + (base.blockR ?? 0);
+  const seriesR =
+    outsideFilm(season) + exteriorR + construction.continuousR + MATERIAL_R.gypsumHalfInch + FILM_R.insideVertical;
+  return parallelPathU([
+    { fraction: 1 - base.framingFraction, r: seriesR + cavityR },
+    { fraction: base.framingFraction, r: seriesR + framingR },
+  ]);
+}
+
+/**
+ * Ceiling under a vented attic, heat flow up (heating) or down (cooling): 85 % full-depth
+ * insulation, 5 % half depth at the eaves, 10 % over the 3½ in truss chord (90.1 Appendix A
+ * convention, from memory). The attic side has a still-air film.
+ */
+export function ceilingU(construction: CeilingConstruction, season: Season = "heating"): number {
+  const joistFraction = construction.baseId === "attic-joists-16in-oc" ? 0.13 : 0.1;
+  const chordDepthIn = 3.5;
+  const film = season === "heating" ? 2 * FILM_R.insideHeatFlowUp : 2 * FILM_R.insideHeatFlowDown;
+  const series = film + MATERIAL_R.gypsumHalfInch + construction.continuousR;
+  const insulR = construction.cavityR;
+  // Over the joist: the joist plus whatever insulation lies above its top.
+  const insulDepthIn = insulR / MATERIAL_R.looseFillPerInch;
+  const overJoistR = Math.max(0, insulDepthIn - chordDepthIn) * MATERIAL_R.looseFillPerInch;
+  const emptyR = insulR > 0 ? 0 : MATERIAL_R.airSpaceVertical; // an uninsulated ceiling still has an air layer
+  const fullFraction = 0.9 - joistFraction + 0.05; // 85 % at 24 in o.c.
+  return parallelPathU([
+    { fraction: fullFraction, r: series + insulR + emptyR },
+    { fraction: 0.05, r: series + insulR / 2 + emptyR },
+    { fraction: joistFraction, r: series + chordDepthIn * MATERIAL_R.softwoodPerInch + overJoistR },
+  ]);
+}
+
+const RAFTER_DEPTH_IN = {
+  "roof-rafters-2x8-24in-oc": 7.25,
+  "roof-rafters-2x10-24in-oc": 9.25,
+  "roof-rafters-2x12-24in-oc": 11.25,
+} as const;
+
+/**
+ * Insulated roof on rafters, 24 in o.c. (7 % framing, from memory): shingles, OSB deck, cavity
+ * (or air), continuous insulation, and either a gypsum ceiling (vaulted) or an open underside
+ * (encapsulated attic deck).
+ */
+export function roofU(
+  construction: RoofConstruction,
+  options: { season: Season; gypsumCeiling: boolean; includeOutsideFilm?: boolean },
+): number {
+  const depthIn = RAFTER_DEPTH_IN[construction.baseId];
+  const framingFraction = 0.07;
+  const insideFilm = options.season === "heating" ? FILM_R.insideSlopedUp : FILM_R.insideSlopedDown;
+  const out = options.includeOutsideFilm === false ? 0 : outsideFilm(options.season);
+  const series =
+    out +
+    MATERIAL_R.asphaltShingles +
+    MATERIAL_R.osbSevenSixteenthsInch +
+    construction.continuousR +
+    (options.gypsumCeiling ? MATERIAL_R.gypsumHalfInch : 0) +
+    insideFilm;
+  const cavityR = construction.cavityR > 0 ? construction.cavityR : MATERIAL_R.airSpaceVertical;
+  return parallelPathU([
+    { fraction: 1 - framingFraction, r: series + cavityR },
+    { fraction: framingFraction, r: series + depthIn * MATERIAL_R.softwoodPerInch },
+  ]);
+}
+
+/** Bare roof deck of a vented attic (shingles + OSB + attic-side film), outside film excluded (sol-air supplies it). */
+export function ventedRoofDeckUWithoutOutsideFilm(): number {
+  return 1 / (MATERIAL_R.asphaltShingles + MATERIAL_R.osbSevenSixteenthsInch + FILM_R.insideSlopedDown);
+}
+
+/**
+ * Framed floor over unconditioned space: carpetless ¾ in plywood subfloor, joists 9¼ in (2x10)
+ * at 16 in (10 %) or 24 in (7 %) o.c., still-air films both sides, or an outdoor film below.
+ */
+export function floorU(construction: FloorConstruction, underside: "still-air" | "outdoors", season: Season = "heating"): number {
+  const framingFraction = construction.baseId === "floor-joists-2x10-24in-oc" ? 0.07 : 0.1;
+  const depthIn = 9.25;
+  const filmAbove = season === "heating" ? FILM_R.insideHeatFlowDown : FILM_R.insideHeatFlowUp;
+  const filmBelow = underside === "outdoors" ? outsideFilm(season) : filmAbove;
+  const series = filmAbove + MATERIAL_R.plywoodThreeQuarterInch + construction.continuousR + filmBelow;
+  const cavityR = construction.cavityR > 0 ? construction.cavityR : MATERIAL_R.airSpaceVertical;
+  return parallelPathU([
+    { fraction: 1 - framingFraction, r: series + cavityR },
+    { fraction: framingFraction, r: series + depthIn * MATERIAL_R.softwoodPerInch },
+  ]);
+}
+
+// ---------------------------------------------------------------------------------------------
+// Slabs and foundation walls.
+
+/**
+ * Slab-on-grade F-factors, Btu/h·ft·°F per ft of perimeter, unheated slab with vertical edge
+ * insulation: ASHRAE 90.1 Appendix A Table A6.3 (from memory; uninsulated 0.73 and R-10 to
+ * 24 in 0.54 as in ENGINE.md). Rows by insulation depth, columns by R; linear interpolation.
+ */
+const SLAB_F_R = [0, 5, 10, 15, 20, 30] as const;
+const SLAB_F_BY_DEPTH: ReadonlyArray<{ depthFt: number; f: readonly number[] }> = [
+  { depthFt: 0, f: [0.73, 0.73, 0.73, 0.73, 0.73, 0.73] },
+  { depthFt: 1, f: [0.73, 0.6, 0.56, 0.55, 0.54, 0.53] },
+  { depthFt: 2, f: [0.73, 0.58, 0.54, 0.52, 0.51, 0.5] },
+  { depthFt: 4, f: [0.73, 0.56, 0.5, 0.47, 0.45, 0.43] },
+  { depthFt: 6, f: [0.73, 0.55, 0.48, 0.45, 0.43, 0.41] },
+];
+
+function interp(xs: readonly number[], ys: readonly number[], x: number): number {
+  if (x <= xs[0]) return ys[0];
+  for (let i = 1; i < xs.length; i++) {
+    if (x <= xs[i]) {
+      const t = (x - xs[i - 1]) / (xs[i] - xs[i - 1]);
+      return ys[i - 1] + t * (ys[i] - ys[i - 1]);
+    }
+  }
+  return ys[ys.length - 1];
+}
+
+export function slabFFactor(edgeInsulationR: number, insulationDepthFt: number): number {
+  const depths = SLAB_F_BY_DEPTH.map((row) => row.depthFt);
+  const byDepth = SLAB_F_BY_DEPTH.map((row) => interp(SLAB_F_R, row.f, edgeInsulationR));
+  return interp(depths, byDepth, edgeInsulationR === 0 ? 0 : insulationDepthFt);
+}
+
+/**
+ * Below-grade concrete wall, Btu/h·ft²·°F to the ground temperature: inside film 0.68, 8 in
+ * concrete (C-factor 1.14 → R 0.88, 90.1 Appendix A, from memory), added continuous insulation,
+ * and an effective soil resistance of half the depth over soil conductivity 0.8 Btu/h·ft·°F
+ * (a rough simplification of HoF ch. 18's below-grade method, from memory).
+ */
+export function belowGradeWallU(insulationR: number, depthBelowGradeFt: number): number {
+  const soilR = (0.5 * depthBelowGradeFt) / 0.8;
+  return 1 / (FILM_R.insideVertical + 0.88 + insulationR + soilR);
+}
+
+/** Above-grade part of a concrete foundation wall, Btu/h·ft²·°F. */
+export function aboveGradeFoundationWallU(insulationR: number, season: Season = "heating"): number {
+  return 1 / (outsideFilm(season) + 0.88 + insulationR + FILM_R.insideVertical);
+}

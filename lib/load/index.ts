@@ -1,0 +1,9 @@
+/**
+ * Platload load engine: plain data in, plain data out (no React, database or Next.js imports).
+ * Results are design estimates; local codes and a licensed professional govern.
+ */
+export { ENGINE_VERSION, computeFacingLoads, computePlanFacings, prepareSite, preparePlan } from "./calculate";
+export type { ComputeOptions, PreparedPlan, PreparedSite } from "./calculate";
+export * from "./input";
+export * from "./errors";
+export * from "./results";

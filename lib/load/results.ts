@@ -1,0 +1,97 @@
+/** Result types of the load engine (plain data). */
+
+export const HEATING_COMPONENTS = [
+  "walls",
+  "windows",
+  "doors",
+  "ceilings",
+  "vaultedCeilings",
+  "skylights",
+  "floors",
+  "slab",
+  "foundationWalls",
+  "garageWall",
+  "infiltration",
+  "ventilation",
+  "ducts",
+] as const;
+export type HeatingComponent = (typeof HEATING_COMPONENTS)[number];
+
+export const COOLING_SENSIBLE_COMPONENTS = [...HEATING_COMPONENTS, "internal"] as const;
+export type CoolingSensibleComponent = (typeof COOLING_SENSIBLE_COMPONENTS)[number];
+
+export const COOLING_LATENT_COMPONENTS = ["infiltration", "ventilation", "internal", "ducts"] as const;
+export type CoolingLatentComponent = (typeof COOLING_LATENT_COMPONENTS)[number];
+
+export type ComponentLoads<K extends string> = Record<K, number>;
+
+export interface HeatingResult {
+  totalBtuh: number;
+  byComponent: ComponentLoads<HeatingComponent>;
+  outdoorF: number;
+  indoorF: number;
+  infiltrationCfm: number;
+  /** Temperatures used for buffer spaces, °F. */
+  atticF: number | null;
+  garageF: number;
+  basementF: number | null;
+}
+
+export interface CoolingResult {
+  sensibleBtuh: number;
+  latentBtuh: number;
+  totalBtuh: number;
+  /** Solar hour 1–24 of the peak total sensible load. */
+  peakHour: number;
+  sensibleByComponent: ComponentLoads<CoolingSensibleComponent>;
+  latentByComponent: ComponentLoads<CoolingLatentComponent>;
+  /** Window solar + conduction at the peak hour by facade, Btu/h. */
+  windowsByFacadeBtuh: { front: number; left: number; back: number; right: number };
+  /** Total sensible load for solar hours 1–24 (index 0 = hour 1), Btu/h. */
+  hourlySensibleBtuh: number[];
+  hourlyOutdoorF: number[];
+  outdoorF: number;
+  indoorF: number;
+  atticF: number | null;
+  infiltrationCfm: number;
+  /** Outdoor and indoor humidity ratios, grains per lb dry air. */
+  outdoorHumidityRatioGr: number;
+  indoorHumidityRatioGr: number;
+  sensibleHeatRatio: number;
+  /** Supply airflow, cfm = sensible / (1.10·(P/P0)·ΔT_supply). */
+  airflowCfm: number;
+  tons: number;
+  floorAreaPerTonFt2: number;
+}
+
+export interface FacingLoads {
+  engineVersion: string;
+  /** Azimuth the front facade faces, degrees clockwise from north. */
+  facingAzimuthDeg: number;
+  /** Azimuths of the four facades for this facing. */
+  facadeAzimuthsDeg: { front: number; left: number; back: number; right: number };
+  heating: HeatingResult;
+  cooling: CoolingResult;
+  ventilation: { requiredCfm: number; providedCfm: number; kind: string };
+  effectiveLeakageAreaIn2: number;
+  /** Assumptions and defaults applied, for display beside the result. */
+  notes: string[];
+  caution: string;
+}
+
+export const FACING_LABELS = ["N", "E", "S", "W"] as const;
+export type FacingLabel = (typeof FACING_LABELS)[number];
+
+export interface PlanFacings {
+  engineVersion: string;
+  /** Front to N, E, S, W (azimuth 0, 90, 180, 270). */
+  facings: Array<FacingLoads & { label: FacingLabel }>;
+  worst: { label: FacingLabel; facingAzimuthDeg: number; coolingTotalBtuh: number };
+  /** Max − min cooling total over the four facings, Btu/h. */
+  coolingSpreadBtuh: number;
+  caution: string;
+}
+
+export const DESIGN_ESTIMATE_CAUTION =
+  "Design estimate only, from an hourly method built on published ASHRAE equations. It is not the approved " +
+  "procedure of any standard or code. Local codes and a licensed professional's review govern equipment sizing.";
