@@ -1,0 +1,73 @@
+import { spawnSync } from "node:child_process";
+import { mkdtempSync, writeFileSync } from "node:fs";
+import { tmpdir } from "node:os";
+import path from "node:path";
+import { describe, expect, it } from "vitest";
+
+const root = path.resolve(__dirname, "../../..");
+
+function calc(...args: string[]): { status: number | null; stdout: string; stderr: string } {
+  const result = spawnSync("npx", ["tsx", "scripts/calc.ts", ...args], { cwd: root, encoding: "utf8", timeout: 120_000 });
+  return { status: result.status, stdout: result.stdout, stderr: result.stderr };
+}
+
+describe("npm run calc (scripts/calc.ts)", { timeout: 120_000 }, () => {
+  it("prints every plan and facing of the example library, the worst facing, the engine version and the caution", () => {
+    const { status, stdout, stderr } = calc("templates/example-plans.csv", "--site", "templates/example-site.json");
+    expect(stderr).toBe("");
+    expect(status).toBe(0);
+    for (const code of ["WF-1480", "WF-1860", "WF-2240", "WF-2650", "WF-3150"]) expect(stdout).toContain(code);
+    expect(stdout).toMatch(/Facing\s+Heating Btu\/h\s+Cool sens\. Btu\/h\s+Cool lat\. Btu\/h\s+Cool total Btu\/h\s+Tons\s+ft²\/ton/);
+    for (const facing of ["N", "E", "S", "W"]) {
+      // One aligned row per plan and facing: label then six numbers.
+      const rows = stdout.split("\n").filter((line) => new RegExp(`^\\s+front ${facing}(\\s+[\\d,.]+){6}\\s*$`).test(line));
+      expect(rows).toHaveLength(5);
+    }
+    expect(stdout.match(/Worst facing: front [NESW] \(cooling total [\d,]+ Btu\/h\); spread between facings [\d,]+ Btu\/h/g)).toHaveLength(5);
+    expect(stdout).toMatch(/Engine version \d+\.\d+\.\d+/);
+    expect(stdout).toMatch(/design estimates.*licensed professional govern/);
+  });
+
+  it("takes design conditions as flags and prints the full results with --json", () => {
+    const { status, stdout } = calc(
+      "templates/plan-library-template.csv",
+      "--heating-db", "24", "--cooling-db", "99", "--cooling-wb", "75", "--daily-range", "20", "--latitude", "32.9", "--elevation", "600", "--json",
+    );
+    expect(status).toBe(0);
+    const report = JSON.parse(stdout) as { engineVersion: string; caution: string; plans: { planCode: string; results: { facings: { label: string; heating: { totalBtuh: number }; cooling: { totalBtuh: number; hourlySensibleBtuh: number[] } }[] } }[] };
+    expect(report.caution).toMatch(/licensed professional/);
+    expect(report.plans.map((plan) => plan.planCode)).toEqual(["SAMPLE-1500"]);
+    const facings = report.plans[0].results.facings;
+    expect(facings.map((facing) => facing.label)).toEqual(["N", "E", "S", "W"]);
+    for (const facing of facings) {
+      expect(facing.heating.totalBtuh).toBeGreaterThan(0);
+      expect(facing.cooling.totalBtuh).toBeGreaterThan(0);
+      expect(facing.cooling.hourlySensibleBtuh).toHaveLength(24);
+    }
+  });
+
+  it("a bad plan file: every bad cell by row, column and reason, exit code 2, nothing printed on stdout", () => {
+    const { status, stdout, stderr } = calc("tests/fixtures/workbook/bad-plans.csv", "--site", "templates/example-site.json");
+    expect(status).toBe(2);
+    expect(stdout).toBe("");
+    expect(stderr).toContain('row 2, column "Conditioned floor area (ft²)": "fifteen hundred" is not a number');
+    expect(stderr).toContain('row 3, column "Back windows (ft²)": -95 is negative');
+    expect(stderr).toContain('row 4, column "Ceiling insulation R (added)": ft² is a unit of area; this column takes R-value');
+    expect(stderr).toContain('row 5, column "Plan code": plan code "WF-1480" is already used on row 2');
+  });
+
+  it("bad design conditions and bad JSON plans also exit 2 with the field and valid range", () => {
+    const badSite = calc("templates/example-plans.csv", "--heating-db", "24", "--cooling-db", "99", "--cooling-wb", "75", "--daily-range", "20", "--latitude", "95", "--elevation", "600");
+    expect(badSite.status).toBe(2);
+    expect(badSite.stderr).toMatch(/--latitude \/ latitudeDeg: 95 is out of range \(valid range -66 to 66 °\)/);
+    const dir = mkdtempSync(path.join(tmpdir(), "platload-calc-"));
+    const planFile = path.join(dir, "plans.json");
+    writeFileSync(planFile, JSON.stringify([{ conditionedFloorAreaFt2: 40, bedrooms: 2 }]));
+    const badPlan = calc(planFile, "--site", "templates/example-site.json");
+    expect(badPlan.status).toBe(2);
+    expect(badPlan.stderr).toMatch(/plan 1, field conditionedFloorAreaFt2: 40 is out of range \(valid range 100 to 50000 ft²\)/);
+    const noSite = calc("templates/example-plans.csv");
+    expect(noSite.status).toBe(2);
+    expect(noSite.stderr).toMatch(/design conditions are needed/);
+  });
+});
