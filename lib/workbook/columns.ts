@@ -171,7 +171,8 @@ export function readRowCells(
         continue;
       }
     } else if (text !== "") {
-      if (isFormula(text)) {
+      // Text columns keep a leading "=" as literal text (it is never evaluated, and exports escape it).
+      if (isFormula(text) && column.value.type !== "text") {
         errors.push({ key: column.key, reason: "a formula is only allowed in a number column" });
         continue;
       }
@@ -205,15 +206,23 @@ function checkFormulaResult(column: ColumnDef, value: number): { ok: true; value
  * Reads a whole table against a column list: unknown, duplicated and missing required
  * columns (reported on row 1), then every cell of every non-blank row.
  */
-export function readTable(table: RawTable, columns: readonly ColumnDef[]): ReadTableResult {
+export function readTable(
+  table: RawTable,
+  columns: readonly ColumnDef[],
+  options: { ignoredColumns?: readonly Pick<ColumnDef, "key" | "header">[] } = {},
+): ReadTableResult {
   const errors: TableCellError[] = [];
   const positions = new Map<string, number>();
+  const ignored = options.ignoredColumns ?? [];
   table.headers.forEach((headerText, index) => {
     if (headerText.trim() === "") {
       const columnHasData = table.rows.some((row) => (row.cells[index] ?? "").trim() !== "");
       if (columnHasData) errors.push({ row: 1, column: `(column ${index + 1})`, reason: "has data but no header" });
       return;
     }
+    // Output-only columns (computed results in an export) are recognised and skipped.
+    const wanted = normalizeHeader(headerText);
+    if (ignored.some((column) => normalizeHeader(column.header) === wanted || column.key === wanted)) return;
     const column = matchColumn(columns, headerText);
     if (!column) {
       errors.push({ row: 1, column: headerText, reason: "is not a known column; see templates/README.md for the column list" });

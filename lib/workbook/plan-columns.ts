@@ -29,6 +29,7 @@ import {
   type Facade,
   type PlanInput,
 } from "../load/input";
+import { FACING_LABELS, type FacingLabel, type PlanFacings } from "../load/results";
 import { readRowCells, readTable, type CellValue, type ColumnDef, type ColumnValueType, type RawTable, type TableCellError } from "./columns";
 import type { QuantityKind } from "./units";
 
@@ -451,7 +452,7 @@ export type PlanTableResult = { ok: true; plans: ValidPlanRow[] } | { ok: false;
  * engine's own checks mapped back to their column. A good table gives the plans.
  */
 export function validatePlanTable(table: RawTable): PlanTableResult {
-  const read = readTable(table, PLAN_COLUMNS);
+  const read = readTable(table, PLAN_COLUMNS, { ignoredColumns: PLAN_RESULT_COLUMNS });
   const errors: TableCellError[] = [...read.errors];
   const plans: ValidPlanRow[] = [];
   const firstRowOfCode = new Map<string, number>();
@@ -491,5 +492,65 @@ export function planRowsToTable(rows: readonly Readonly<Record<string, CellValue
         return value;
       }),
     ),
+  };
+}
+
+// ---------------------------------------------------------------------------------------------
+// Computed (output-only) columns: written by exports beside the inputs, skipped on import.
+
+/** A computed column: shown and exported, never read back. */
+export interface PlanResultColumnDef {
+  key: string;
+  header: string;
+  group: "Results";
+  unit: string;
+  meaning: string;
+}
+
+function facingResultColumns(label: FacingLabel): PlanResultColumnDef[] {
+  const facing = label.toLowerCase();
+  return [
+    { key: `heating_${facing}_btuh`, header: `Heating, front ${label} (Btu/h)`, group: "Results", unit: "Btu/h", meaning: `Heating load with the front facing ${label}.` },
+    { key: `cooling_total_${facing}_btuh`, header: `Cooling total, front ${label} (Btu/h)`, group: "Results", unit: "Btu/h", meaning: `Cooling total (sensible + latent) at the peak hour with the front facing ${label}.` },
+    { key: `tons_${facing}`, header: `Tons, front ${label}`, group: "Results", unit: "tons", meaning: `Cooling total ÷ 12,000 Btu/h with the front facing ${label}.` },
+  ];
+}
+
+export const PLAN_RESULT_COLUMNS: readonly PlanResultColumnDef[] = [
+  ...FACING_LABELS.flatMap(facingResultColumns),
+  { key: "worst_facing", header: "Worst facing", group: "Results", unit: "N, E, S or W", meaning: "The facing with the largest cooling total." },
+  { key: "cooling_spread_btuh", header: "Cooling spread between facings (Btu/h)", group: "Results", unit: "Btu/h", meaning: "Largest minus smallest cooling total over the four facings." },
+];
+
+/** The computed cells of one plan, by result column key (loads rounded to whole Btu/h, tons to 0.01). */
+export function planResultsToRow(results: PlanFacings): Record<string, number | string> {
+  const row: Record<string, number | string> = {};
+  for (const facing of results.facings) {
+    const label = facing.label.toLowerCase();
+    row[`heating_${label}_btuh`] = Math.round(facing.heating.totalBtuh);
+    row[`cooling_total_${label}_btuh`] = Math.round(facing.cooling.totalBtuh);
+    row[`tons_${label}`] = Math.round(facing.cooling.tons * 100) / 100;
+  }
+  row.worst_facing = results.worst.label;
+  row.cooling_spread_btuh = Math.round(results.coolingSpreadBtuh);
+  return row;
+}
+
+/**
+ * The plan library as an export table: the input columns, then (when any plan has results)
+ * the computed columns. Write it with writeCsv / writeXlsx, which escape formula-like text.
+ */
+export function planLibraryExportTable(
+  entries: readonly { cells: Readonly<Record<string, CellValue | null>>; results?: PlanFacings | null }[],
+): { headers: string[]; rows: (string | number | null)[][] } {
+  const inputs = planRowsToTable(entries.map((entry) => entry.cells));
+  if (!entries.some((entry) => entry.results)) return inputs;
+  return {
+    headers: [...inputs.headers, ...PLAN_RESULT_COLUMNS.map((column) => column.header)],
+    rows: inputs.rows.map((row, index) => {
+      const results = entries[index].results;
+      const computed = results ? planResultsToRow(results) : {};
+      return [...row, ...PLAN_RESULT_COLUMNS.map((column) => computed[column.key] ?? null)];
+    }),
   };
 }

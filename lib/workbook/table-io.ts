@@ -182,3 +182,38 @@ export function parsePastedBlock(text: string): string[][] {
   const parsed = Papa.parse<string[]>(trimmed, { delimiter: "\t", header: false, skipEmptyLines: false });
   return parsed.data;
 }
+
+/** One pasted cell placed on the grid: rows counted from the start row, columns by key. */
+export interface PastedCell {
+  rowOffset: number;
+  key: string;
+  text: string;
+}
+
+/**
+ * Places a parsed block onto the grid's visible column order, starting at `startKey`:
+ * the block's first column lands in `startKey`, the next in the column to its right, and so
+ * on. Cells that would fall past the last column are counted in `droppedCells`, never
+ * silently wrapped. Columns not in `editableKeys` (computed columns) are skipped and counted.
+ */
+export function placePastedBlock(
+  block: readonly (readonly string[])[],
+  visibleKeys: readonly string[],
+  startKey: string,
+  editableKeys: ReadonlySet<string> = new Set(visibleKeys),
+): { cells: PastedCell[]; droppedCells: number; readOnlyCells: number } {
+  const start = visibleKeys.indexOf(startKey);
+  if (start < 0) throw new TableFileError(`the paste starts in "${startKey}", which is not a column of the grid`);
+  const cells: PastedCell[] = [];
+  let droppedCells = 0;
+  let readOnlyCells = 0;
+  block.forEach((row, rowOffset) => {
+    row.forEach((text, columnOffset) => {
+      const key = visibleKeys[start + columnOffset];
+      if (key === undefined) droppedCells += 1;
+      else if (!editableKeys.has(key)) readOnlyCells += 1;
+      else cells.push({ rowOffset, key, text });
+    });
+  });
+  return { cells, droppedCells, readOnlyCells };
+}

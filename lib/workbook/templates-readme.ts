@@ -3,7 +3,7 @@
  * cannot drift from the columns the importer reads.
  */
 import { FORMULA_FUNCTIONS } from "./formula";
-import { PLAN_COLUMN_GROUPS, PLAN_COLUMNS, type PlanColumnDef } from "./plan-columns";
+import { PLAN_COLUMN_GROUPS, PLAN_COLUMNS, PLAN_RESULT_COLUMNS, type PlanColumnDef } from "./plan-columns";
 import { QUANTITY_KIND_INFO } from "./units";
 
 function unitOf(column: PlanColumnDef): string {
@@ -96,6 +96,15 @@ export function renderTemplatesReadme(): string {
     lines.push("");
   }
   lines.push(
+    "### Results (computed; written by exports, skipped on import)",
+    "",
+    "An export of the plan library may add these computed columns on the right. The importer recognises",
+    "them and ignores them, so an exported file can be edited and imported again.",
+    "",
+    "| key | header | unit | meaning |",
+    "|---|---|---|---|",
+    ...PLAN_RESULT_COLUMNS.map((column) => `| \`${column.key}\` | ${escapeCell(column.header)} | ${column.unit} | ${escapeCell(column.meaning)} |`),
+    "",
     "## Not in the table",
     "",
     "A plan given as JSON (the engine's plan input, see `lib/load/input.ts`) can hold more than one window",
