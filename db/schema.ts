@@ -119,7 +119,9 @@ export const planRevisions = mysqlTable(
     accountId: ref("account_id").notNull().references(() => accounts.id),
     planId: ref("plan_id").notNull().references(() => plans.id),
     number: int("number").notNull(),
-    /** The engine's PlanInput (lib/load/input.ts), as validated. */
+    /** The plan library row as entered, by column key (lib/workbook/plan-columns.ts): text, formulas kept. */
+    cells: json("cells"),
+    /** The engine's PlanInput (lib/load/input.ts) read from the cells, as validated. */
     input: json("input").notNull(),
     /** The engine's four-facing result for this input, or null when not yet computed. */
     results: json("results"),

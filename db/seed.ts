@@ -3,6 +3,7 @@
 import { eq } from "drizzle-orm";
 import { hashPassword } from "@/lib/auth/password";
 import { parsePlanInput, parseSiteConditions } from "@/lib/load/input";
+import { planInputToRow } from "@/lib/workbook/plan-columns";
 import type { Role } from "@/lib/auth/roles";
 import { createPool, databaseFor, type Database } from "./index";
 import { accounts, communities, equipmentSystems, lots, memberships, planRevisions, plans, users } from "./schema";
@@ -27,7 +28,8 @@ async function addMembers(tx: Tx, accountId: number, members: (DemoUser & { role
 async function addPlan(tx: Tx, accountId: number, createdByUserId: number, p: { planCode: string; name: string; input: unknown }): Promise<number> {
   const input = parsePlanInput(p.input);
   const [{ id: planId }] = await tx.insert(plans).values({ accountId, planCode: p.planCode, name: p.name }).$returningId();
-  const [{ id: revisionId }] = await tx.insert(planRevisions).values({ accountId, planId, number: 1, input, createdByUserId }).$returningId();
+  const cells = planInputToRow(input, p.planCode, p.name);
+  const [{ id: revisionId }] = await tx.insert(planRevisions).values({ accountId, planId, number: 1, cells, input, createdByUserId }).$returningId();
   await tx.update(plans).set({ currentRevisionId: revisionId }).where(eq(plans.id, planId));
   return planId;
 }

@@ -8,6 +8,7 @@ type Tx = Parameters<Parameters<Database["transaction"]>[0]>[0];
 export async function recordAudit(
   tx: Tx | Database,
   entry: { accountId: number; userId: number | null; action: string; entityType: string; entityId: number | null; summary: string; before?: unknown; after?: unknown },
-): Promise<void> {
-  await tx.insert(auditLog).values({ ...entry, before: entry.before ?? null, after: entry.after ?? null });
+): Promise<number> {
+  const [{ id }] = await tx.insert(auditLog).values({ ...entry, before: entry.before ?? null, after: entry.after ?? null }).$returningId();
+  return id;
 }

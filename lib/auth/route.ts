@@ -21,6 +21,9 @@ type Handler<P> = (ctx: RouteContext<P>) => Promise<unknown>;
 
 export function errorResponse(error: unknown): NextResponse {
   if (error instanceof AppError) return NextResponse.json(error.toBody(), { status: error.status });
+  if (error instanceof z.ZodError) {
+    return NextResponse.json(new AppError("invalid_input", "Some values in the request are not valid.", zodFieldErrors(error)).toBody(), { status: 400 });
+  }
   console.error(error);
   return NextResponse.json({ error: { code: "server_error", message: "Something went wrong on the server; nothing was saved." } }, { status: 500 });
 }

@@ -1,4 +1,15 @@
-import { listPlans } from "@/db/queries/records";
-import { apiRoute } from "@/lib/auth/route";
+import { applyPlanEdits, listPlanLibrary } from "@/db/queries/plans";
+import { apiRoute, parseJsonBody } from "@/lib/auth/route";
+import { libraryQuerySchema, planEditSchema } from "./schema";
 
-export const GET = apiRoute({ permission: "read" }, async ({ db, member }) => ({ plans: await listPlans({ db, accountId: member.accountId }) }));
+/** The plan library with each model's four-facing loads for the chosen community's design conditions. */
+export const GET = apiRoute({ permission: "read" }, async ({ db, member, request }) => {
+  const { communityId } = libraryQuerySchema.parse(Object.fromEntries(request.nextUrl.searchParams));
+  return listPlanLibrary({ db, accountId: member.accountId, communityId });
+});
+
+/** Saves cell edits of one or many models (an edit, a bulk set, a paste) in one transaction. */
+export const PATCH = apiRoute({ permission: "plans.edit" }, async ({ db, member, request }) => {
+  const { action, changes } = await parseJsonBody(request, planEditSchema);
+  return applyPlanEdits({ db, accountId: member.accountId, userId: member.userId, changes, action });
+});
