@@ -140,10 +140,17 @@ function siteKey(site: SiteConditions): string {
   ].join("|");
 }
 
+const siteByIdentity = new WeakMap<SiteConditions, PreparedSite>();
+
 export function prepareSite(site: SiteConditions): PreparedSite {
+  const byIdentity = siteByIdentity.get(site);
+  if (byIdentity) return byIdentity;
   const key = siteKey(site);
   const cached = siteCache.get(key);
-  if (cached) return cached;
+  if (cached) {
+    siteByIdentity.set(site, cached);
+    return cached;
+  }
   const notes: string[] = [];
   const tauBeam = site.tauBeam ?? DEFAULT_TAU_BEAM;
   const tauDiffuse = site.tauDiffuse ?? DEFAULT_TAU_DIFFUSE;
@@ -183,6 +190,7 @@ export function prepareSite(site: SiteConditions): PreparedSite {
   };
   if (siteCache.size >= SITE_CACHE_LIMIT) siteCache.clear();
   siteCache.set(key, prepared);
+  siteByIdentity.set(site, prepared);
   return prepared;
 }
 
@@ -565,7 +573,19 @@ function wrapDuctError<T>(fn: () => T): T {
 }
 
 // ---------------------------------------------------------------------------------------------
-// The facing-dependent cooling day.
+// The facing-dependent cooling day (the hot path: keep it allocation-light; imported constants
+// are copied to locals because transpiled ES-module bindings are read through getters).
+
+const W_M2_TO_BTUH_FT2 = BTUH_FT2_PER_W_M2;
+const DIFFUSE_RATIO = DIFFUSE_SHGC_RATIO;
+const shgcRatio = shgcAngleRatio;
+const sunlitFraction = overhangSunlitFraction;
+const solAir = solAirTemperatureF;
+const atticAir = atticAirTemperatureF;
+const ductLoadOf = ductLoad;
+const FACADE_LIST: readonly Facade[] = FACADES;
+const SENSIBLE_KEYS: readonly CoolingSensibleComponent[] = COOLING_SENSIBLE_COMPONENTS;
+const LATENT_KEYS: readonly CoolingLatentComponent[] = COOLING_LATENT_COMPONENTS;
 
 function normalizeAzimuth(deg: number): number {
   return ((deg % 360) + 360) % 360;
@@ -579,143 +599,160 @@ function coolingDay(p: PreparedPlan, facingAzimuthDeg: number): CoolingResult {
   const tic = site.site.indoorCoolingF;
   const toArr = site.outdoorF;
 
-  const hourly: Record<CoolingSensibleComponent, Float64Array> = {} as Record<CoolingSensibleComponent, Float64Array>;
-  for (const c of COOLING_SENSIBLE_COMPONENTS) hourly[c] = new Float64Array(24);
-  const windowsByFacade = { front: new Float64Array(24), left: new Float64Array(24), back: new Float64Array(24), right: new Float64Array(24) };
+  const walls = new Float64Array(24);
+  const windows = new Float64Array(24);
+  const doors = new Float64Array(24);
+  const ceilings = new Float64Array(24);
+  const vaulted = new Float64Array(24);
+  const skylights = new Float64Array(24);
+  const ducts = new Float64Array(24);
+  const ductLatent = new Float64Array(24);
+  const rooms = new Float64Array(24);
+  const total = new Float64Array(24);
   const te = new Float64Array(24);
+  const windowsByFacade = [new Float64Array(24), new Float64Array(24), new Float64Array(24), new Float64Array(24)];
+  const fixed = p.hourlyFixed;
 
   // Walls, doors, windows per facade.
-  for (const fc of p.facades) {
+  for (let fi = 0; fi < p.facades.length; fi++) {
+    const fc = p.facades[fi];
     const profile: SurfaceProfile = solar.surface(facingAzimuthDeg + FACADE_OFFSET_DEG[fc.facade], 90);
+    const totalWm2 = profile.totalWm2;
     let teMean = 0;
     for (let h = 0; h < 24; h++) {
-      te[h] = solAirTemperatureF(toArr[h], p.wallAbsorptance, profile.totalWm2[h] * BTUH_FT2_PER_W_M2, 90);
-      teMean += te[h] / 24;
+      te[h] = solAir(toArr[h], p.wallAbsorptance, totalWm2[h] * W_M2_TO_BTUH_FT2, 90);
+      teMean += te[h];
     }
+    teMean /= 24;
+    const byFacade = windowsByFacade[fi];
+    const ws = fc.windows;
     for (let h = 0; h < 24; h++) {
       const lagged = te[(h - fc.wallLagH + 24) % 24];
-      hourly.walls[h] += fc.wallUaCool * (teMean - tic + fc.wallDecrement * (lagged - teMean));
-      hourly.doors[h] += fc.doorUaCool * (te[h] - tic);
+      walls[h] += fc.wallUaCool * (teMean - tic + fc.wallDecrement * (lagged - teMean));
+      doors[h] += fc.doorUaCool * (te[h] - tic);
+      if (ws.length === 0) continue;
+      const beamBase = profile.beamWm2[h] * W_M2_TO_BTUH_FT2 * shgcRatio(profile.incidenceDeg[h]);
+      const diffuse = profile.diffuseAndReflectedWm2[h] * W_M2_TO_BTUH_FT2 * DIFFUSE_RATIO;
+      const tanOmega = profile.tanProfileAngle[h];
       let win = 0;
-      for (const w of fc.windows) {
-        const sunlit = overhangSunlitFraction(w.overhangDepthFt, w.overhangHeightAboveHeadFt, w.windowHeightFt, profile.tanProfileAngle[h]);
-        const beam = profile.beamWm2[h] * BTUH_FT2_PER_W_M2 * shgcAngleRatio(profile.incidenceDeg[h]) * sunlit;
-        const diffuse = profile.diffuseAndReflectedWm2[h] * BTUH_FT2_PER_W_M2 * DIFFUSE_SHGC_RATIO;
-        win += w.uaCool * (toArr[h] - tic) + w.areaFt2 * w.iac * w.shgc * (beam + diffuse);
+      for (let wi = 0; wi < ws.length; wi++) {
+        const w = ws[wi];
+        const sunlit = sunlitFraction(w.overhangDepthFt, w.overhangHeightAboveHeadFt, w.windowHeightFt, tanOmega);
+        win += w.uaCool * (toArr[h] - tic) + w.areaFt2 * w.iac * w.shgc * (beamBase * sunlit + diffuse);
       }
-      hourly.windows[h] += win;
-      windowsByFacade[fc.facade][h] += win;
+      windows[h] += win;
+      byFacade[h] += win;
     }
   }
 
   // Roof planes: a hip roof with one plane toward each facade (equal areas) — average irradiance.
   const roofIrr = new Float64Array(24);
-  if (p.attic.kind !== "none" || p.vaulted.uaCool > 0) {
-    for (const facade of FACADES) {
-      const prof = solar.surface(facingAzimuthDeg + FACADE_OFFSET_DEG[facade], p.roofTiltDeg);
-      for (let h = 0; h < 24; h++) roofIrr[h] += (prof.totalWm2[h] * BTUH_FT2_PER_W_M2) / 4;
+  const hasAttic = p.attic.kind !== "none";
+  if (hasAttic || p.vaulted.uaCool > 0) {
+    for (let k = 0; k < 4; k++) {
+      const prof = solar.surface(facingAzimuthDeg + FACADE_OFFSET_DEG[FACADE_LIST[k]], p.roofTiltDeg);
+      for (let h = 0; h < 24; h++) roofIrr[h] += prof.totalWm2[h] * W_M2_TO_BTUH_FT2 * 0.25;
     }
   }
   const atticF = new Float64Array(24);
+  const at = p.attic;
   for (let h = 0; h < 24; h++) {
-    if (p.attic.kind === "none") {
+    if (!hasAttic) {
       atticF[h] = toArr[h];
       continue;
     }
-    const solAir = solAirTemperatureF(toArr[h], p.attic.absorptance, roofIrr[h], p.roofTiltDeg);
-    atticF[h] = atticAirTemperatureF({
-      roofUA: p.attic.roofUaCool,
-      solAirF: solAir,
-      ceilingUA: p.attic.ceilingUaCool,
+    atticF[h] = atticAir({
+      roofUA: at.roofUaCool,
+      solAirF: solAir(toArr[h], at.absorptance, roofIrr[h], p.roofTiltDeg),
+      ceilingUA: at.ceilingUaCool,
       roomF: tic,
-      ventilationConductanceBtuhF: p.attic.ventilationConductance,
+      ventilationConductanceBtuhF: at.ventilationConductance,
       outdoorF: toArr[h],
     });
-    hourly.ceilings[h] = p.attic.ceilingUaCool * (atticF[h] - tic);
+    ceilings[h] = at.ceilingUaCool * (atticF[h] - tic);
   }
   if (p.vaulted.uaCool > 0) {
     let mean = 0;
     for (let h = 0; h < 24; h++) {
-      te[h] = solAirTemperatureF(toArr[h], p.vaulted.absorptance, roofIrr[h], p.roofTiltDeg);
+      te[h] = solAir(toArr[h], p.vaulted.absorptance, roofIrr[h], p.roofTiltDeg);
       mean += te[h] / 24;
     }
     for (let h = 0; h < 24; h++) {
       const lagged = te[(h - VAULTED_RESPONSE.lagH + 24) % 24];
-      hourly.vaultedCeilings[h] = p.vaulted.uaCool * (mean - tic + VAULTED_RESPONSE.decrement * (lagged - mean));
+      vaulted[h] = p.vaulted.uaCool * (mean - tic + VAULTED_RESPONSE.decrement * (lagged - mean));
     }
   }
-  if (p.skylight.areaFt2 > 0) {
-    const prof = solar.surface(facingAzimuthDeg + FACADE_OFFSET_DEG[p.skylight.facade], p.skylight.tiltDeg);
+  const sk = p.skylight;
+  if (sk.areaFt2 > 0) {
+    const prof = solar.surface(facingAzimuthDeg + FACADE_OFFSET_DEG[sk.facade], sk.tiltDeg);
     for (let h = 0; h < 24; h++) {
-      const beam = prof.beamWm2[h] * BTUH_FT2_PER_W_M2 * shgcAngleRatio(prof.incidenceDeg[h]);
-      const diffuse = prof.diffuseAndReflectedWm2[h] * BTUH_FT2_PER_W_M2 * DIFFUSE_SHGC_RATIO;
-      hourly.skylights[h] =
-        p.skylight.uaCool * (toArr[h] - tic) + p.skylight.areaFt2 * p.skylight.iac * p.skylight.shgc * (beam + diffuse);
+      const beam = prof.beamWm2[h] * W_M2_TO_BTUH_FT2 * shgcRatio(prof.incidenceDeg[h]);
+      const diffuse = prof.diffuseAndReflectedWm2[h] * W_M2_TO_BTUH_FT2 * DIFFUSE_RATIO;
+      skylights[h] = sk.uaCool * (toArr[h] - tic) + sk.areaFt2 * sk.iac * sk.shgc * (beam + diffuse);
     }
-  }
-  for (let h = 0; h < 24; h++) {
-    hourly.floors[h] = p.hourlyFixed.floors[h];
-    hourly.foundationWalls[h] = p.hourlyFixed.foundationWalls[h];
-    hourly.garageWall[h] = p.hourlyFixed.garageWall[h];
-    hourly.infiltration[h] = p.hourlyFixed.infiltration[h];
-    hourly.ventilation[h] = p.hourlyFixed.ventilation[h];
-    hourly.internal[h] = p.hourlyFixed.internal;
   }
 
-  // Ducts, hour by hour, on the room load.
-  const deltaGrZone = (zone: ZoneKind): number => {
-    if (zone === "attic" && p.attic.kind === "encapsulated") return 0;
-    return zone === "basement" || zone === "indoor" ? 0 : site.latentDeltaGr;
-  };
-  const zoneF = (zone: ZoneKind, h: number): number => {
-    switch (zone) {
-      case "attic":
-        return atticF[h];
-      case "crawl":
-        return site.dailyMeanOutdoorF;
-      case "garage":
-        return p.garageCoolingF[h];
-      case "basement":
-      case "indoor":
-        return tic;
-      default:
-        return toArr[h];
-    }
-  };
+  // Ducts, hour by hour, on the room load (the system is taken as off in hours with no cooling need).
+  const zone = p.ductZone;
+  const latentPerCfm =
+    site.latentFactor *
+    (zone === "basement" || zone === "indoor" || (zone === "attic" && at.kind === "encapsulated") ? 0 : site.latentDeltaGr);
   const supplyDeltaF = p.plan.coolingSupplyDeltaF;
-  const latentPerCfm = site.latentFactor * deltaGrZone(p.ductZone);
-  const ductLatent = new Float64Array(24);
-  const total = new Float64Array(24);
-  for (let h = 0; h < 24; h++) {
-    let rooms = 0;
-    for (const c of COOLING_SENSIBLE_COMPONENTS) if (c !== "ducts") rooms += hourly[c][h];
-    if (rooms > 0) {
-      const d = wrapDuctError(() =>
-        ductLoad(p.ducts, rooms, "cooling", zoneF(p.ductZone, h), tic, supplyDeltaF, site.sensibleFactor, latentPerCfm),
-      );
-      hourly.ducts[h] = d.sensibleBtuh;
-      ductLatent[h] = d.latentBtuh;
-    }
-    total[h] = rooms + hourly.ducts[h];
-  }
   let peak = 0;
-  for (let h = 1; h < 24; h++) if (total[h] > total[peak]) peak = h;
+  try {
+    for (let h = 0; h < 24; h++) {
+      rooms[h] =
+        walls[h] + windows[h] + doors[h] + ceilings[h] + vaulted[h] + skylights[h] + fixed.floors[h] +
+        fixed.foundationWalls[h] + fixed.garageWall[h] + fixed.infiltration[h] + fixed.ventilation[h] + fixed.internal;
+      if (rooms[h] > 0 && p.ducts.outsideEnvelope) {
+        const zoneF =
+          zone === "attic" ? atticF[h] : zone === "crawl" ? site.dailyMeanOutdoorF : zone === "garage" ? p.garageCoolingF[h] : tic;
+        const d = ductLoadOf(p.ducts, rooms[h], "cooling", zoneF, tic, supplyDeltaF, site.sensibleFactor, latentPerCfm);
+        ducts[h] = d.sensibleBtuh;
+        ductLatent[h] = d.latentBtuh;
+      }
+      total[h] = rooms[h] + ducts[h];
+      if (total[h] > total[peak]) peak = h;
+    }
+  } catch (error) {
+    if (error instanceof RangeError) {
+      throw new LoadInputError("ducts.supplyLeakagePct", error.message, { min: 0, max: 50, unit: "%" });
+    }
+    throw error;
+  }
 
-  const sensibleByComponent = {} as ComponentLoads<CoolingSensibleComponent>;
-  for (const c of COOLING_SENSIBLE_COMPONENTS) sensibleByComponent[c] = hourly[c][peak];
-  const sensibleBtuh = sum(COOLING_SENSIBLE_COMPONENTS.map((c) => sensibleByComponent[c]));
+  const sensibleByComponent: ComponentLoads<CoolingSensibleComponent> = {
+    walls: walls[peak],
+    windows: windows[peak],
+    doors: doors[peak],
+    ceilings: ceilings[peak],
+    vaultedCeilings: vaulted[peak],
+    skylights: skylights[peak],
+    floors: fixed.floors[peak],
+    slab: 0, // slabs are taken as no cooling gain (ground below the room temperature)
+    foundationWalls: fixed.foundationWalls[peak],
+    garageWall: fixed.garageWall[peak],
+    infiltration: fixed.infiltration[peak],
+    ventilation: fixed.ventilation[peak],
+    ducts: ducts[peak],
+    internal: fixed.internal,
+  };
+  let sensibleBtuh = 0;
+  for (let k = 0; k < SENSIBLE_KEYS.length; k++) sensibleBtuh += sensibleByComponent[SENSIBLE_KEYS[k]];
 
   const infCfm = p.infiltrationCfmHourly[peak];
-  const v = p.plan.ventilation;
   const unbalancedVentCfm =
-    v.kind === "balanced" ? 0 : Math.sqrt(infCfm * infCfm + p.ventilationProvidedCfm * p.ventilationProvidedCfm) - infCfm;
+    p.plan.ventilation.kind === "balanced"
+      ? 0
+      : Math.sqrt(infCfm * infCfm + p.ventilationProvidedCfm * p.ventilationProvidedCfm) - infCfm;
   const latentByComponent: ComponentLoads<CoolingLatentComponent> = {
     infiltration: site.latentFactor * infCfm * site.latentDeltaGr,
     ventilation: p.latentFixedBtuh.ventilation + site.latentFactor * unbalancedVentCfm * site.latentDeltaGr,
     internal: p.latentFixedBtuh.internal,
     ducts: ductLatent[peak],
   };
-  const latentBtuh = sum(COOLING_LATENT_COMPONENTS.map((c) => latentByComponent[c]));
+  let latentBtuh = 0;
+  for (let k = 0; k < LATENT_KEYS.length; k++) latentBtuh += latentByComponent[LATENT_KEYS[k]];
   const totalBtuh = sensibleBtuh + latentBtuh;
   const tons = totalBtuh / BTUH_PER_TON;
   return {
@@ -726,16 +763,16 @@ function coolingDay(p: PreparedPlan, facingAzimuthDeg: number): CoolingResult {
     sensibleByComponent,
     latentByComponent,
     windowsByFacadeBtuh: {
-      front: windowsByFacade.front[peak],
-      left: windowsByFacade.left[peak],
-      back: windowsByFacade.back[peak],
-      right: windowsByFacade.right[peak],
+      front: windowsByFacade[0][peak],
+      left: windowsByFacade[1][peak],
+      back: windowsByFacade[2][peak],
+      right: windowsByFacade[3][peak],
     },
     hourlySensibleBtuh: Array.from(total),
     hourlyOutdoorF: Array.from(toArr),
     outdoorF: toArr[peak],
     indoorF: tic,
-    atticF: p.attic.kind === "none" ? null : atticF[peak],
+    atticF: hasAttic ? atticF[peak] : null,
     infiltrationCfm: infCfm,
     outdoorHumidityRatioGr: site.outdoorHumidityRatioGr,
     indoorHumidityRatioGr: site.indoorHumidityRatioGr,

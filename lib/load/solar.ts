@@ -183,7 +183,7 @@ export interface SurfaceProfile {
 
 export class SiteSolarDay {
   readonly hours: SolarHour[];
-  private readonly profiles = new Map<string, SurfaceProfile>();
+  private readonly profiles = new Map<number, SurfaceProfile>();
 
   constructor(
     readonly latitudeDeg: number,
@@ -202,7 +202,8 @@ export class SiteSolarDay {
   /** The 24-hour irradiance on a surface of the given azimuth and tilt (cached). */
   surface(azimuthDeg: number, tiltDeg: number): SurfaceProfile {
     const az = ((azimuthDeg % 360) + 360) % 360;
-    const key = `${az.toFixed(3)}|${tiltDeg.toFixed(3)}`;
+    // Numeric key to 0.001° in azimuth and 0.01° in tilt.
+    const key = Math.round(az * 1000) * 100_000 + Math.round(tiltDeg * 100);
     const cached = this.profiles.get(key);
     if (cached) return cached;
     const beamWm2 = new Float64Array(24);
