@@ -234,6 +234,15 @@ export function readTable(
     }
     positions.set(column.key, index);
   });
+  const overflowColumns = new Set<number>();
+  for (const row of table.rows) {
+    for (let index = table.headers.length; index < row.cells.length; index += 1) {
+      if ((row.cells[index] ?? "").trim() !== "") overflowColumns.add(index);
+    }
+  }
+  for (const index of [...overflowColumns].sort((a, b) => a - b)) {
+    errors.push({ row: 1, column: `(column ${index + 1})`, reason: "has data but no header" });
+  }
   for (const column of columns) {
     if (column.required && !positions.has(column.key)) {
       errors.push({ row: 1, column: column.header, reason: "is a required column and is missing" });

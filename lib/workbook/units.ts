@@ -191,6 +191,9 @@ const FEET_INCHES_PATTERN = /^(\d+(?:\.\d+)?)\s*(?:'|ft|′)\s*(\d+(?:\.\d+)?)\s
 export function readQuantity(text: string, kind: QuantityKind): UnitReadResult {
   const raw = text.trim().replace(/\u2212/g, "-"); // U+2212 minus sign, as pasted from documents
   if (raw === "") return { ok: false, reason: "is blank" };
+  if (/^\d{4}-\d{2}-\d{2}(?:T[\d:.]+Z?)?$/.test(raw)) {
+    return { ok: false, reason: `"${raw}" is a date: the spreadsheet program may have turned an entry such as 6/12 into a date; format the cell as text or enter a plain number` };
+  }
 
   if (kind === "lengthFt") {
     const feetInches = FEET_INCHES_PATTERN.exec(raw);

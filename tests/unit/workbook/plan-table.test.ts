@@ -85,6 +85,13 @@ describe("validating a plan-library table", () => {
     expect(errors.every((error) => error.row === 2)).toBe(true);
   });
 
+  it("reports data in a column that has no header", () => {
+    const lines = exampleCsv.split("\r\n");
+    lines[3] += ",stray note";
+    const headerCount = readCsv(exampleCsv).headers.length;
+    expect(errorsOf(validatePlanTable(readCsv(lines.join("\r\n"))))).toEqual([{ row: 1, column: `(column ${headerCount + 1})`, reason: "has data but no header" }]);
+  });
+
   it("reports a duplicated plan code on the later row, naming the first", () => {
     const table = exampleTable();
     setCell(table, 3, "plan_code", "wf-1480");

@@ -68,6 +68,7 @@ const REJECTED: [string, QuantityKind, RegExp][] = [
   ["70", "fraction", /above 1.*70%/],
   ["3.5", "count", /whole number/],
   ["", "areaFt2", /blank/],
+  ["2026-06-12", "pitchIn12", /is a date/],
 ];
 
 describe("reading typed cells with units", () => {
