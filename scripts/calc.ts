@@ -240,6 +240,9 @@ function printTable(plans: readonly NamedPlan[], results: readonly ReturnType<ty
       `  Worst facing: front ${result.worst.label} (cooling total ${integer.format(result.worst.coolingTotalBtuh)} Btu/h); ` +
         `spread between facings ${integer.format(result.coolingSpreadBtuh)} Btu/h (${oneDecimal.format(spreadPct)} % of the worst)`,
     );
+    // The engine's notes on assumed defaults, once per plan.
+    const assumptions = [...new Set(result.facings.flatMap((facing) => facing.notes))];
+    for (const note of assumptions) out.push(`  Assumed: ${note}`);
     out.push("");
   });
   out.push(`Engine version ${ENGINE_VERSION}`);
