@@ -555,11 +555,16 @@ export type SiteConditions = z.output<typeof siteConditionsSchema>;
 // ---------------------------------------------------------------------------------------------
 // Parsing: zod issues → LoadInputError naming field and valid range.
 
+/** Our numeric fields write "(valid range MIN to MAX UNIT)" in every message (see `rangeText`). */
+const RANGE_IN_MESSAGE = /valid range (-?[\d.]+) to (-?[\d.]+)(?: ([^)]+))?\)/;
+
 function issueRange(issue: z.core.$ZodIssue): ValidRange | undefined {
   if (issue.code === "custom") {
     const params = issue.params as { range?: ValidRange } | undefined;
-    return params?.range;
+    if (params?.range) return params.range;
   }
+  const m = RANGE_IN_MESSAGE.exec(issue.message);
+  if (m) return { min: Number(m[1]), max: Number(m[2]), unit: m[3] };
   if (issue.code === "too_small") return { min: Number(issue.minimum) };
   if (issue.code === "too_big") return { max: Number(issue.maximum) };
   return undefined;

@@ -1,0 +1,112 @@
+/**
+ * Every row of ENGINE.md's check table, with its source beside it (rows and tolerances in
+ * tests/fixtures/engine/reference-checks.ts), plus the solar-altitude check against suncalc.
+ */
+import SunCalc from "suncalc";
+import { describe, expect, it } from "vitest";
+import { ceilingU, wallU } from "../../../lib/load/assemblies";
+import { computeFacingLoads } from "../../../lib/load";
+import { ashrae622VentilationCfm, lblInfiltrationLps } from "../../../lib/load/infiltration";
+import { defaultInternalSensibleW, occupantsOf } from "../../../lib/load/internal-gains";
+import { humidityRatioGrFromRelHum, humidityRatioGrFromWetBulb, SEA_LEVEL_PRESSURE_PSIA } from "../../../lib/load/psychrometrics";
+import {
+  apparentSolarTimeHours,
+  clearSkyIrradiance,
+  designDayOfYear,
+  sunPosition,
+  surfaceIrradiance,
+} from "../../../lib/load/solar";
+import { BTUH_PER_TON } from "../../../lib/load/units";
+import { REFERENCE_CHECKS } from "../../fixtures/engine/reference-checks";
+import { symmetricPlan, withinTolerance } from "./helpers";
+
+// Atlanta example of HoF 2021 ch. 14: 33.64° N, 84.43° W, Eastern time (meridian 75° W), July 21.
+const ATLANTA = { latitudeDeg: 33.64, longitudeDeg: -84.43, standardMeridianDeg: -75, tauBeam: 0.515, tauDiffuse: 2.066 };
+const JULY_21 = designDayOfYear(7);
+
+function atlantaNoon() {
+  const sun = sunPosition(ATLANTA.latitudeDeg, JULY_21, 12);
+  return clearSkyIrradiance(JULY_21, sun.altitudeDeg, ATLANTA.tauBeam, ATLANTA.tauDiffuse);
+}
+
+function atlanta3pmVertical60WofS() {
+  // 3:00 pm daylight time = 2:00 pm standard time → apparent solar time (HoF ch. 14 eq. 7).
+  const ast = apparentSolarTimeHours(14, ATLANTA.longitudeDeg, ATLANTA.standardMeridianDeg, JULY_21);
+  const sun = sunPosition(ATLANTA.latitudeDeg, JULY_21, ast);
+  const sky = clearSkyIrradiance(JULY_21, sun.altitudeDeg, ATLANTA.tauBeam, ATLANTA.tauDiffuse);
+  // 60° west of south = azimuth 240° clockwise from north.
+  return surfaceIrradiance(sky, sun, 240, 90, 0.2);
+}
+
+/** The engine's value for each reference row. */
+const ACTUAL: Record<string, () => number> = {
+  "humidity-ratio-95-75": () => humidityRatioGrFromWetBulb(95, 75, SEA_LEVEL_PRESSURE_PSIA),
+  "humidity-ratio-75-50": () => humidityRatioGrFromRelHum(75, 50, SEA_LEVEL_PRESSURE_PSIA),
+  "beam-normal-atlanta-noon": () => atlantaNoon().beamNormalWm2,
+  "diffuse-atlanta-noon": () => atlantaNoon().diffuseHorizontalWm2,
+  "vertical-beam-60w-3pm": () => atlanta3pmVertical60WofS().beamWm2,
+  "vertical-diffuse-60w-3pm": () => atlanta3pmVertical60WofS().diffuseWm2,
+  "vertical-reflected-60w-3pm": () => atlanta3pmVertical60WofS().reflectedWm2,
+  "wall-u-r11": () => wallU({ baseId: "wood-2x4-16in-oc", cavityR: 11, continuousR: 0 }),
+  "wall-u-r13": () => wallU({ baseId: "wood-2x4-16in-oc", cavityR: 13, continuousR: 0 }),
+  "wall-u-r15": () => wallU({ baseId: "wood-2x4-16in-oc", cavityR: 15, continuousR: 0 }),
+  "ceiling-u-r38": () => ceilingU({ baseId: "attic-joists-24in-oc", cavityR: 38, continuousR: 0 }),
+  "ceiling-u-r49": () => ceilingU({ baseId: "attic-joists-24in-oc", cavityR: 49, continuousR: 0 }),
+  // HoF eq. 48 in SI with Cs (2 stories) 0.000290 and Cw (2 stories, class 3) 0.000231: L/s → m³/s.
+  "lbl-example-2": () => lblInfiltrationLps(500, 0.00029, 39, 0.000231, 6.7) / 1000,
+  "ventilation-622": () => ashrae622VentilationCfm(2000, 3),
+  "internal-sensible-example": () => defaultInternalSensibleW(195.3, 4),
+  "vented-attic-peak": () => {
+    const site = {
+      latitudeDeg: 33.6,
+      longitudeDeg: -84.4,
+      elevationFt: 0,
+      heatingOutdoorDbF: 25,
+      coolingOutdoorDbF: 95,
+      coolingOutdoorWbF: 75,
+      dailyRangeF: 20,
+      tauBeam: 0.515,
+      tauDiffuse: 2.066,
+    };
+    const plan = symmetricPlan({ attic: { kind: "vented", roofSolarAbsorptance: 0.9, ceiling: { cavityR: 38 } } });
+    const atticF = computeFacingLoads(plan, site, 180).cooling.atticF;
+    if (atticF === null) throw new Error("no attic temperature");
+    return atticF;
+  },
+  ton: () => BTUH_PER_TON,
+  "occupants-default": () => occupantsOf({ bedrooms: 3 }),
+};
+
+describe("reference checks (ENGINE.md table)", () => {
+  it.each(REFERENCE_CHECKS.map((row) => [row.id, row] as const))("%s", (_id, row) => {
+    const actual = ACTUAL[row.id]();
+    const tol = row.tolerance.relative !== undefined ? `±${row.tolerance.relative * 100} %` : `±${row.tolerance.absolute} ${row.unit}`;
+    expect(
+      withinTolerance(actual, row.expected, row.tolerance),
+      `${row.check}: engine ${actual.toPrecision(6)} ${row.unit}, expected ${row.expected} ${tol} (${row.source})`,
+    ).toBe(true);
+  });
+
+  it("covers every row of the table", () => {
+    for (const row of REFERENCE_CHECKS) expect(ACTUAL[row.id], row.id).toBeTypeOf("function");
+  });
+});
+
+describe("solar altitude against suncalc (npm), July 21, 30° N", () => {
+  // suncalc: solar noon and the sun's altitude (no refraction) at a longitude of 0°.
+  const date = new Date(Date.UTC(2026, 6, 21, 12));
+  const times = SunCalc.getTimes(date, 30, 0);
+  const toDeg = (rad: number) => (rad * 180) / Math.PI;
+  it("solar noon, within 0.3°", () => {
+    const reference = toDeg(SunCalc.getPosition(times.solarNoon, 30, 0).altitude);
+    expect(Math.abs(sunPosition(30, JULY_21, 12).altitudeDeg - reference)).toBeLessThan(0.3);
+  });
+  it("3 h after solar noon, within 0.3°, sun in the west", () => {
+    const threeHoursLater = new Date(times.solarNoon.getTime() + 3 * 3600 * 1000);
+    const reference = SunCalc.getPosition(threeHoursLater, 30, 0);
+    const ours = sunPosition(30, JULY_21, 15);
+    expect(Math.abs(ours.altitudeDeg - toDeg(reference.altitude))).toBeLessThan(0.3);
+    // suncalc azimuth is measured from south, positive west; ours clockwise from north.
+    expect(Math.abs(ours.azimuthDeg - (180 + toDeg(reference.azimuth)))).toBeLessThan(1);
+  });
+});
