@@ -254,6 +254,8 @@ export interface PreparedPlan {
   garageCoolingF: Float64Array;
   ducts: DuctGeometry;
   ductZone: ZoneKind;
+  /** Share of the duct gain that reaches the rooms (below 1 only for ducts in an encapsulated attic). */
+  ductLossFractionCool: number;
   notes: string[];
 }
 
@@ -483,9 +485,18 @@ export function preparePlan(plan: PlanInput, site: PreparedSite): PreparedPlan {
     indoor: ti,
   };
   const envelopeHeatBtuh = sum(HEATING_COMPONENTS.filter((c) => c !== "ducts").map((c) => heating[c]));
-  heating.ducts = wrapDuctError(() =>
-    ductLoad(ducts, envelopeHeatBtuh, "heating", heatingZoneF[ductZone], ti, HEATING_SUPPLY_DELTA_F, site.sensibleFactor, 0),
-  ).sensibleBtuh;
+  // Ducts in an encapsulated attic lose heat into a space that passes most of it back to the rooms
+  // through the ceiling: by the attic's steady balance only roofUA/(roofUA + ceilingUA) of it
+  // reaches outdoors (our one-node approximation).
+  const encapsulatedDucts = plan.ducts.location === "encapsulated-attic" && a.kind === "encapsulated";
+  const roofUaHeatForRegain = encapsulatedDucts ? roofU(a.roofDeck, { season: "heating", gypsumCeiling: false }) * roofAreaFt2 : 0;
+  const ductLossFractionHeat = encapsulatedDucts ? roofUaHeatForRegain / (roofUaHeatForRegain + ceilingUaHeat) : 1;
+  const ductLossFractionCool = encapsulatedDucts ? roofUaCool / (roofUaCool + ceilingUaCool) : 1;
+  heating.ducts =
+    ductLossFractionHeat *
+    wrapDuctError(() =>
+      ductLoad(ducts, envelopeHeatBtuh, "heating", heatingZoneF[ductZone], ti, HEATING_SUPPLY_DELTA_F, site.sensibleFactor, 0),
+    ).sensibleBtuh;
 
   const heatingResult: HeatingResult = {
     totalBtuh: sum(HEATING_COMPONENTS.map((c) => heating[c])),
@@ -551,6 +562,7 @@ export function preparePlan(plan: PlanInput, site: PreparedSite): PreparedPlan {
     garageCoolingF,
     ducts,
     ductZone,
+    ductLossFractionCool,
     notes,
   };
   if (!bySite) {
@@ -708,8 +720,8 @@ function coolingDay(p: PreparedPlan, facingAzimuthDeg: number): CoolingResult {
         const zoneF =
           zone === "attic" ? atticF[h] : zone === "crawl" ? site.dailyMeanOutdoorF : zone === "garage" ? p.garageCoolingF[h] : tic;
         const d = ductLoadOf(p.ducts, rooms[h], "cooling", zoneF, tic, supplyDeltaF, site.sensibleFactor, latentPerCfm);
-        ducts[h] = d.sensibleBtuh;
-        ductLatent[h] = d.latentBtuh;
+        ducts[h] = d.sensibleBtuh * p.ductLossFractionCool;
+        ductLatent[h] = d.latentBtuh * p.ductLossFractionCool;
       }
       total[h] = rooms[h] + ducts[h];
       if (total[h] > total[peak]) peak = h;
