@@ -54,17 +54,19 @@ export function facingSummary(result: PlanFacings) {
 }
 export type FacingSummary = ReturnType<typeof facingSummary>;
 
-function computeSummary(input: unknown, site: SiteConditions | null): { summary: FacingSummary | null; error: string | null } {
-  if (!site) return { summary: null, error: "Add a community to compute loads: the plan library uses its design conditions." };
+const NO_SITE = "Add a community to compute loads: the plan library uses its design conditions.";
+
+function computeFacings(input: unknown, site: SiteConditions | null): { result: PlanFacings | null; error: string | null } {
+  if (!site) return { result: null, error: NO_SITE };
   try {
-    return { summary: facingSummary(computePlanFacings(input, site, { validated: true })), error: null };
+    return { result: computePlanFacings(input, site, { validated: true }), error: null };
   } catch (error) {
-    return { summary: null, error: (error as Error).message };
+    return { result: null, error: (error as Error).message };
   }
 }
 
 /** The plan library: every plan's current cells, revision state and four-facing loads. */
-export async function listPlanLibrary({ db, accountId, communityId }: { db: Database; accountId: number; communityId?: number | null }) {
+export async function listPlanLibrary({ db, accountId, communityId, full = false }: { db: Database; accountId: number; communityId?: number | null; full?: boolean }) {
   const reference = await referenceSite({ db, accountId, communityId });
   const rows = await db
     .select({ plan: plans, revision: planRevisions })
@@ -75,7 +77,7 @@ export async function listPlanLibrary({ db, accountId, communityId }: { db: Data
   return {
     reference: { communities: reference.communities, community: reference.community },
     plans: rows.map(({ plan, revision }) => {
-      const { summary, error } = computeSummary(revision.input, reference.site);
+      const { result, error } = computeFacings(revision.input, reference.site);
       return {
         id: plan.id,
         planCode: plan.planCode,
@@ -86,8 +88,10 @@ export async function listPlanLibrary({ db, accountId, communityId }: { db: Data
         revisionNumber: revision.number,
         revisionStatus: revision.status,
         cells: revisionCells(revision, plan.planCode, plan.name),
-        loads: summary,
+        loads: result ? facingSummary(result) : null,
         loadsError: error,
+        /** The full engine result, only when asked for (exports). */
+        results: full ? result : undefined,
       };
     }),
   };
@@ -112,15 +116,7 @@ export async function getPlanSheet({ db, accountId, planId, communityId }: { db:
     .where(and(eq(auditLog.accountId, accountId), eq(auditLog.entityType, "plan")))
     .orderBy(desc(auditLog.createdAt), desc(auditLog.id))
     .limit(500);
-  let result: PlanFacings | null = null;
-  let loadsError: string | null = null;
-  if (reference.site) {
-    try {
-      result = computePlanFacings(current.input, reference.site, { validated: true });
-    } catch (error) {
-      loadsError = (error as Error).message;
-    }
-  } else loadsError = "Add a community to compute loads: the plan library uses its design conditions.";
+  const { result, error: loadsError } = computeFacings(current.input, reference.site);
   return {
     plan: { id: plan.id, planCode: plan.planCode, name: plan.name, version: plan.version, updatedAt: plan.updatedAt },
     reference: { communities: reference.communities, community: reference.community },
