@@ -7,7 +7,9 @@
  * - surface films, HoF 2021 ch. 26 Table 10: inside vertical 0.68, heat flow up 0.61, heat flow
  *   down 0.92, outside winter 15 mph 0.17, outside summer 7.5 mph 0.25; 45° slopes up 0.62 /
  *   down 0.76 (from memory).
- * - materials, HoF 2021 ch. 26 Table 1: gypsum ½ in 0.45; OSB 7/16 in 0.62; plywood ¾ in 1.08;
+ * - materials, HoF 2021 ch. 26 Table 1 as ENGINE.md lists them (the chapter was not in the
+ *   reference store; gypsum ½ in 0.45 matches a public copy of the 1997 edition's table):
+ *   gypsum ½ in 0.45; OSB 7/16 in 0.62; plywood ¾ in 1.08;
  *   vinyl siding 0.62; asphalt shingles 0.44; softwood 1.25 per inch (from memory, the ASHRAE
  *   90.1 Appendix A convention); 8 in hollow normal-weight block 1.1 (ENGINE.md: about 1.0–1.1),
  *   core-filled (perlite) 2.0 (from memory); stucco ⅞ in 0.18 (from memory); unventilated

@@ -88,7 +88,9 @@ const GARAGE_COOLING_ABOVE_OUTDOOR_F = 5;
 export interface ComputeOptions {
   /**
    * Set when plan and site are already the output of parsePlanInput / parseSiteConditions
-   * (hot loops: benchmark, bulk lot recompute); validation is then skipped.
+   * (hot loops: benchmark, bulk lot recompute); validation is then skipped. Such objects are
+   * treated as immutable: the prepared plan is reused for the same object, so do not edit a
+   * validated plan in place — parse the edited plan again.
    */
   validated?: boolean;
 }
@@ -259,7 +261,13 @@ export interface PreparedPlan {
   notes: string[];
 }
 
-const planCache = new WeakMap<PlanInput, Map<string, PreparedPlan>>();
+/**
+ * Recently prepared plans, matched by object identity and site key. A small ring (not a WeakMap:
+ * WeakMap entries for many short-lived plans cost more in garbage collection than they save).
+ */
+const RECENT_PLANS = 64;
+const recentPlans: Array<PreparedPlan | undefined> = new Array(RECENT_PLANS);
+let recentNext = 0;
 
 function wallOf(plan: PlanInput, facade: Facade): WallConstruction {
   return plan.facades[facade].wall ?? plan.wall;
@@ -294,9 +302,10 @@ function ductZoneOf(plan: PlanInput): ZoneKind {
 }
 
 export function preparePlan(plan: PlanInput, site: PreparedSite): PreparedPlan {
-  let bySite = planCache.get(plan);
-  const hit = bySite?.get(site.key);
-  if (hit) return hit;
+  for (let i = 0; i < RECENT_PLANS; i++) {
+    const hit = recentPlans[i];
+    if (hit !== undefined && hit.plan === plan && hit.site === site) return hit;
+  }
 
   const s = site.site;
   const notes: string[] = [...site.notes];
@@ -565,11 +574,8 @@ export function preparePlan(plan: PlanInput, site: PreparedSite): PreparedPlan {
     ductLossFractionCool,
     notes,
   };
-  if (!bySite) {
-    bySite = new Map();
-    planCache.set(plan, bySite);
-  }
-  bySite.set(site.key, prepared);
+  recentPlans[recentNext] = prepared;
+  recentNext = (recentNext + 1) % RECENT_PLANS;
   return prepared;
 }
 

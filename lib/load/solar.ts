@@ -2,6 +2,11 @@
  * Solar geometry and the ASHRAE clear-sky model, HoF 2021 ch. 14 ("Climatic Design
  * Information", section on clear-sky solar radiation).
  *
+ * Equation numbers are as recalled (from memory); the chapter itself was not in the reference
+ * store. The formulas reproduce the chapter's Atlanta July 21 example (beam 784, diffuse 166 W/m²
+ * at noon; 280/121/88 W/m² on a surface 60° W of S at 3 pm) to within 0.5 % — see
+ * tests/unit/load/reference-checks.test.ts.
+ *
  * Conventions (stated once): angles in degrees; azimuths measured clockwise from north
  * (0 = N, 90 = E, 180 = S, 270 = W), for the sun and for surfaces alike; surface tilt Σ from
  * horizontal (0 = facing up, 90 = vertical); hours are apparent solar time, hour h of the
