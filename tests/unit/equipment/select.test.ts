@@ -18,6 +18,16 @@ const CATALOG = [
 const LOADS = { heatingBtuh: 40_000, coolingSensibleBtuh: 21_000, coolingLatentBtuh: 5_000, coolingTotalBtuh: 26_000 };
 
 describe("equipment selection", () => {
+  it("default limits are ENGINE.md's (from memory and common practice)", () => {
+    expect(DEFAULT_SIZING_LIMITS).toEqual({
+      coolingMinPct: 95,
+      coolingMaxPct: 115,
+      heatPumpCoolingMaxPct: 125,
+      heatingMinPct: 100,
+      heatingMaxPct: 140,
+    });
+  });
+
   it("picks the smallest fitting system, and lists the others that fit", () => {
     const s = selectEquipment({ loads: LOADS, catalog: CATALOG });
     expect(s.bestFit?.system.id).toBe("ac25");
