@@ -84,6 +84,26 @@ export type Facade = (typeof FACADES)[number];
 export const SHELTER_CLASSES = [1, 2, 3, 4, 5] as const;
 export type ShelterClass = (typeof SHELTER_CLASSES)[number];
 
+/**
+ * Framing cavity depth of each base assembly, in (nominal lumber actual sizes; block walls: 1½ in
+ * interior furring). Cavity insulation is limited to 7 R per inch (about the best closed-cell
+ * spray foam, from memory), so R-38 in a 2x4 wall is refused rather than silently accepted.
+ */
+export const CAVITY_DEPTH_IN: Record<Exclude<BaseAssembly, CeilingBaseAssembly>, number> = {
+  "wood-2x4-16in-oc": 3.5,
+  "wood-2x4-24in-oc": 3.5,
+  "wood-2x6-16in-oc": 5.5,
+  "wood-2x6-24in-oc": 5.5,
+  "cmu-8in-hollow": 1.5,
+  "cmu-8in-core-filled": 1.5,
+  "roof-rafters-2x8-24in-oc": 7.25,
+  "roof-rafters-2x10-24in-oc": 9.25,
+  "roof-rafters-2x12-24in-oc": 11.25,
+  "floor-joists-2x10-16in-oc": 9.25,
+  "floor-joists-2x10-24in-oc": 9.25,
+};
+export const MAX_CAVITY_R_PER_IN = 7;
+
 // ---------------------------------------------------------------------------------------------
 // Field builders: every number carries its valid range so errors can name it.
 
@@ -408,6 +428,32 @@ export const planInputSchema = z
     coolingSupplyDeltaF: ranged(10, 35, "°F").default(20),
   })
   .superRefine((plan, ctx) => {
+    // Cavity insulation must fit in its cavity.
+    const cavities: Array<[Array<string | number>, { baseId: string; cavityR: number } | undefined]> = [
+      [["wall"], plan.wall],
+      ...FACADES.map((f): [Array<string | number>, { baseId: string; cavityR: number } | undefined] => [
+        ["facades", f, "wall"],
+        plan.facades[f].wall,
+      ]),
+      [["attic", "roofDeck"], plan.attic.roofDeck],
+      [["vaultedCeiling", "construction"], plan.vaultedCeiling.construction],
+      [["foundation", "floor"], plan.foundation.floor],
+      [["floorOverOutdoors", "construction"], plan.floorOverOutdoors.construction],
+      [["garage", "floorOver"], plan.garage.floorOver],
+    ];
+    for (const [path, c] of cavities) {
+      if (!c) continue;
+      const depthIn = CAVITY_DEPTH_IN[c.baseId as keyof typeof CAVITY_DEPTH_IN];
+      const maxR = depthIn * MAX_CAVITY_R_PER_IN;
+      if (depthIn !== undefined && c.cavityR > maxR) {
+        ctx.addIssue({
+          code: "custom",
+          path: [...path, "cavityR"],
+          message: `R-${c.cavityR} does not fit the ${depthIn} in cavity of ${c.baseId} (at most R-${maxR.toFixed(1)}); put the rest in continuousR`,
+          params: { range: { min: 0, max: maxR, unit: "h·ft²·°F/Btu" } },
+        });
+      }
+    }
     // Cross-field checks: windows and doors must fit in their wall.
     for (const facade of FACADES) {
       const f = plan.facades[facade];

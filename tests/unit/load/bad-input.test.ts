@@ -99,3 +99,12 @@ describe("bad site input", () => {
     expect(e.range).toMatchObject({ min: -66, max: 66 });
   });
 });
+
+describe("constructions", () => {
+  it("cavity insulation that cannot fit its framing is refused, naming the field", () => {
+    const e = errorOf(() => parsePlanInput({ ...base, wall: { baseId: "wood-2x4-16in-oc", cavityR: 38 } }));
+    expect(e.field).toBe("wall.cavityR");
+    expect(e.message).toMatch(/does not fit the 3.5 in cavity/);
+    expect(e.range).toMatchObject({ max: 24.5 });
+  });
+});
