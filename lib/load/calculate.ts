@@ -817,7 +817,7 @@ function facingResult(p: PreparedPlan, facingAzimuthDeg: number): FacingLoads {
   const az = normalizeAzimuth(facingAzimuthDeg);
   const notes = [...p.notes];
   if (p.ducts.outsideEnvelope) {
-    notes.push("Duct losses by a simple conduction-and-leakage model (see ENGINE notes), not the handbook's duct factor table.");
+    notes.push("Duct losses by a simple conduction-and-leakage model (lib/load/README.md), not the handbook duct-factor table.");
   }
   return {
     engineVersion: ENGINE_VERSION,
