@@ -75,6 +75,8 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
   const [selectedIds, setSelectedIds] = useState<number[]>([]);
   const [bulkKey, setBulkKey] = useState("ceiling_cavity_r");
   const [bulkValue, setBulkValue] = useState("");
+  // All four facings pinned right take about 800 px: on narrower screens start with the worst facing only.
+  const [allFacings, setAllFacings] = useState(() => typeof window === "undefined" || window.innerWidth >= 1600);
 
   const save = useMutation({
     mutationFn: ({ changes, action }: { changes: CellChange[]; action: EditAction }) =>
@@ -195,6 +197,15 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
         ],
       };
     };
+    const worstOf = (p: { data?: LibraryPlan }) => p.data?.loads?.facings.find((x) => x.label === p.data?.loads?.worst.label);
+    const worstGroup: ColGroupDef<LibraryPlan> = {
+      headerName: "Worst facing (Btu/h)",
+      children: [
+        { colId: "heat_worst", headerName: "Heat", headerTooltip: "Heating load (the same for every facing), Btu/h", width: 68, pinned: "right", editable: false, filter: false, valueGetter: (p) => worstOf(p)?.heatingBtuh ?? null, valueFormatter: (p) => fmtInt(p.value), cellClass: "num cell-computed cell-heat" },
+        { colId: "cool_worst", headerName: "Cool", headerTooltip: "Cooling total at the worst facing, Btu/h", width: 68, pinned: "right", editable: false, filter: false, valueGetter: (p) => worstOf(p)?.coolingTotalBtuh ?? null, valueFormatter: (p) => fmtInt(p.value), cellClass: "num cell-computed cell-cool cell-worst" },
+        { colId: "tons_worst", headerName: "Tons", width: 52, pinned: "right", editable: false, filter: false, valueGetter: (p) => worstOf(p)?.tons ?? null, valueFormatter: (p) => (p.value === null ? "" : Number(p.value).toFixed(2)), cellClass: "num cell-computed" },
+      ],
+    };
     return [
       {
         colId: "open",
@@ -221,7 +232,7 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
         headerTooltip: "Revision number; ✓ approved (locked: an edit starts a new draft)",
       },
       ...groups,
-      ...FACINGS.map(computed),
+      ...(allFacings ? FACINGS.map(computed) : [worstGroup]),
       {
         headerName: "All facings (Btu/h)",
         children: [
@@ -230,7 +241,7 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
         ],
       },
     ];
-  }, [canEdit, cellErrors, communityId, saveCells]);
+  }, [allFacings, canEdit, cellErrors, communityId, saveCells]);
 
   const onCellKeyDown = useCallback(
     (event: CellKeyDownEvent<LibraryPlan>) => {
@@ -330,6 +341,35 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
             ))}
           </select>
         </div>
+        <div>
+          <label htmlFor="jump-column" className="block text-xs font-medium text-zinc-600">
+            Go to column
+          </label>
+          <select
+            id="jump-column"
+            className="max-w-56 rounded border border-zinc-300 bg-white px-2 py-1"
+            value=""
+            onChange={(e) => {
+              const key = e.target.value;
+              const grid = gridApi.current;
+              if (!key || !grid) return;
+              grid.ensureColumnVisible(key, "middle");
+              const first = grid.getDisplayedRowAtIndex(0);
+              if (first) grid.setFocusedCell(0, key);
+            }}
+          >
+            <option value="">Choose…</option>
+            {PLAN_COLUMN_GROUPS.map((g) => (
+              <optgroup key={g} label={g}>
+                {PLAN_COLUMNS.filter((c) => c.group === g).map((c) => (
+                  <option key={c.key} value={c.key}>
+                    {c.header}
+                  </option>
+                ))}
+              </optgroup>
+            ))}
+          </select>
+        </div>
         {canEdit ? (
           <div className="flex items-end gap-2" data-testid="bulk-edit">
             <div>
@@ -362,6 +402,10 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
             </Button>
           </div>
         ) : null}
+        <label className="flex items-center gap-1.5 text-xs text-zinc-700">
+          <input type="checkbox" checked={allFacings} onChange={(e) => setAllFacings(e.target.checked)} data-testid="toggle-facings" />
+          Show all four facings
+        </label>
         <div className="ml-auto flex gap-3 text-xs">
           <a className="text-accent-700 hover:underline" href={`/api/plans/export?format=xlsx${communityId ? `&communityId=${communityId}` : ""}`}>
             Export XLSX
@@ -413,6 +457,7 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
           stopEditingWhenCellsLoseFocus
           tooltipShowDelay={300}
           undoRedoCellEditing={false}
+          suppressColumnVirtualisation
         />
       </div>
       <p className="text-xs text-zinc-500">

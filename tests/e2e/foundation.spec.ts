@@ -30,8 +30,8 @@ test("a consultant in two accounts picks the account and sees only its data", as
   await expect(page.getByRole("heading", { name: "Choose an account" })).toBeVisible();
   await page.getByRole("button", { name: /Bramblewood Residential/ }).click();
   await expect(page.getByTestId("account-name")).toHaveText("Bramblewood Residential");
-  await expect(page.getByTestId("plans-table")).toContainText("HX-2100");
-  await expect(page.getByTestId("plans-table")).not.toContainText("AS-1450");
+  await expect(page.getByTestId("plan-grid")).toContainText("HX-2100");
+  await expect(page.getByTestId("plan-grid")).not.toContainText("AS-1450");
 });
 
 test("an admin invites a member, the mail arrives, the link sets a password and the member signs in", async ({ page }) => {

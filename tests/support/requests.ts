@@ -14,14 +14,15 @@ type Handler = (request: NextRequest, context: { params: Promise<Record<string, 
 
 export async function callRoute(
   handler: unknown,
-  { path, method = "GET", params = {}, body, cookie }: { path: string; method?: string; params?: Record<string, string>; body?: unknown; cookie?: string },
-): Promise<{ status: number; json: any }> {
+  { path, method = "GET", params = {}, body, form, cookie }: { path: string; method?: string; params?: Record<string, string>; body?: unknown; form?: FormData; cookie?: string },
+): Promise<{ status: number; json: any; text: string; headers: Headers }> {
   const request = new NextRequest(new URL(path, "http://127.0.0.1:3720"), {
     method,
     headers: { ...(cookie ? { cookie } : {}), ...(body !== undefined ? { "content-type": "application/json" } : {}) },
-    body: body !== undefined ? JSON.stringify(body) : undefined,
+    body: form ?? (body !== undefined ? JSON.stringify(body) : undefined),
   });
   const response = await (handler as Handler)(request, { params: Promise.resolve(params) });
   const text = await response.text();
-  return { status: response.status, json: text ? JSON.parse(text) : null };
+  const isJson = (response.headers.get("content-type") ?? "").includes("json");
+  return { status: response.status, json: text && isJson ? JSON.parse(text) : null, text, headers: response.headers };
 }
