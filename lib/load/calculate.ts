@@ -104,7 +104,7 @@ export interface PreparedSite {
   solar: SiteSolarDay;
   tauBeam: number;
   tauDiffuse: number;
-  outdoorF: Float64Array;
+  outdoorF: number[];
   dailyMeanOutdoorF: number;
   pressurePsia: number;
   /** 1.10·(P/P0), Btu/h per cfm per °F. */
@@ -164,7 +164,7 @@ export function prepareSite(site: SiteConditions): PreparedSite {
   }
   const dayOfYear = designDayOfYear(site.designMonth);
   const solar = new SiteSolarDay(site.latitudeDeg, dayOfYear, tauBeam, tauDiffuse, site.groundReflectance);
-  const outdoorF = Float64Array.from(outdoorDryBulbProfileF(site.coolingOutdoorDbF, site.dailyRangeF));
+  const outdoorF = outdoorDryBulbProfileF(site.coolingOutdoorDbF, site.dailyRangeF);
   const pressurePsia = standardPressurePsia(site.elevationFt);
   const ratio = pressurePsia / SEA_LEVEL_PRESSURE_PSIA;
   const outdoorHumidityRatioGr = humidityRatioGrFromWetBulb(site.coolingOutdoorDbF, site.coolingOutdoorWbF, pressurePsia);
@@ -244,16 +244,16 @@ export interface PreparedPlan {
   roofTiltDeg: number;
   /** Hourly sensible loads that do not depend on facing, Btu/h. */
   hourlyFixed: {
-    floors: Float64Array;
-    foundationWalls: Float64Array;
-    garageWall: Float64Array;
-    infiltration: Float64Array;
-    ventilation: Float64Array;
+    floors: number[];
+    foundationWalls: number[];
+    garageWall: number[];
+    infiltration: number[];
+    ventilation: number[];
     internal: number;
   };
-  infiltrationCfmHourly: Float64Array;
+  infiltrationCfmHourly: number[];
   latentFixedBtuh: { ventilation: number; internal: number };
-  garageCoolingF: Float64Array;
+  garageCoolingF: number[];
   ducts: DuctGeometry;
   ductZone: ZoneKind;
   /** Share of the duct gain that reaches the rooms (below 1 only for ducts in an encapsulated attic). */
@@ -268,6 +268,11 @@ export interface PreparedPlan {
 const RECENT_PLANS = 64;
 const recentPlans: Array<PreparedPlan | undefined> = new Array(RECENT_PLANS);
 let recentNext = 0;
+
+/** 24 zeros in a plain array (typed arrays cost more to allocate than they save at this size). */
+function hours24(): number[] {
+  return [0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0];
+}
 
 function wallOf(plan: PlanInput, facade: Facade): WallConstruction {
   return plan.facades[facade].wall ?? plan.wall;
@@ -355,7 +360,8 @@ export function preparePlan(plan: PlanInput, site: PreparedSite): PreparedPlan {
 
   // --- Buffer-space temperatures (heating) -------------------------------------------------
   const garageHeatF = plan.garage.heatingTemperatureF ?? to + GARAGE_HEATING_FRACTION_TOWARD_INDOOR * dtHeat;
-  const garageCoolingF = Float64Array.from(site.outdoorF, (t) => plan.garage.coolingTemperatureF ?? t + GARAGE_COOLING_ABOVE_OUTDOOR_F);
+  const garageCoolingF = hours24();
+  for (let h = 0; h < 24; h++) garageCoolingF[h] = plan.garage.coolingTemperatureF ?? site.outdoorF[h] + GARAGE_COOLING_ABOVE_OUTDOOR_F;
   if (plan.garage.wallAreaFt2 + plan.garage.floorOverAreaFt2 > 0 && plan.garage.heatingTemperatureF === undefined) {
     notes.push(`Garage heating temperature not entered: ${garageHeatF.toFixed(0)} °F assumed (outdoor + 30 % of the difference).`);
   }
@@ -447,9 +453,9 @@ export function preparePlan(plan: PlanInput, site: PreparedSite): PreparedPlan {
   heating.skylights = sk.uFactor * sk.areaFt2 * dtHeat;
 
   // --- Floors, slab, foundation walls, garage --------------------------------------------------
-  const floorsCool = new Float64Array(24);
-  const foundationCool = new Float64Array(24);
-  const garageCool = new Float64Array(24);
+  const floorsCool = hours24();
+  const foundationCool = hours24();
+  const garageCool = hours24();
   if (f.kind === "vented-crawlspace") {
     heating.floors += floorUHeat * f.floorAreaFt2 * dtHeat; // vented crawlspace at outdoor temperature (ENGINE.md)
     // Cooling: the crawlspace runs near the daily mean outdoor temperature (our approximation).
@@ -519,9 +525,9 @@ export function preparePlan(plan: PlanInput, site: PreparedSite): PreparedPlan {
   };
 
   // --- Cooling: facing-independent hourly pieces ------------------------------------------------
-  const infCoolHourly = new Float64Array(24);
-  const infSensible = new Float64Array(24);
-  const ventSensible = new Float64Array(24);
+  const infCoolHourly = hours24();
+  const infSensible = hours24();
+  const ventSensible = hours24();
   for (let h = 0; h < 24; h++) {
     const dT = site.outdoorF[h] - tic;
     const inf = lblInfiltrationCfm(elaCm2, plan.stories, shelterClass, Math.abs(dT), COOLING_WIND_MPH);
@@ -611,24 +617,49 @@ function normalizeAzimuth(deg: number): number {
 
 const FACADE_OFFSET_DEG: Record<Facade, number> = { front: 0, left: 90, back: 180, right: 270 };
 
+const SCRATCH = {
+  walls: new Float64Array(24),
+  windows: new Float64Array(24),
+  doors: new Float64Array(24),
+  ceilings: new Float64Array(24),
+  vaulted: new Float64Array(24),
+  skylights: new Float64Array(24),
+  ducts: new Float64Array(24),
+  ductLatent: new Float64Array(24),
+  rooms: new Float64Array(24),
+  total: new Float64Array(24),
+  te: new Float64Array(24),
+  roofIrr: new Float64Array(24),
+  atticF: new Float64Array(24),
+  windowsByFacade: [new Float64Array(24), new Float64Array(24), new Float64Array(24), new Float64Array(24)],
+};
+const SCRATCH_ROWS: Float64Array[] = [
+  SCRATCH.walls,
+  SCRATCH.windows,
+  SCRATCH.doors,
+  SCRATCH.ceilings,
+  SCRATCH.vaulted,
+  SCRATCH.skylights,
+  SCRATCH.ducts,
+  SCRATCH.ductLatent,
+  SCRATCH.rooms,
+  SCRATCH.total,
+  SCRATCH.te,
+  SCRATCH.roofIrr,
+  SCRATCH.atticF,
+  ...SCRATCH.windowsByFacade,
+];
+
 function coolingDay(p: PreparedPlan, facingAzimuthDeg: number): CoolingResult {
   const site = p.site;
   const solar = site.solar;
   const tic = site.site.indoorCoolingF;
   const toArr = site.outdoorF;
 
-  const walls = new Float64Array(24);
-  const windows = new Float64Array(24);
-  const doors = new Float64Array(24);
-  const ceilings = new Float64Array(24);
-  const vaulted = new Float64Array(24);
-  const skylights = new Float64Array(24);
-  const ducts = new Float64Array(24);
-  const ductLatent = new Float64Array(24);
-  const rooms = new Float64Array(24);
-  const total = new Float64Array(24);
-  const te = new Float64Array(24);
-  const windowsByFacade = [new Float64Array(24), new Float64Array(24), new Float64Array(24), new Float64Array(24)];
+  // Scratch rows reused across calls (the function is synchronous and never re-entered).
+  const { walls, windows, doors, ceilings, vaulted, skylights, ducts, ductLatent, rooms, total, te, roofIrr, atticF } = SCRATCH;
+  const windowsByFacade = SCRATCH.windowsByFacade;
+  for (const row of SCRATCH_ROWS) row.fill(0);
   const fixed = p.hourlyFixed;
 
   // Walls, doors, windows per facade.
@@ -664,7 +695,6 @@ function coolingDay(p: PreparedPlan, facingAzimuthDeg: number): CoolingResult {
   }
 
   // Roof planes: a hip roof with one plane toward each facade (equal areas) — average irradiance.
-  const roofIrr = new Float64Array(24);
   const hasAttic = p.attic.kind !== "none";
   if (hasAttic || p.vaulted.uaCool > 0) {
     for (let k = 0; k < 4; k++) {
@@ -672,7 +702,6 @@ function coolingDay(p: PreparedPlan, facingAzimuthDeg: number): CoolingResult {
       for (let h = 0; h < 24; h++) roofIrr[h] += prof.totalWm2[h] * W_M2_TO_BTUH_FT2 * 0.25;
     }
   }
-  const atticF = new Float64Array(24);
   const at = p.attic;
   for (let h = 0; h < 24; h++) {
     if (!hasAttic) {
@@ -773,6 +802,8 @@ function coolingDay(p: PreparedPlan, facingAzimuthDeg: number): CoolingResult {
   for (let k = 0; k < LATENT_KEYS.length; k++) latentBtuh += latentByComponent[LATENT_KEYS[k]];
   const totalBtuh = sensibleBtuh + latentBtuh;
   const tons = totalBtuh / BTUH_PER_TON;
+  const hourlySensibleBtuh = hours24();
+  for (let h = 0; h < 24; h++) hourlySensibleBtuh[h] = total[h];
   return {
     sensibleBtuh,
     latentBtuh,
@@ -786,8 +817,8 @@ function coolingDay(p: PreparedPlan, facingAzimuthDeg: number): CoolingResult {
       back: windowsByFacade[2][peak],
       right: windowsByFacade[3][peak],
     },
-    hourlySensibleBtuh: Array.from(total),
-    hourlyOutdoorF: Array.from(toArr),
+    hourlySensibleBtuh,
+    hourlyOutdoorF: toArr.slice(),
     outdoorF: toArr[peak],
     indoorF: tic,
     atticF: hasAttic ? atticF[peak] : null,
