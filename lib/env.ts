@@ -12,6 +12,15 @@ const envSchema = z.object({
   /** Folder of the local fake SMTP server's messages; when set, the development mailbox page is on. */
   PLATLOAD_MAILBOX_DIR: z.string().optional(),
   NEXTAUTH_URL: z.string().url().optional(),
+  /** Object storage (S3 API): a local fake in development and tests, a real bucket in production. */
+  S3_ENDPOINT: z.string().url().optional(),
+  S3_REGION: z.string().default("us-east-1"),
+  S3_BUCKET: z.string().default("platload"),
+  S3_ACCESS_KEY_ID: z.string().default("S3RVER"),
+  S3_SECRET_ACCESS_KEY: z.string().default("S3RVER"),
+  S3_FORCE_PATH_STYLE: z.enum(["true", "false"]).default("true"),
+  /** Largest upload accepted, bytes. */
+  PLATLOAD_MAX_UPLOAD_BYTES: z.coerce.number().int().positive().default(20 * 1024 * 1024),
 });
 
 export type Env = z.infer<typeof envSchema>;

@@ -7,6 +7,7 @@ import { AppError } from "@/lib/errors";
 import { readTable, type TableCellError } from "@/lib/workbook/columns";
 import { PLAN_COLUMNS, validatePlanTable } from "@/lib/workbook/plan-columns";
 import { readTableFile, TableFileError } from "@/lib/workbook/table-io";
+import { recomputeLots } from "./lots";
 import { revisionCells, writePlanRevision, type PlanCells } from "./plans";
 
 export const PLAN_IMPORT_MAX_BYTES = 5 * 1024 * 1024;
@@ -65,6 +66,7 @@ export async function importPlanLibrary({ db, accountId, userId, fileName, data 
         after.push({ planId, planCode: row.planCode, cells });
       }
     }
+    await recomputeLots(tx, { accountId, planIds: after.map((a) => a.planId) });
     await recordAudit(tx, { accountId, userId, action: "plan_import", entityType: "plan", entityId: null, summary: `Imported ${fileName}: ${created} created, ${updated} updated`, after });
     await tx.update(imports).set({ state: "succeeded", createdCount: created, updatedCount: updated, errors: [], progressPct: 100, finishedAt: new Date() }).where(eq(imports.id, importId));
     return { created, updated };

@@ -5,6 +5,7 @@ import { auditLog, communities, planRevisions, plans, users } from "@/db/schema"
 import { recordAudit } from "@/lib/audit";
 import { AppError, notFound, type FieldError } from "@/lib/errors";
 import { computePlanFacings, parseSiteConditions, type PlanFacings, type PlanInput, type SiteConditions } from "@/lib/load";
+import { recomputeLots } from "./lots";
 import { PLAN_COLUMN_BY_KEY, planInputToRow, rowToPlanInput, type PlanRowCells } from "@/lib/workbook/plan-columns";
 
 type Tx = Parameters<Parameters<Database["transaction"]>[0]>[0];
@@ -214,7 +215,7 @@ export async function applyPlanEdits({
       writes.push({ row, cells: newCells, input: result.input, planCode: result.planCode, planName: result.planName });
     }
     if (fieldErrors.length > 0) throw new AppError("invalid_input", `${fieldErrors.length} cell(s) are not valid; nothing was saved.`, fieldErrors);
-    if (writes.length === 0) return { changed: 0, entryId: null as number | null };
+    if (writes.length === 0) return { changed: 0, entryId: null as number | null, lotsRecomputed: 0, lotsChanged: 0 };
 
     const codes = writes.filter((w) => w.planCode !== w.row.plan.planCode).map((w) => w.planCode);
     if (codes.length > 0) {
@@ -224,6 +225,8 @@ export async function applyPlanEdits({
     }
 
     for (const w of writes) await writePlanRevision(tx, { accountId, userId, plan: w.row.plan, revision: w.row.revision, cells: w.cells, input: w.input, planCode: w.planCode, planName: w.planName });
+    // Every lot built on these plans is recomputed (frozen lots keep their permit snapshot).
+    const lotsRecomputed = await recomputeLots(tx, { accountId, planIds: writes.map((w) => w.row.plan.id) });
 
     const summary =
       description ??
@@ -231,7 +234,7 @@ export async function applyPlanEdits({
         ? `${action === "undo" ? "Undid a change to" : "Edited"} ${after[0].planCode}: ${Object.keys(after[0].cells).map((k) => PLAN_COLUMN_BY_KEY.get(k)?.header ?? k).join(", ")}`
         : `${action === "paste" ? "Pasted into" : action === "undo" ? "Undid a change to" : "Edited"} ${writes.length} plan models`);
     const entryId = await recordAudit(tx, { accountId, userId, action: `plan_${action}`, entityType: "plan", entityId: writes.length === 1 ? writes[0].row.plan.id : null, summary, before, after });
-    return { changed: writes.length, entryId: entryId as number | null };
+    return { changed: writes.length, entryId: entryId as number | null, lotsRecomputed: lotsRecomputed.recomputed, lotsChanged: lotsRecomputed.changed };
   });
 }
 

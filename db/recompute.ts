@@ -1,0 +1,166 @@
+// Lot loads: computed from the current plan revision and the community's design conditions, and
+// written back in a few statements. No "server-only" guard: the seed and the benchmark use it too.
+import { and, eq, inArray, sql, type SQL } from "drizzle-orm";
+import { computeFacingLoads, parseSiteConditions, type FacingLoads, type PlanInput, type SiteConditions } from "@/lib/load";
+import type { Database } from "./index";
+import { communities, lots, planRevisions, plans, type LotStatus } from "./schema";
+
+type Tx = Parameters<Parameters<Database["transaction"]>[0]>[0];
+type Db = Database | Tx;
+
+/** What a lot keeps of its computed loads (the full result is recomputed on demand for reports). */
+export interface LotResults {
+  engineVersion: string;
+  revisionId: number;
+  revisionNumber: number;
+  computedAt: string;
+  heatingBtuh: number;
+  coolingSensibleBtuh: number;
+  coolingLatentBtuh: number;
+  coolingTotalBtuh: number;
+  tons: number;
+  floorAreaPerTonFt2: number;
+  airflowCfm: number;
+  /** 1–4: where this lot's cooling total falls among its plan's four cardinal facings (1 = highest). */
+  facingRank: number;
+  /** True when the last recompute changed the loads. */
+  changed: boolean;
+  previous: { heatingBtuh: number; coolingTotalBtuh: number } | null;
+}
+
+/** The frozen copy taken when a lot's permit is submitted: inputs, results and engine version. */
+export interface PermitSnapshot {
+  frozenAt: string;
+  frozenByUserId: number;
+  planId: number;
+  planCode: string;
+  planName: string;
+  revisionId: number;
+  revisionNumber: number;
+  revisionStatus: string;
+  approval: { name: string | null; credential: string | null; date: string | null };
+  communityName: string;
+  site: SiteConditions;
+  facingDeg: number;
+  input: PlanInput;
+  result: FacingLoads;
+  summary: LotResults;
+  engineVersion: string;
+}
+
+export const FROZEN_STATUSES: readonly LotStatus[] = ["permit_submitted", "permitted", "built"];
+export const isFrozen = (status: LotStatus) => FROZEN_STATUSES.includes(status);
+
+function summarize(result: FacingLoads, cardinalTotals: number[], revision: { id: number; number: number }, previous: LotResults | null): LotResults {
+  const c = result.cooling;
+  const rank = 1 + cardinalTotals.filter((t) => t > c.totalBtuh + 0.5).length;
+  const changed = !!previous && (Math.round(previous.coolingTotalBtuh) !== Math.round(c.totalBtuh) || Math.round(previous.heatingBtuh) !== Math.round(result.heating.totalBtuh));
+  return {
+    engineVersion: result.engineVersion,
+    revisionId: revision.id,
+    revisionNumber: revision.number,
+    computedAt: new Date().toISOString(),
+    heatingBtuh: result.heating.totalBtuh,
+    coolingSensibleBtuh: c.sensibleBtuh,
+    coolingLatentBtuh: c.latentBtuh,
+    coolingTotalBtuh: c.totalBtuh,
+    tons: c.tons,
+    floorAreaPerTonFt2: c.floorAreaPerTonFt2,
+    airflowCfm: c.airflowCfm,
+    facingRank: Math.min(4, rank),
+    changed,
+    previous: previous ? { heatingBtuh: previous.heatingBtuh, coolingTotalBtuh: previous.coolingTotalBtuh } : null,
+  };
+}
+
+/**
+ * Computes lots in memory: one prepared plan per revision and one prepared site per community
+ * (the engine caches both by identity), four cardinal facings per (revision, community) for the rank.
+ */
+export class LotCalculator {
+  private sites = new Map<number, SiteConditions>();
+  private cardinal = new Map<string, number[]>();
+
+  constructor(private readonly conditionsByCommunity: Map<number, unknown>) {}
+
+  site(communityId: number): SiteConditions {
+    let site = this.sites.get(communityId);
+    if (!site) {
+      site = parseSiteConditions(this.conditionsByCommunity.get(communityId));
+      this.sites.set(communityId, site);
+    }
+    return site;
+  }
+
+  compute(lot: { communityId: number; facingDeg: number; previous: LotResults | null }, revision: { id: number; number: number; input: PlanInput }): { full: FacingLoads; summary: LotResults } {
+    const site = this.site(lot.communityId);
+    const key = `${revision.id}:${lot.communityId}`;
+    let totals = this.cardinal.get(key);
+    if (!totals) {
+      totals = [0, 90, 180, 270].map((deg) => computeFacingLoads(revision.input, site, deg, { validated: true }).cooling.totalBtuh);
+      this.cardinal.set(key, totals);
+    }
+    const full = computeFacingLoads(revision.input, site, lot.facingDeg, { validated: true });
+    return { full, summary: summarize(full, totals, revision, lot.previous) };
+  }
+}
+
+/** Writes many lots' results in a few statements (CASE per id, 500 ids a statement). */
+export async function writeResults(tx: Db, rows: { id: number; results: LotResults }[]) {
+  const now = new Date();
+  for (let i = 0; i < rows.length; i += 500) {
+    const chunk = rows.slice(i, i + 500);
+    const cases: SQL[] = chunk.map((r) => sql`WHEN ${r.id} THEN ${JSON.stringify(r.results)}`);
+    const revisionCases: SQL[] = chunk.map((r) => sql`WHEN ${r.id} THEN ${r.results.revisionId}`);
+    await tx
+      .update(lots)
+      .set({
+        results: sql`CASE ${lots.id} ${sql.join(cases, sql` `)} END`,
+        resultsRevisionId: sql`CASE ${lots.id} ${sql.join(revisionCases, sql` `)} END`,
+        resultsComputedAt: now,
+      })
+      .where(inArray(lots.id, chunk.map((r) => r.id)));
+  }
+}
+
+/**
+ * Recomputes lots from the current plan revisions and community conditions: all lots of the
+ * account matching the filter. Frozen lots are recomputed too (so the grid can show that the
+ * current plan differs) but their permit snapshot is never touched.
+ */
+export async function recomputeLots(tx: Db, { accountId, communityId, planIds, lotIds }: { accountId: number; communityId?: number; planIds?: number[]; lotIds?: number[] }) {
+  const filters = [eq(lots.accountId, accountId)];
+  if (communityId) filters.push(eq(lots.communityId, communityId));
+  if (planIds) {
+    if (planIds.length === 0) return { recomputed: 0, changed: 0 };
+    filters.push(inArray(lots.planId, planIds));
+  }
+  if (lotIds) {
+    if (lotIds.length === 0) return { recomputed: 0, changed: 0 };
+    filters.push(inArray(lots.id, lotIds));
+  }
+  const rows = await tx
+    .select({ id: lots.id, communityId: lots.communityId, facingDeg: lots.facingDeg, results: lots.results, revisionId: planRevisions.id, revisionNumber: planRevisions.number, input: planRevisions.input })
+    .from(lots)
+    .innerJoin(plans, eq(plans.id, lots.planId))
+    .innerJoin(planRevisions, eq(planRevisions.id, plans.currentRevisionId))
+    .where(and(...filters));
+  if (rows.length === 0) return { recomputed: 0, changed: 0 };
+  const communityIds = [...new Set(rows.map((r) => r.communityId))];
+  const conditions = await tx.select({ id: communities.id, conditions: communities.conditions }).from(communities).where(inArray(communities.id, communityIds));
+  const calculator = new LotCalculator(new Map(conditions.map((c) => [c.id, c.conditions])));
+  const inputs = new Map<number, PlanInput>();
+  const out: { id: number; results: LotResults }[] = [];
+  for (const r of rows) {
+    let input = inputs.get(r.revisionId);
+    if (!input) {
+      input = r.input as PlanInput;
+      inputs.set(r.revisionId, input);
+    }
+    const { summary } = calculator.compute({ communityId: r.communityId, facingDeg: Number(r.facingDeg), previous: (r.results as LotResults | null) ?? null }, { id: r.revisionId, number: r.revisionNumber, input });
+    out.push({ id: r.id, results: summary });
+  }
+  await writeResults(tx, out);
+  return { recomputed: out.length, changed: out.filter((o) => o.results.changed).length };
+}
+
