@@ -20,7 +20,15 @@ import {
 } from "./assemblies";
 import { atticAirTemperatureF, SOL_AIR_HO_BTUH_FT2F, solAirTemperatureF } from "./attic";
 import { outdoorDryBulbProfileF } from "./design-day";
-import { ductGeometry, ductLoad, HEATING_SUPPLY_DELTA_F, type DuctGeometry } from "./ducts";
+import {
+  ductGeometry,
+  ductHeatingMode,
+  ductLoad,
+  ductLossFactor,
+  ductTableLocation,
+  HEATING_SUPPLY_DELTA_F,
+  type DuctGeometry,
+} from "./ducts";
 import { LoadInputError } from "./errors";
 import {
   FACADES,
@@ -258,6 +266,11 @@ export interface PreparedPlan {
   ductZone: ZoneKind;
   /** Share of the duct gain that reaches the rooms (below 1 only for ducts in an encapsulated attic). */
   ductLossFractionCool: number;
+  /**
+   * Cooling duct gain factor F_dl of HoF 2021 ch. 17 Table 6 (eq. 19: gain = F_dl × room sensible load),
+   * or null when the conduction-leakage model is used.
+   */
+  ductFactorCool: number | null;
   notes: string[];
 }
 
@@ -491,6 +504,21 @@ export function preparePlan(plan: PlanInput, site: PreparedSite): PreparedPlan {
   // --- Ducts (heating) --------------------------------------------------------------------------
   const ducts = ductGeometry(plan.ducts, plan.conditionedFloorAreaFt2, plan.stories);
   const ductZone = ductZoneOf(plan);
+  // Default: HoF 2021 ch. 17 eq. 19 with the Table 6 factors, where the table has the location.
+  const tableLocation = plan.ducts.method === "handbook-table" ? ductTableLocation(plan.ducts.location) : null;
+  const ductTable = (mode: "cooling" | "heating-furnace" | "heating-heat-pump") =>
+    tableLocation === null
+      ? null
+      : ductLossFactor({
+          location: tableLocation,
+          mode,
+          stories: plan.stories,
+          insulationR: plan.ducts.insulationR,
+          supplyLeakagePct: plan.ducts.supplyLeakagePct,
+          returnLeakagePct: plan.ducts.returnLeakagePct,
+        });
+  const ductTableCool = ductTable("cooling");
+  const ductTableHeat = ductTable(ductHeatingMode(plan.ducts.heatingSystem));
   const heatingZoneF: Record<ZoneKind, number> = {
     outdoor: to,
     attic: atticHeatF ?? to,
@@ -507,11 +535,30 @@ export function preparePlan(plan: PlanInput, site: PreparedSite): PreparedPlan {
   const roofUaHeatForRegain = encapsulatedDucts ? roofU(a.roofDeck, { season: "heating", gypsumCeiling: false }) * roofAreaFt2 : 0;
   const ductLossFractionHeat = encapsulatedDucts ? roofUaHeatForRegain / (roofUaHeatForRegain + ceilingUaHeat) : 1;
   const ductLossFractionCool = encapsulatedDucts ? roofUaCool / (roofUaCool + ceilingUaCool) : 1;
-  heating.ducts =
-    ductLossFractionHeat *
-    wrapDuctError(() =>
-      ductLoad(ducts, envelopeHeatBtuh, "heating", heatingZoneF[ductZone], ti, HEATING_SUPPLY_DELTA_F, site.sensibleFactor, 0),
-    ).sensibleBtuh;
+  if (ductTableHeat !== null && ductTableCool !== null) {
+    // HoF 2021 ch. 17 eq. 19: q_d = F_dl × q_bl, q_bl the building's load without ducts.
+    heating.ducts = ductTableHeat.factor * envelopeHeatBtuh;
+    const system = plan.ducts.heatingSystem === "heat-pump" ? "heat pump" : "furnace";
+    notes.push(
+      `Ducts: HoF 2021 ch. 17 Table 6 duct loss/gain factors (${tableLocation}, ${plan.stories >= 2 ? "2 or more stories" : "1 story"}): ` +
+        `cooling ${ductTableCool.factor.toFixed(3)}, heating (${system}) ${ductTableHeat.factor.toFixed(3)} of the building load. ` +
+        "Typical factors, guidance only; duct latent gain from return leakage is our estimate.",
+    );
+    for (const n of ductTableCool.notes) notes.push(n);
+  } else {
+    heating.ducts =
+      ductLossFractionHeat *
+      wrapDuctError(() =>
+        ductLoad(ducts, envelopeHeatBtuh, "heating", heatingZoneF[ductZone], ti, HEATING_SUPPLY_DELTA_F, site.sensibleFactor, 0),
+      ).sensibleBtuh;
+    if (ducts.outsideEnvelope) {
+      notes.push(
+        plan.ducts.method === "handbook-table"
+          ? `Ducts in the ${plan.ducts.location}: the handbook duct-factor table has no such location, so a simple conduction-and-leakage model is used (lib/load/README.md).`
+          : "Duct losses by a simple conduction-and-leakage model (lib/load/README.md), not the handbook duct-factor table.",
+      );
+    }
+  }
 
   const heatingResult: HeatingResult = {
     totalBtuh: sum(HEATING_COMPONENTS.map((c) => heating[c])),
@@ -578,6 +625,7 @@ export function preparePlan(plan: PlanInput, site: PreparedSite): PreparedPlan {
     ducts,
     ductZone,
     ductLossFractionCool,
+    ductFactorCool: ductTableCool === null ? null : ductTableCool.factor,
     notes,
   };
   recentPlans[recentNext] = prepared;
@@ -745,13 +793,20 @@ function coolingDay(p: PreparedPlan, facingAzimuthDeg: number): CoolingResult {
     site.latentFactor *
     (zone === "basement" || zone === "indoor" || (zone === "attic" && at.kind === "encapsulated") ? 0 : site.latentDeltaGr);
   const supplyDeltaF = p.plan.coolingSupplyDeltaF;
+  const ductFactorCool = p.ductFactorCool;
+  const ductReturnLeakage = p.ducts.returnLeakageFraction;
   let peak = 0;
   try {
     for (let h = 0; h < 24; h++) {
       rooms[h] =
         walls[h] + windows[h] + doors[h] + ceilings[h] + vaulted[h] + skylights[h] + fixed.floors[h] +
         fixed.foundationWalls[h] + fixed.garageWall[h] + fixed.infiltration[h] + fixed.ventilation[h] + fixed.internal;
-      if (rooms[h] > 0 && p.ducts.outsideEnvelope) {
+      if (rooms[h] > 0 && ductFactorCool !== null) {
+        // HoF 2021 ch. 17 eq. 19 with the Table 6 cooling factor (sensible only). Latent: return
+        // leakage draws duct-zone air (our estimate; the table notes leakage latent gain separately).
+        ducts[h] = ductFactorCool * rooms[h];
+        ductLatent[h] = Math.max(0, ductReturnLeakage * ((rooms[h] + ducts[h]) / (site.sensibleFactor * supplyDeltaF)) * latentPerCfm);
+      } else if (rooms[h] > 0 && p.ducts.outsideEnvelope) {
         const zoneF =
           zone === "attic" ? atticF[h] : zone === "crawl" ? site.dailyMeanOutdoorF : zone === "garage" ? p.garageCoolingF[h] : tic;
         const d = ductLoadOf(p.ducts, rooms[h], "cooling", zoneF, tic, supplyDeltaF, site.sensibleFactor, latentPerCfm);
@@ -847,9 +902,6 @@ function validate(
 function facingResult(p: PreparedPlan, facingAzimuthDeg: number): FacingLoads {
   const az = normalizeAzimuth(facingAzimuthDeg);
   const notes = [...p.notes];
-  if (p.ducts.outsideEnvelope) {
-    notes.push("Duct losses by a simple conduction-and-leakage model (lib/load/README.md), not the handbook duct-factor table.");
-  }
   return {
     engineVersion: ENGINE_VERSION,
     facingAzimuthDeg: az,

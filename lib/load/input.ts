@@ -10,6 +10,7 @@
  */
 import { z } from "zod";
 import { LoadInputError, type LoadInputIssue, type ValidRange } from "./errors";
+import { DUCT_TABLE_MAX_EXTRAPOLATED_LEAKAGE_PCT, ductTableLocation } from "./ducts";
 
 // ---------------------------------------------------------------------------------------------
 // Choice lists (const lists + zod enums) so grids and importers can offer them.
@@ -73,6 +74,19 @@ export const DUCT_LOCATIONS = [
   "garage",
 ] as const;
 export type DuctLocation = (typeof DUCT_LOCATIONS)[number];
+
+/**
+ * How duct losses and gains are estimated. handbook-table: HoF 2021 ch. 17 eq. 19 with the Table 6
+ * duct loss/gain factors (vented attic, vented crawlspace, unconditioned basement); ducts in an
+ * encapsulated attic or a garage, which the table does not cover, fall back to conduction-leakage.
+ * conduction-leakage: our own conduction-and-leakage model (lib/load/ducts.ts).
+ */
+export const DUCT_METHODS = ["handbook-table", "conduction-leakage"] as const;
+export type DuctMethod = (typeof DUCT_METHODS)[number];
+
+/** Heating equipment behind the ducts: picks the H/F or H/HP row of HoF 2021 ch. 17 Table 6. */
+export const DUCT_HEATING_SYSTEMS = ["furnace", "heat-pump"] as const;
+export type DuctHeatingSystem = (typeof DUCT_HEATING_SYSTEMS)[number];
 
 export const VENTILATION_KINDS = ["none", "exhaust", "supply", "balanced"] as const;
 export type VentilationKind = (typeof VENTILATION_KINDS)[number];
@@ -361,6 +375,28 @@ export const ductsSchema = z.object({
   supplyLeakagePct: ranged(0, 50, "%").default(5),
   /** Return-side leakage from outside the envelope, % of system airflow. */
   returnLeakagePct: ranged(0, 50, "%").default(5),
+  /** Duct loss method (default: the handbook duct loss/gain factors). */
+  method: choice(DUCT_METHODS, "duct method").default("handbook-table"),
+  /** Furnace or heat pump (the heat pump's cooler supply air loses a larger share in the ducts). */
+  heatingSystem: choice(DUCT_HEATING_SYSTEMS, "duct heating system").default("furnace"),
+}).superRefine((ducts, ctx) => {
+  // The handbook table covers 5–11 % per side; we extrapolate it only so far (lib/load/ducts.ts).
+  const meanPct = (ducts.supplyLeakagePct + ducts.returnLeakagePct) / 2;
+  if (
+    ducts.method === "handbook-table" &&
+    ductTableLocation(ducts.location) !== null &&
+    meanPct > DUCT_TABLE_MAX_EXTRAPOLATED_LEAKAGE_PCT
+  ) {
+    ctx.addIssue({
+      code: "custom",
+      path: ["supplyLeakagePct"],
+      message:
+        `duct leakage of ${ducts.supplyLeakagePct} % supply / ${ducts.returnLeakagePct} % return (mean ${meanPct} % per side) ` +
+        `is beyond what the handbook duct-factor table can be stretched to (it covers 5–11 % per side; we extrapolate ` +
+        `to ${DUCT_TABLE_MAX_EXTRAPOLATED_LEAKAGE_PCT} %); use ducts.method "conduction-leakage" or test the ducts`,
+      params: { range: { min: 0, max: DUCT_TABLE_MAX_EXTRAPOLATED_LEAKAGE_PCT, unit: "% (mean of supply and return)" } },
+    });
+  }
 });
 export type DuctsInput = z.output<typeof ductsSchema>;
 
