@@ -1,5 +1,5 @@
 import { defineConfig } from "@playwright/test";
-import { E2E_DATABASE, TEST_APP_PORT, TEST_MAILBOX_DIR, TEST_NEXTAUTH_SECRET, TEST_SMTP_PORT, testDatabaseUrl } from "./tests/support/test-env";
+import { E2E_DATABASE, TEST_APP_PORT, TEST_MAILBOX_DIR, TEST_NEXTAUTH_SECRET, TEST_S3_PORT, TEST_SMTP_PORT, testDatabaseUrl } from "./tests/support/test-env";
 
 const baseURL = `http://127.0.0.1:${TEST_APP_PORT}`;
 
@@ -33,6 +33,7 @@ export default defineConfig({
       SMTP_HOST: "127.0.0.1",
       SMTP_PORT: String(TEST_SMTP_PORT),
       PLATLOAD_MAILBOX_DIR: TEST_MAILBOX_DIR,
+      S3_ENDPOINT: `http://127.0.0.1:${TEST_S3_PORT}`,
       NEXT_TELEMETRY_DISABLED: "1",
     },
   },

@@ -1,6 +1,6 @@
 import { fileURLToPath } from "node:url";
 import { defineConfig } from "vitest/config";
-import { INTEGRATION_DATABASE, TEST_MAILBOX_DIR, TEST_NEXTAUTH_SECRET, TEST_SMTP_PORT, testDatabaseUrl } from "./tests/support/test-env";
+import { INTEGRATION_DATABASE, TEST_MAILBOX_DIR, TEST_NEXTAUTH_SECRET, TEST_S3_PORT, TEST_SMTP_PORT, testDatabaseUrl } from "./tests/support/test-env";
 
 const root = fileURLToPath(new URL("./", import.meta.url));
 
@@ -29,6 +29,7 @@ export default defineConfig({
             SMTP_HOST: "127.0.0.1",
             SMTP_PORT: String(TEST_SMTP_PORT),
             PLATLOAD_MAILBOX_DIR: TEST_MAILBOX_DIR,
+            S3_ENDPOINT: `http://127.0.0.1:${TEST_S3_PORT}`,
           },
         },
       },

@@ -12,18 +12,20 @@ ensure_apt mariadbd mariadb-server
 ensure_node_modules
 bash scripts/db.sh start demo
 bash scripts/mail.sh start demo
+bash scripts/s3.sh start demo
 
 export DATABASE_URL="$(bash scripts/db.sh url demo)"
 export NEXTAUTH_SECRET="$(ensure_secret)"
 export NEXTAUTH_URL="http://127.0.0.1:$PORT"
 export SMTP_HOST=127.0.0.1 SMTP_PORT=3712
 export PLATLOAD_MAILBOX_DIR="$(bash scripts/mail.sh dir demo)"
+export S3_ENDPOINT="http://127.0.0.1:$(bash scripts/s3.sh port demo)"
 
 npx tsx scripts/migrate.ts
 npx tsx db/seed.ts
 npx next build
 
-stop_all() { bash scripts/mail.sh stop demo || true; bash scripts/db.sh stop demo || true; }
+stop_all() { bash scripts/s3.sh stop demo || true; bash scripts/mail.sh stop demo || true; bash scripts/db.sh stop demo || true; }
 trap stop_all EXIT
 
 cat <<MSG

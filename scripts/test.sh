@@ -10,10 +10,11 @@ export NEXT_TELEMETRY_DISABLED=1 VITE_CONFIG_NATIVE_IGNORE_WARNING=true
 ensure_apt mariadbd mariadb-server chromium chromium
 ensure_node_modules
 
-stop_all() { bash scripts/mail.sh stop test >/dev/null || true; bash scripts/db.sh stop test >/dev/null || true; }
+stop_all() { bash scripts/s3.sh stop test >/dev/null || true; bash scripts/mail.sh stop test >/dev/null || true; bash scripts/db.sh stop test >/dev/null || true; }
 trap stop_all EXIT
 bash scripts/db.sh start test
 bash scripts/mail.sh start test
+bash scripts/s3.sh start test
 
 started=$(date +%s)
 echo "== type check"

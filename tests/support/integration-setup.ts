@@ -9,5 +9,6 @@ export default async function setup() {
   const root = path.resolve(__dirname, "../..");
   execFileSync("bash", [path.join(root, "scripts/db.sh"), "start", "test"], { stdio: "inherit" });
   execFileSync("bash", [path.join(root, "scripts/mail.sh"), "start", "test"], { stdio: "inherit" });
+  execFileSync("bash", [path.join(root, "scripts/s3.sh"), "start", "test"], { stdio: "inherit" });
   await freshDatabase(INTEGRATION_DATABASE);
 }
