@@ -2,7 +2,8 @@
  * A hand calculation of a simple box house's heating load, written out with its arithmetic:
  * Σ area × U × ΔT for each surface, the slab's F × P × ΔT, plus infiltration 1.10 × cfm × ΔT.
  * The U-factors are worked by the parallel-path method from the handbook resistances
- * (HoF 2021 ch. 26 Tables 1 and 10); the infiltration by HoF 2021 ch. 16 eq. 41–43 and 48.
+ * (HoF 2021 ch. 26 Tables 1 and 10); the infiltration by HoF 2021 ch. 16 eq. 41–43 and 48; the
+ * duct loss by HoF 2021 ch. 17 eq. 19 with the Table 6 factor.
  */
 import { describe, expect, it } from "vitest";
 import { computeFacingLoads } from "../../../lib/load";
@@ -97,5 +98,14 @@ describe("hand calculation: box house heating load", () => {
     expect(c.ventilation).toBe(0);
     expect(c.ducts).toBe(0);
     near(result.totalBtuh, total);
+  });
+
+  it("with the ducts in the vented attic the duct loss is 0.13 of that total (HoF 2021 ch. 17 eq. 19 and Table 6)", () => {
+    // Table 6, attic, 1 story, 5 %/5 % leakage, R-8 (R-1.4 m²·K/W), heating with a furnace: F_dl = 0.13.
+    const ducts = 0.13 * total; //                               ≈ 0.13 × 24,204 ≈ 3147 Btu/h
+    const attic = { ...box, ducts: { location: "vented-attic", insulationR: 8, supplyLeakagePct: 5, returnLeakagePct: 5 } };
+    const result = computeFacingLoads(attic, site, 0).heating;
+    expect(Math.abs(result.byComponent.ducts - ducts)).toBeLessThanOrEqual(0.005 * ducts);
+    expect(Math.abs(result.totalBtuh - (total + ducts))).toBeLessThanOrEqual(0.005 * (total + ducts));
   });
 });

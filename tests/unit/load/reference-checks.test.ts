@@ -6,6 +6,7 @@ import SunCalc from "suncalc";
 import { describe, expect, it } from "vitest";
 import { ceilingU, wallU } from "../../../lib/load/assemblies";
 import { computeFacingLoads } from "../../../lib/load";
+import { ductLossFactor } from "../../../lib/load/ducts";
 import { ashrae622VentilationCfm, lblInfiltrationLps } from "../../../lib/load/infiltration";
 import { defaultInternalSensibleW, occupantsOf } from "../../../lib/load/internal-gains";
 import { humidityRatioGrFromRelHum, humidityRatioGrFromWetBulb, SEA_LEVEL_PRESSURE_PSIA } from "../../../lib/load/psychrometrics";
@@ -36,6 +37,10 @@ function atlanta3pmVertical60WofS() {
   const sky = clearSkyIrradiance(JULY_21, sun.altitudeDeg, ATLANTA.tauBeam, ATLANTA.tauDiffuse);
   // 60° west of south = azimuth 240° clockwise from north.
   return surfaceIrradiance(sky, sun, 240, 90, 0.2);
+}
+
+function exampleDuctFactor(mode: "cooling" | "heating-furnace"): number {
+  return ductLossFactor({ location: "attic", mode, stories: 1, insulationR: 8, supplyLeakagePct: 5, returnLeakagePct: 5 }).factor;
 }
 
 /** The engine's value for each reference row. */
@@ -73,6 +78,9 @@ const ACTUAL: Record<string, () => number> = {
     if (atticF === null) throw new Error("no attic temperature");
     return atticF;
   },
+  // The example's ducts: attic, R-8 wrap, "well-sealed" (the table's 5 %/5 % column), one story, furnace.
+  "duct-loss-example-heating": () => 6909 * exampleDuctFactor("heating-furnace"),
+  "duct-gain-example-cooling": () => 3225 * exampleDuctFactor("cooling"),
   ton: () => BTUH_PER_TON,
   "occupants-default": () => occupantsOf({ bedrooms: 3 }),
 };
