@@ -1,0 +1,7 @@
+/**
+ * Reports: the equipment schedule (counts and costs per system, community and month) and the
+ * per-lot load reports as PDF. Pure library code (no database, no Next.js).
+ */
+export * from "./errors";
+export * from "./equipment-schedule";
+export * from "./lot-report";
