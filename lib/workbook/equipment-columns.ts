@@ -55,9 +55,9 @@ export const EQUIPMENT_COLUMNS: readonly EquipmentColumnDef[] = [
     meaning: "ac-furnace: air conditioner with a furnace; heat-pump: heat pump alone; heat-pump-backup: heat pump with backup heat (strips or a furnace); furnace: furnace alone, no cooling.",
     example: "ac-furnace",
   },
-  { key: "outdoor_model", header: "Outdoor unit model", group: "Model numbers", value: modelText, required: false, meaning: "Model number of the condenser or heat pump outdoor unit (required for every type that cools).", example: "OC-30A2" },
-  { key: "indoor_model", header: "Indoor coil or air handler model", group: "Model numbers", value: modelText, required: false, meaning: "Model number of the evaporator coil or air handler matched with the outdoor unit.", example: "IC-30B" },
-  { key: "furnace_model", header: "Furnace model", group: "Model numbers", value: modelText, required: false, meaning: "Model number of the furnace (required for ac-furnace and furnace).", example: "GF-60V" },
+  { key: "outdoor_model", header: "Outdoor unit model", group: "Model numbers", value: modelText, required: false, meaning: "Model number of the condenser or heat pump outdoor unit (required for every type that cools).", example: "NV-C30S" },
+  { key: "indoor_model", header: "Indoor coil or air handler model", group: "Model numbers", value: modelText, required: false, meaning: "Model number of the evaporator coil or air handler matched with the outdoor unit.", example: "NV-E30B" },
+  { key: "furnace_model", header: "Furnace model", group: "Model numbers", value: modelText, required: false, meaning: "Model number of the furnace (required for ac-furnace and furnace).", example: "NV-G60M" },
   {
     key: "nominal_tons",
     header: "Nominal tons",
@@ -502,14 +502,14 @@ export const EQUIPMENT_TEMPLATE_ROW: EquipmentExampleRow = {
  * furnace's input (from memory). Prices are invented.
  */
 export const EXAMPLE_EQUIPMENT_ROWS: readonly EquipmentExampleRow[] = [
-  { system_code: "AC18-F30", system_type: "ac-furnace", outdoor_model: "NV-C18S", indoor_model: "NV-E18A", furnace_model: "NV-G30M", nominal_tons: "1.5", cooling_total_btuh: "17,300", cooling_sensible_btuh: "13,500", furnace_output_btuh: "28,500", seer2: "14.3", afue_pct: "96%", price_usd: "$3,420" },
+  { system_code: "AC18-F30", system_type: "ac-furnace", outdoor_model: "NV-C18S", indoor_model: "NV-E18A", furnace_model: "NV-G30M", nominal_tons: "1.5", cooling_total_btuh: "17,300", cooling_sensible_btuh: "13,400", furnace_output_btuh: "28,500", seer2: "14.3", afue_pct: "96%", price_usd: "$3,420" },
   { system_code: "AC24-F30", system_type: "ac-furnace", outdoor_model: "NV-C24S", indoor_model: "NV-E24A", furnace_model: "NV-G30M", nominal_tons: "2", cooling_total_btuh: "23,100", cooling_sensible_btuh: "18,000", furnace_output_btuh: "28,500", seer2: "14.3", afue_pct: "96%", price_usd: "$3,730" },
   { system_code: "AC30-F40", system_type: "ac-furnace", outdoor_model: "NV-C30S", indoor_model: "NV-E30B", furnace_model: "NV-G40M", nominal_tons: "2.5", cooling_total_btuh: "28,800", cooling_sensible_btuh: "22,400", furnace_output_btuh: "38,000", seer2: "14.3", afue_pct: "96%", price_usd: "$4,090" },
   { system_code: "AC36-F60", system_type: "ac-furnace", outdoor_model: "NV-C36S", indoor_model: "NV-E36B", furnace_model: "NV-G60M", nominal_tons: "3", cooling_total_btuh: "34,600", cooling_sensible_btuh: "26,600", furnace_output_btuh: "57,000", seer2: "14.3", afue_pct: "96%", price_usd: "$4,540" },
   { system_code: "AC42-F60", system_type: "ac-furnace", outdoor_model: "NV-C42S", indoor_model: "NV-E42C", furnace_model: "NV-G60M", nominal_tons: "3.5", cooling_total_btuh: "40,300", cooling_sensible_btuh: "31,000", furnace_output_btuh: "57,000", seer2: "14.3", afue_pct: "96%", price_usd: "$4,980" },
   { system_code: "AC48-F80", system_type: "ac-furnace", outdoor_model: "NV-C48S", indoor_model: "NV-E48C", furnace_model: "NV-G80M", nominal_tons: "4", cooling_total_btuh: "46,100", cooling_sensible_btuh: "35,000", furnace_output_btuh: "76,000", seer2: "14.3", afue_pct: "96%", price_usd: "$5,480" },
   { system_code: "HP24", system_type: "heat-pump", outdoor_model: "NV-H24V", indoor_model: "NV-A24V", nominal_tons: "2", cooling_total_btuh: "23,000", cooling_sensible_btuh: "17,900", heat_pump_47f_btuh: "23,600", heat_pump_17f_btuh: "14,400", seer2: "16.0", hspf2: "8.1", price_usd: "$5,150" },
-  { system_code: "HP30-B10", system_type: "heat-pump-backup", outdoor_model: "NV-H30V", indoor_model: "NV-A30V", nominal_tons: "2.5", cooling_total_btuh: "28,700", cooling_sensible_btuh: "22,400", heat_pump_47f_btuh: "29,000", heat_pump_17f_btuh: "17,600", backup_heat_btuh: "34,100", seer2: "16.0", hspf2: "8.1", price_usd: "$5,740" },
+  { system_code: "HP30-B10", system_type: "heat-pump-backup", outdoor_model: "NV-H30V", indoor_model: "NV-A30V", nominal_tons: "2.5", cooling_total_btuh: "28,700", cooling_sensible_btuh: "22,300", heat_pump_47f_btuh: "29,000", heat_pump_17f_btuh: "17,600", backup_heat_btuh: "34,100", seer2: "16.0", hspf2: "8.1", price_usd: "$5,740" },
   { system_code: "HP36-B10", system_type: "heat-pump-backup", outdoor_model: "NV-H36V", indoor_model: "NV-A36V", nominal_tons: "3", cooling_total_btuh: "34,500", cooling_sensible_btuh: "26,900", heat_pump_47f_btuh: "34,800", heat_pump_17f_btuh: "21,000", backup_heat_btuh: "34,100", seer2: "15.2", hspf2: "7.8", price_usd: "$6,230" },
   { system_code: "F40", system_type: "furnace", furnace_model: "NV-G40M", furnace_output_btuh: "38,000", afue_pct: "96%", price_usd: "$1,840" },
 ];
