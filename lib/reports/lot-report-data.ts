@@ -228,9 +228,10 @@ const MISFIT_SHORT: Record<string, string> = {
   "no-cooling": "no cooling",
 };
 
-/** The closest misfit: fewest reasons, then cooling capacity nearest the load. */
+/** The closest misfit: a system that cools when the house needs cooling, fewest reasons, then cooling capacity nearest the load. */
 function closest(evaluations: readonly SystemEvaluation[]): SystemEvaluation | undefined {
-  return [...evaluations].sort((a, b) => a.reasons.length - b.reasons.length || Math.abs((a.coolingPctOfLoad ?? 1e9) - 100) - Math.abs((b.coolingPctOfLoad ?? 1e9) - 100))[0];
+  const cooling = evaluations.filter((e) => !e.reasons.some((r) => r.reason === "no-cooling"));
+  return [...(cooling.length > 0 ? cooling : evaluations)].sort((a, b) => a.reasons.length - b.reasons.length || Math.abs((a.coolingPctOfLoad ?? 1e9) - 100) - Math.abs((b.coolingPctOfLoad ?? 1e9) - 100))[0];
 }
 
 /** lib/equipment's selection → the lot's choice; when nothing fits, the reason names the closest system's shortfalls. */

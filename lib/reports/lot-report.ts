@@ -201,7 +201,7 @@ function niceCeil(value: number): number {
 /** The 24-hour sensible cooling profile: a vector line chart with axes, gridlines and labels. */
 function coolingProfileChart(cursor: Cursor, report: LotReport): void {
   const { doc } = cursor;
-  const heightPt = 140;
+  const heightPt = 128;
   ensureSpace(cursor, heightPt + 20);
   const x0 = PAGE.left + 52;
   const y0 = cursor.y + 8;
@@ -310,13 +310,13 @@ function drawLot(cursor: Cursor, report: LotReport): void {
   facts(cursor, [["Location", d.location]], { labelWidth: 118, columns: 1 });
   facts(cursor, [
     ["Latitude · elevation", `${num(d.latitudeDeg, 1)}° · ${num(d.elevationFt)} ft`],
+    ["Design month", MONTHS[d.designMonth - 1]],
     ["Heating outdoor dry bulb", `${num(d.heatingOutdoorDbF)} °F`],
     ["Heating indoor", `${num(d.indoorHeatingF)} °F`],
     ["Cooling outdoor dry bulb", `${num(d.coolingOutdoorDbF)} °F`],
     ["Coincident wet bulb", `${num(d.coolingOutdoorWbF)} °F`],
     ["Daily range", `${num(d.dailyRangeF)} °F`],
     ["Cooling indoor", `${num(d.indoorCoolingF)} °F, ${num(d.indoorCoolingRhPct)} % RH`],
-    ["Design month", MONTHS[d.designMonth - 1]],
   ], { labelWidth: 118 });
 
   // Envelope: the ADDED insulation as installed.
@@ -357,6 +357,18 @@ function drawLot(cursor: Cursor, report: LotReport): void {
     e.windows.map((w) => [w.facade + (w.windowGroups > 1 ? ` (${w.windowGroups} groups)` : ""), w.faces, num(w.areaFt2), num(w.uFactor, 2), num(w.shgc, 2), num(w.overhangDepthFt, 1), num(w.doorAreaFt2)]),
   );
 
+  // Review, version and date close the first page.
+  sectionTitle(cursor, "Review and method");
+  const a = report.approval;
+  facts(
+    cursor,
+    [
+      ["Reviewer's approval", a ? `Approved by ${a.reviewerName}${a.credential ? `, ${a.credential}` : ""}, on ${a.approvedOn}` : "Not approved: this plan revision has no reviewer's approval."],
+      ["Engine version", `Platload load engine ${report.engineVersion}`],
+      ["Generated", dateText(report.generatedAt)],
+    ],
+    { columns: 1, labelWidth: 130 },
+  );
   // Loads.
   const h = report.heating;
   const c = report.cooling;
@@ -432,21 +444,9 @@ function drawLot(cursor: Cursor, report: LotReport): void {
     { columns: 1, labelWidth: 130 },
   );
 
-  // Review, version, date, notes.
-  sectionTitle(cursor, "Review and method");
-  const a = report.approval;
-  facts(
-    cursor,
-    [
-      ["Reviewer's approval", a ? `Approved by ${a.reviewerName}${a.credential ? `, ${a.credential}` : ""}, on ${a.approvedOn}` : "Not approved: this plan revision has no reviewer's approval."],
-      ["Engine version", `Platload load engine ${report.engineVersion}`],
-      ["Generated", dateText(report.generatedAt)],
-    ],
-    { columns: 1, labelWidth: 130 },
-  );
   if (report.notes.length > 0) {
     ensureSpace(cursor, 30);
-    cursor.y += 2;
+    cursor.y += 8;
     write(cursor, "Assumptions the engine applied", { size: 8.5, bold: true, color: COLOR.muted });
     for (const note of report.notes) {
       ensureSpace(cursor, 12);

@@ -59,8 +59,8 @@ describe("equipment catalog: the example file and the templates", () => {
     if (!result.ok) throw new Error("example does not validate");
     for (const system of result.systems.filter((s) => s.type !== "furnace")) {
       const nominalBtuh = (system.nominalTons ?? 0) * 12_000;
-      expect(system.coolingTotalBtuh / nominalBtuh, system.id).toBeGreaterThanOrEqual(0.95);
-      expect(system.coolingTotalBtuh / nominalBtuh, system.id).toBeLessThanOrEqual(0.97);
+      expect((system.coolingTotalBtuh ?? 0) / nominalBtuh, system.id).toBeGreaterThanOrEqual(0.95);
+      expect((system.coolingTotalBtuh ?? 0) / nominalBtuh, system.id).toBeLessThanOrEqual(0.97);
       const sensibleRatio = (system.coolingSensibleBtuh ?? 0) / (system.coolingTotalBtuh ?? 1);
       expect(sensibleRatio, system.id).toBeGreaterThanOrEqual(0.72);
       expect(sensibleRatio, system.id).toBeLessThanOrEqual(0.78);
