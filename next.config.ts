@@ -5,6 +5,8 @@ const nextConfig: NextConfig = {
   serverExternalPackages: ["exceljs", "mysql2", "nodemailer", "mailparser", "bcryptjs", "psychrolib"],
   poweredByHeader: false,
   typedRoutes: false,
+  // The test command type-checks the whole project with `tsc --noEmit` before it builds.
+  typescript: { ignoreBuildErrors: true },
   turbopack: { root: __dirname },
 };
 

@@ -117,9 +117,12 @@ export async function listImports({ db, accountId }: { db: Database; accountId: 
       createdAt: imports.createdAt,
       finishedAt: imports.finishedAt,
       userName: users.name,
+      communityId: imports.communityId,
+      communityName: communities.name,
     })
     .from(imports)
     .innerJoin(users, eq(users.id, imports.userId))
+    .leftJoin(communities, eq(communities.id, imports.communityId))
     .where(eq(imports.accountId, accountId))
     .orderBy(desc(imports.createdAt));
 }
