@@ -16,6 +16,7 @@
  */
 import { SYSTEM_TYPES, catalogSystemSchema, type CatalogSystemInput, type SystemType } from "../equipment/catalog";
 import { readTable, type ColumnDef, type ColumnValueType, type RawTable, type TableCellError } from "./columns";
+import { readCsv, writeCsv, writeXlsx } from "./table-io";
 import { QUANTITY_KIND_INFO, type QuantityKind } from "./units";
 
 export const EQUIPMENT_COLUMN_GROUPS = ["System", "Model numbers", "Cooling", "Heating", "Efficiency", "Purchasing"] as const;
@@ -643,4 +644,30 @@ export function renderEquipmentTemplatesDoc(): string {
     "",
   );
   return lines.join("\n");
+}
+
+/**
+ * The equipment files of templates/ (name → content), each validated before it is returned:
+ * for scripts/make-templates.ts to write beside the plan-library files. The XLSX carries the
+ * same header and example row as the CSV template.
+ * @throws Error naming the row, column and reason when an example row does not validate.
+ */
+export async function equipmentTemplateFiles(): Promise<{ name: string; content: string | Uint8Array }[]> {
+  const templateCells = equipmentExampleCells([EQUIPMENT_TEMPLATE_ROW]);
+  const templateCsv = writeCsv(EQUIPMENT_HEADERS, templateCells);
+  const exampleCsv = writeCsv(EQUIPMENT_HEADERS, equipmentExampleCells(EXAMPLE_EQUIPMENT_ROWS));
+  for (const [name, csv] of [["equipment-catalog-template.csv", templateCsv], ["example-equipment.csv", exampleCsv]] as const) {
+    const result = validateEquipmentTable(readCsv(csv));
+    if (!result.ok) throw new Error(`${name} does not validate:\n${result.errors.map((e) => `row ${e.row}, column "${e.column}": ${e.reason}`).join("\n")}`);
+  }
+  const templateXlsx = await writeXlsx(EQUIPMENT_HEADERS, templateCells, {
+    sheetName: "Equipment catalog",
+    columnWidths: EQUIPMENT_COLUMNS.map((column) => Math.min(36, Math.max(12, column.header.length * 0.9))),
+  });
+  return [
+    { name: "equipment-catalog-template.csv", content: `${templateCsv}\r\n` },
+    { name: "equipment-catalog-template.xlsx", content: templateXlsx },
+    { name: "example-equipment.csv", content: `${exampleCsv}\r\n` },
+    { name: "EQUIPMENT.md", content: renderEquipmentTemplatesDoc() },
+  ];
 }

@@ -12,6 +12,7 @@ import {
   EquipmentInputError,
   catalogForHeatingDesign,
   equipmentExampleCells,
+  equipmentTemplateFiles,
   equipmentRowsToTable,
   heatPumpOutputAtF,
   renderEquipmentTemplatesDoc,
@@ -76,10 +77,15 @@ describe("equipment catalog: the example file and the templates", () => {
     }
   });
 
-  it("the files are up to date with the column list", () => {
+  it("the files are up to date with the column list (regenerate with equipmentTemplateFiles)", async () => {
     expect(read("equipment-catalog-template.csv").toString("utf8")).toBe(writeCsv(EQUIPMENT_HEADERS, equipmentExampleCells([EQUIPMENT_TEMPLATE_ROW])) + "\r\n");
     expect(read("example-equipment.csv").toString("utf8")).toBe(writeCsv(EQUIPMENT_HEADERS, equipmentExampleCells(EXAMPLE_EQUIPMENT_ROWS)) + "\r\n");
     expect(read("EQUIPMENT.md").toString("utf8")).toBe(renderEquipmentTemplatesDoc());
+    const files = await equipmentTemplateFiles();
+    expect(files.map((file) => file.name)).toEqual(["equipment-catalog-template.csv", "equipment-catalog-template.xlsx", "example-equipment.csv", "EQUIPMENT.md"]);
+    for (const file of files) if (typeof file.content === "string") expect(read(file.name).toString("utf8"), file.name).toBe(file.content);
+    const xlsx = files.find((file) => file.name.endsWith(".xlsx"))?.content as Uint8Array;
+    expect((await readXlsx(xlsx)).rows).toEqual((await readXlsx(new Uint8Array(read("equipment-catalog-template.xlsx")))).rows);
   });
 
   it("EQUIPMENT.md documents every column by key and header, and carries the caution", () => {
