@@ -54,10 +54,10 @@ export async function updateCommunity({
   locality: string;
   conditions: unknown;
 }) {
-  const site = validConditions(conditions);
   return db.transaction(async (tx) => {
     const [current] = await tx.select().from(communities).where(and(eq(communities.id, communityId), eq(communities.accountId, accountId))).for("update");
     if (!current) throw notFound("That community");
+    const site = validConditions(conditions);
     if (current.version !== version) throw new AppError("conflict", `${current.name} was changed by someone else since you loaded it. Nothing was saved; reload to see the current values.`);
     await assertNameFree(tx, accountId, name, communityId);
     await tx.update(communities).set({ name, locality, conditions: site, version: current.version + 1 }).where(eq(communities.id, communityId));

@@ -12,6 +12,14 @@ import * as planRoute from "@/app/api/plans/[planId]/route";
 import * as plansRoute from "@/app/api/plans/route";
 import * as invitationItemRoute from "@/app/api/team/invitations/[invitationId]/route";
 import * as memberRoute from "@/app/api/team/members/[membershipId]/route";
+import * as approveRoute from "@/app/api/plans/[planId]/approve/route";
+import * as lotImportRoute from "@/app/api/communities/[communityId]/lots/import/route";
+import * as permitScheduleRoute from "@/app/api/communities/[communityId]/permit-schedule/route";
+import * as lotStatusRoute from "@/app/api/lots/[lotId]/status/route";
+import * as plansRoute2 from "@/app/api/plans/route";
+import * as undoRoute from "@/app/api/plans/undo/route";
+import { auditLog, users } from "@/db/schema";
+import { and, eq } from "drizzle-orm";
 import * as teamRoute from "@/app/api/team/route";
 import { createInvitation } from "@/db/queries/team";
 import { seededIds } from "../support/demo-ids";
@@ -40,12 +48,34 @@ describe("account isolation", () => {
       ["PATCH member role", memberRoute.PATCH, { membershipId: String(r.membershipId) }, "PATCH", { role: "viewer" }],
       ["DELETE member", memberRoute.DELETE, { membershipId: String(r.membershipId) }, "DELETE"],
       ["DELETE invitation", invitationItemRoute.DELETE, { invitationId: String(demoInvitationId) }, "DELETE"],
+      ["PATCH community", communityRoute.PATCH, { communityId: String(r.communityId) }, "PATCH", { name: "X", locality: "", version: 1, conditions: {} }],
+      ["PATCH community lots", communityLotsRoute.PATCH, { communityId: String(r.communityId) }, "PATCH", { changes: [{ lotId: r.lotId, version: 1, facing: "N" }] }],
+      ["GET permit schedule", permitScheduleRoute.GET, { communityId: String(r.communityId) }, "GET"],
+      ["POST lot status", lotStatusRoute.POST, { lotId: String(r.lotId) }, "POST", { version: 1, status: "permit_submitted" }],
+      ["PATCH plan cells", plansRoute2.PATCH, {}, "PATCH", { changes: [{ planId: r.planId, version: 1, cells: { bedrooms: "2" } }] }],
     ];
     for (const [label, handler, params, method, body] of attempts) {
       const res = await callRoute(handler, { path: "/api/x", method, params, body, cookie: otherAdminCookie });
       expect(res.status, label).toBe(404);
       expect(res.json.error.code, label).toBe("not_found");
     }
+  });
+
+  it("a consultant reviewing for one builder cannot approve the other builder's plan (404)", async () => {
+    const [consultant] = await getDb().select().from(users).where(eq(users.email, "consultant@loadworks.test"));
+    const cookie = await sessionCookie({ userId: consultant.id, accountId: ids.demoAccountId });
+    const res = await callRoute(approveRoute.POST, { path: "/x", method: "POST", params: { planId: String(ids.otherRecords.planId) }, body: { revisionId: 1, approverName: "Casey Moreau", approverCredential: "none", approvedOn: "2026-12-01" }, cookie });
+    expect(res.status).toBe(404);
+  });
+
+  it("an upload into the other account's community and an undo of its history are not found", async () => {
+    const form = new FormData();
+    form.append("file", new File(["Lot,Plan code,Facing\n1,AS-1450,N\n"], "lots.csv"));
+    const upload = await callRoute(lotImportRoute.POST, { path: "/x", method: "POST", params: { communityId: String(ids.demoRecords.communityId) }, form, cookie: otherAdminCookie });
+    expect(upload.status).toBe(404);
+    const [entry] = await getDb().select().from(auditLog).where(and(eq(auditLog.accountId, ids.demoAccountId))).limit(1);
+    const undo = await callRoute(undoRoute.POST, { path: "/x", method: "POST", body: { entryId: entry.id }, cookie: otherAdminCookie });
+    expect(undo.status).toBe(404);
   });
 
   it("the same routes answer 200 for the account's own records", async () => {
