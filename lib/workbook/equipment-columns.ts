@@ -15,7 +15,7 @@
  * dry bulb.
  */
 import { SYSTEM_TYPES, catalogSystemSchema, type CatalogSystemInput, type SystemType } from "../equipment/catalog";
-import { readTable, type ColumnDef, type ColumnValueType, type RawTable, type TableCellError } from "./columns";
+import { matchColumn, readTable, type ColumnDef, type ColumnValueType, type RawTable, type TableCellError } from "./columns";
 import { readCsv, writeCsv, writeXlsx } from "./table-io";
 import { QUANTITY_KIND_INFO, type QuantityKind } from "./units";
 
@@ -336,7 +336,7 @@ function rowToEntry(values: Record<string, unknown>): EquipmentCatalogEntry {
  * gives the systems, in file order.
  */
 export function validateEquipmentTable(table: RawTable): EquipmentTableResult {
-  const priceIndex = table.headers.findIndex((text) => EQUIPMENT_COLUMNS.find((c) => c.key === "price_usd" && (c.header.toLowerCase() === text.trim().toLowerCase() || c.key === text.trim().toLowerCase())));
+  const priceIndex = table.headers.findIndex((text) => matchColumn(EQUIPMENT_COLUMNS, text)?.key === "price_usd");
   const prepared: RawTable =
     priceIndex < 0
       ? table

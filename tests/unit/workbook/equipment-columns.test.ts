@@ -101,10 +101,13 @@ describe("equipment catalog: the example file and the templates", () => {
 
 describe("equipment catalog: bad rows are reported by row and column, and nothing is returned", () => {
   it("a good table reads; units and prices as builders type them", () => {
-    const result = validateEquipmentTable(tableOf([{ ...GOOD_AC, cooling_total_btuh: "28800 btuh", price_usd: "4,250.50 USD" }, GOOD_HP]));
+    const result = validateEquipmentTable(
+      tableOf([{ ...GOOD_AC, cooling_total_btuh: "28800 btuh", price_usd: "4,250.50 USD" }, GOOD_HP, { ...GOOD_AC, system_code: "T-F", cooling_total_btuh: "=nominal_tons*12000*0.96", afue_pct: "96%" }]),
+    );
     if (!result.ok) throw new Error(JSON.stringify(result.errors));
     expect(result.systems[0]).toMatchObject({ coolingTotalBtuh: 28_800, priceUsd: 4250.5 });
     expect(result.systems[1]).toMatchObject({ type: "heat-pump", heatingOutputBtuh: 17_600 });
+    expect(result.systems[2]).toMatchObject({ coolingTotalBtuh: 28_800, afuePct: 96, efficiency: "AFUE 96 %" }); // 2.5 × 12,000 × 0.96
   });
 
   it("text in a number cell, a negative capacity, a unit of another kind, a bad price", () => {
