@@ -202,6 +202,8 @@ export const lots = mysqlTable(
     permitSnapshotAt: datetime("permit_snapshot_at", { mode: "date" }),
     equipmentSystemId: ref("equipment_system_id").references(() => equipmentSystems.id),
     equipmentOverride: boolean("equipment_override").notNull().default(false),
+    /** The last equipment selection for this lot: best fit, fitting systems, reasons, ratios, limits used. */
+    selection: json("selection"),
     version: int("version").notNull().default(1),
     createdAt: createdAt(),
   },
@@ -234,6 +236,27 @@ export const imports = mysqlTable(
     finishedAt: datetime("finished_at", { mode: "date", fsp: 3 }),
   },
   (t) => [index("imports_account_time").on(t.accountId, t.createdAt)],
+);
+
+/** Generated files (permit packets, schedules) kept in object storage, with who made them and when. */
+export const packets = mysqlTable(
+  "packets",
+  {
+    id: id(),
+    accountId: ref("account_id").notNull().references(() => accounts.id),
+    communityId: ref("community_id").references(() => communities.id),
+    kind: mysqlEnum("kind", ["permit-packet", "equipment-schedule", "permit-schedule"]).notNull(),
+    fileName: varchar("file_name", { length: 255 }).notNull(),
+    fileKey: varchar("file_key", { length: 300 }).notNull(),
+    contentType: varchar("content_type", { length: 120 }).notNull(),
+    sizeBytes: int("size_bytes").notNull(),
+    lotCount: int("lot_count").notNull().default(0),
+    /** Addresses it was e-mailed to, if any. */
+    sentTo: json("sent_to"),
+    createdByUserId: ref("created_by_user_id").notNull().references(() => users.id),
+    createdAt: createdAt(),
+  },
+  (t) => [index("packets_account_time").on(t.accountId, t.createdAt)],
 );
 
 export const auditLog = mysqlTable(
@@ -293,3 +316,4 @@ export type Lot = typeof lots.$inferSelect;
 export type EquipmentSystem = typeof equipmentSystems.$inferSelect;
 export type ImportRecord = typeof imports.$inferSelect;
 export type AuditEntry = typeof auditLog.$inferSelect;
+export type Packet = typeof packets.$inferSelect;
