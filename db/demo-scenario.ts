@@ -148,13 +148,30 @@ export function demoLots(planCodes: string[]) {
   });
 }
 
+/**
+ * The demo catalog (invented model numbers): air conditioners with a furnace at close capacity
+ * steps, and heat pumps with backup heat. Capacities at design are about 0.96 × nominal for the
+ * largest coil match and lower for the smaller coil matches; sensible about 0.84 of total, as with
+ * a high-airflow setting for a dry design day (invented for the demo; real data sheets govern). Furnace outputs are after efficiency.
+ */
 export const DEMO_EQUIPMENT = [
-  ["ACF-18", "ac-furnace", "MF-CU18", "MF-AH18", "MF-GF40", 1.5, 17400, 13100, 40000, 1850],
-  ["ACF-24", "ac-furnace", "MF-CU24", "MF-AH24", "MF-GF40", 2.0, 23300, 17300, 40000, 2100],
-  ["ACF-30", "ac-furnace", "MF-CU30", "MF-AH30", "MF-GF60", 2.5, 29000, 21500, 60000, 2380],
-  ["ACF-36", "ac-furnace", "MF-CU36", "MF-AH36", "MF-GF60", 3.0, 34800, 25700, 60000, 2640],
-  ["ACF-42", "ac-furnace", "MF-CU42", "MF-AH42", "MF-GF80", 3.5, 40500, 29900, 80000, 2950],
-  ["ACF-48", "ac-furnace", "MF-CU48", "MF-AH48", "MF-GF80", 4.0, 46400, 34100, 80000, 3240],
-  ["HP-24", "heat-pump-backup", "MF-HP24", "MF-AH24E", "", 2.0, 23100, 17200, 0, 2980],
-  ["HP-36", "heat-pump-backup", "MF-HP36", "MF-AH36E", "", 3.0, 34500, 25600, 0, 3620],
+  ["ACF-18", "ac-furnace", "MF-CU18", "MF-AH18", "MF-GF30", 1.5, 17400, 14600, 28800, 1850],
+  ["ACF-20", "ac-furnace", "MF-CU24", "MF-AH18", "MF-GF30", 2.0, 19600, 16500, 28800, 1990],
+  ["ACF-22", "ac-furnace", "MF-CU24", "MF-AH21", "MF-GF30", 2.0, 21700, 18200, 28800, 2060],
+  ["ACF-24", "ac-furnace", "MF-CU24", "MF-AH24", "MF-GF40", 2.0, 23300, 19600, 38400, 2150],
+  ["ACF-25", "ac-furnace", "MF-CU24", "MF-AH27", "MF-GF30", 2.0, 24400, 20500, 28800, 2210],
+  ["ACF-26", "ac-furnace", "MF-CU30", "MF-AH24", "MF-GF40", 2.5, 25600, 21500, 38400, 2290],
+  ["ACF-28", "ac-furnace", "MF-CU30", "MF-AH27", "MF-GF40", 2.5, 27300, 22900, 38400, 2360],
+  ["ACF-29", "ac-furnace", "MF-CU30", "MF-AH30", "MF-GF40", 2.5, 29000, 24400, 38400, 2420],
+  ["ACF-31", "ac-furnace", "MF-CU30", "MF-AH33", "MF-GF40", 2.5, 30600, 25700, 38400, 2490],
+  ["ACF-32", "ac-furnace", "MF-CU36", "MF-AH30", "MF-GF40", 3.0, 31400, 26400, 38400, 2560],
+  ["ACF-33", "ac-furnace", "MF-CU36", "MF-AH33", "MF-GF40", 3.0, 32400, 27200, 38400, 2600],
+  ["ACF-34", "ac-furnace", "MF-CU36", "MF-AH33", "MF-GF60", 3.0, 33300, 28000, 57600, 2640],
+  ["ACF-36", "ac-furnace", "MF-CU36", "MF-AH36", "MF-GF60", 3.0, 34800, 29200, 57600, 2710],
+  ["ACF-40", "ac-furnace", "MF-CU42", "MF-AH36", "MF-GF60", 3.5, 38300, 32200, 57600, 2880],
+  ["ACF-42", "ac-furnace", "MF-CU42", "MF-AH42", "MF-GF60", 3.5, 40500, 34000, 57600, 2990],
+  ["ACF-48", "ac-furnace", "MF-CU48", "MF-AH48", "MF-GF80", 4.0, 46400, 39000, 76800, 3290],
+  ["HP-24", "heat-pump-backup", "MF-HP24", "MF-AH24E", "", 2.0, 23100, 19400, 0, 2980],
+  ["HP-30", "heat-pump-backup", "MF-HP30", "MF-AH30E", "", 2.5, 28800, 24200, 0, 3310],
+  ["HP-36", "heat-pump-backup", "MF-HP36", "MF-AH36E", "", 3.0, 34500, 29000, 0, 3620],
 ] as const;

@@ -2,6 +2,7 @@
 // written back in a few statements. No "server-only" guard: the seed and the benchmark use it too.
 import { and, eq, inArray, sql, type SQL } from "drizzle-orm";
 import { computeFacingLoads, parseSiteConditions, type FacingLoads, type PlanInput, type SiteConditions } from "@/lib/load";
+import { LotEquipmentSelector, type LotSelection } from "./equipment";
 import type { Database } from "./index";
 import { communities, lots, planRevisions, plans, type LotStatus } from "./schema";
 
@@ -45,6 +46,9 @@ export interface PermitSnapshot {
   input: PlanInput;
   result: FacingLoads;
   summary: LotResults;
+  /** The equipment chosen when the permit was submitted (kept with the frozen loads). */
+  selection: LotSelection | null;
+  equipmentSystemId: number | null;
   engineVersion: string;
 }
 
@@ -103,10 +107,15 @@ export class LotCalculator {
     const full = computeFacingLoads(revision.input, site, lot.facingDeg, { validated: true });
     return { full, summary: summarize(full, totals, revision, lot.previous) };
   }
+
+  /** Equipment for a lot's loads from the account's catalog, at the community's heating design temperature. */
+  select(selector: LotEquipmentSelector, communityId: number, summary: LotResults, overrideSystemId: number | null) {
+    return selector.select({ communityId, heatingOutdoorDbF: this.site(communityId).heatingOutdoorDbF }, summary, overrideSystemId);
+  }
 }
 
 /** Writes many lots' results in a few statements (CASE per id, 500 ids a statement). */
-export async function writeResults(tx: Db, rows: { id: number; results: LotResults }[]) {
+export async function writeResults(tx: Db, rows: { id: number; results: LotResults; selection?: { selection: LotSelection; systemId: number | null } }[]) {
   const now = new Date();
   for (let i = 0; i < rows.length; i += 500) {
     const chunk = rows.slice(i, i + 500);
@@ -120,6 +129,17 @@ export async function writeResults(tx: Db, rows: { id: number; results: LotResul
         resultsComputedAt: now,
       })
       .where(inArray(lots.id, chunk.map((r) => r.id)));
+    // Frozen lots keep the selection of their permit snapshot; the others get a new one.
+    const selected = chunk.filter((r) => r.selection);
+    if (selected.length > 0) {
+      await tx
+        .update(lots)
+        .set({
+          selection: sql`CASE ${lots.id} ${sql.join(selected.map((r) => sql`WHEN ${r.id} THEN ${JSON.stringify(r.selection!.selection)}`), sql` `)} END`,
+          equipmentSystemId: sql`CASE ${lots.id} ${sql.join(selected.map((r) => sql`WHEN ${r.id} THEN ${r.selection!.systemId}`), sql` `)} END`,
+        })
+        .where(inArray(lots.id, selected.map((r) => r.id)));
+    }
   }
 }
 
@@ -140,7 +160,18 @@ export async function recomputeLots(tx: Db, { accountId, communityId, planIds, l
     filters.push(inArray(lots.id, lotIds));
   }
   const rows = await tx
-    .select({ id: lots.id, communityId: lots.communityId, facingDeg: lots.facingDeg, results: lots.results, revisionId: planRevisions.id, revisionNumber: planRevisions.number, input: planRevisions.input })
+    .select({
+      id: lots.id,
+      communityId: lots.communityId,
+      facingDeg: lots.facingDeg,
+      results: lots.results,
+      status: lots.status,
+      equipmentSystemId: lots.equipmentSystemId,
+      equipmentOverride: lots.equipmentOverride,
+      revisionId: planRevisions.id,
+      revisionNumber: planRevisions.number,
+      input: planRevisions.input,
+    })
     .from(lots)
     .innerJoin(plans, eq(plans.id, lots.planId))
     .innerJoin(planRevisions, eq(planRevisions.id, plans.currentRevisionId))
@@ -149,8 +180,9 @@ export async function recomputeLots(tx: Db, { accountId, communityId, planIds, l
   const communityIds = [...new Set(rows.map((r) => r.communityId))];
   const conditions = await tx.select({ id: communities.id, conditions: communities.conditions }).from(communities).where(inArray(communities.id, communityIds));
   const calculator = new LotCalculator(new Map(conditions.map((c) => [c.id, c.conditions])));
+  const selector = await LotEquipmentSelector.forAccount(tx, accountId);
   const inputs = new Map<number, PlanInput>();
-  const out: { id: number; results: LotResults }[] = [];
+  const out: Parameters<typeof writeResults>[1] = [];
   for (const r of rows) {
     let input = inputs.get(r.revisionId);
     if (!input) {
@@ -158,7 +190,8 @@ export async function recomputeLots(tx: Db, { accountId, communityId, planIds, l
       inputs.set(r.revisionId, input);
     }
     const { summary } = calculator.compute({ communityId: r.communityId, facingDeg: Number(r.facingDeg), previous: (r.results as LotResults | null) ?? null }, { id: r.revisionId, number: r.revisionNumber, input });
-    out.push({ id: r.id, results: summary });
+    const selection = isFrozen(r.status) ? undefined : calculator.select(selector, r.communityId, summary, r.equipmentOverride ? r.equipmentSystemId : null);
+    out.push({ id: r.id, results: summary, selection });
   }
   await writeResults(tx, out);
   return { recomputed: out.length, changed: out.filter((o) => o.results.changed).length };

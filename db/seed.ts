@@ -59,7 +59,6 @@ export async function seedDatabase(db: Database): Promise<SeedSummary> {
       await tx.insert(lots).values(
         demoLots([...planIds.keys()]).map((l) => ({ accountId, communityId, lotNumber: l.lotNumber, address: l.address, planId: planIds.get(l.planCode)!, facingDeg: String(l.facingDeg) })),
       );
-      await recomputeLots(tx, { accountId, communityId });
       await tx.insert(equipmentSystems).values(
         DEMO_EQUIPMENT.map(([systemCode, systemType, outdoorModel, indoorModel, furnaceModel, tons, total, sensible, heating, price]) => ({
           accountId,
@@ -81,6 +80,7 @@ export async function seedDatabase(db: Database): Promise<SeedSummary> {
           priceUsd: price.toFixed(2),
         })),
       );
+      await recomputeLots(tx, { accountId, communityId });
       summary.accountsCreated.push(DEMO_ACCOUNT.name);
     }
 
@@ -97,8 +97,8 @@ export async function seedDatabase(db: Database): Promise<SeedSummary> {
         .values({ accountId, ...OTHER_ACCOUNT.community, conditions: parseSiteConditions({ ...DEMO_SITE, name: "Heron Flats (demo)", latitudeDeg: 29.5, longitudeDeg: -95.1, elevationFt: 30, heatingOutdoorDbF: 32, coolingOutdoorDbF: 96, coolingOutdoorWbF: 77, dailyRangeF: 16 }) })
         .$returningId();
       await tx.insert(lots).values([1, 2, 3].map((n) => ({ accountId, communityId, lotNumber: `H${n}`, address: `${n * 10} Egret Court`, planId, facingDeg: String(n * 90) })));
-      await recomputeLots(tx, { accountId, communityId });
       await tx.insert(equipmentSystems).values({ accountId, systemCode: "BW-30", systemType: "ac-furnace", outdoorModel: "BW-C30", indoorModel: "BW-A30", furnaceModel: "BW-F60", nominalTons: "2.50", coolingTotalBtuh: 28800, coolingSensibleBtuh: 21300, heatingOutputBtuh: 60000, priceUsd: "2400.00" });
+      await recomputeLots(tx, { accountId, communityId });
       summary.accountsCreated.push(OTHER_ACCOUNT.name);
     }
   });

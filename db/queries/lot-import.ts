@@ -9,6 +9,7 @@ import { getObject, objectKey, putObject } from "@/lib/storage/object-store";
 import type { TableCellError } from "@/lib/workbook/columns";
 import { LOT_COLUMNS, validateLotTable } from "@/lib/workbook/lot-columns";
 import { readTableFile, TableFileError } from "@/lib/workbook/table-io";
+import { LotEquipmentSelector } from "../equipment";
 import { isFrozen, LotCalculator, recomputeLots, type LotResults } from "../recompute";
 
 const header = (key: string) => LOT_COLUMNS.find((c) => c.key === key)!.header;
@@ -75,7 +76,10 @@ export async function processLotImport({ db, importId, data }: { db: Database; i
     const result = validateLotTable(table, { planCodes: new Set(planByCode.keys()) });
     if (!result.ok) throw new ImportFailure(await fail(result.errors));
 
-    const existing = await db.select({ id: lots.id, lotNumber: lots.lotNumber, status: lots.status, planId: lots.planId, facingDeg: lots.facingDeg, results: lots.results }).from(lots).where(eq(lots.communityId, communityId));
+    const existing = await db
+      .select({ id: lots.id, lotNumber: lots.lotNumber, status: lots.status, planId: lots.planId, facingDeg: lots.facingDeg, results: lots.results, equipmentSystemId: lots.equipmentSystemId, equipmentOverride: lots.equipmentOverride, selection: lots.selection })
+      .from(lots)
+      .where(eq(lots.communityId, communityId));
     const existingByNumber = new Map(existing.map((l) => [l.lotNumber.toLowerCase(), l]));
     const frozenErrors: TableCellError[] = [];
     for (const row of result.lots) {
@@ -95,11 +99,15 @@ export async function processLotImport({ db, importId, data }: { db: Database; i
     await progress(db, importId, "computing", 35);
     const [community] = await db.select().from(communities).where(eq(communities.id, communityId));
     const calculator = new LotCalculator(new Map([[communityId, community.conditions]]));
+    const selector = await LotEquipmentSelector.forAccount(db, accountId);
     const computed = result.lots.map((row) => {
       const plan = planByCode.get(row.planCode)!;
-      const previous = (existingByNumber.get(row.lotNumber.toLowerCase())?.results as LotResults | null) ?? null;
+      const existingLot = existingByNumber.get(row.lotNumber.toLowerCase());
+      const previous = (existingLot?.results as LotResults | null) ?? null;
       const { summary } = calculator.compute({ communityId, facingDeg: row.facingDeg, previous }, { id: plan.revisionId, number: plan.revisionNumber, input: plan.input as PlanInput });
-      return { row, plan, summary };
+      const frozen = existingLot ? isFrozen(existingLot.status) : false;
+      const selection = frozen ? null : calculator.select(selector, communityId, summary, existingLot?.equipmentOverride ? existingLot.equipmentSystemId : null);
+      return { row, plan, summary, selection, existingLot };
     });
     const t3 = performance.now();
 
@@ -113,7 +121,7 @@ export async function processLotImport({ db, importId, data }: { db: Database; i
         await tx
           .insert(lots)
           .values(
-            chunk.map(({ row, plan, summary }) => ({
+            chunk.map(({ row, plan, summary, selection, existingLot }) => ({
               accountId,
               communityId,
               lotNumber: row.lotNumber,
@@ -126,6 +134,8 @@ export async function processLotImport({ db, importId, data }: { db: Database; i
               results: summary,
               resultsRevisionId: plan.revisionId,
               resultsComputedAt: now,
+              selection: selection ? selection.selection : (existingLot?.selection ?? null),
+              equipmentSystemId: selection ? selection.systemId : (existingLot?.equipmentSystemId ?? null),
             })),
           )
           .onDuplicateKeyUpdate({
@@ -138,6 +148,8 @@ export async function processLotImport({ db, importId, data }: { db: Database; i
               results: sql`VALUES(${lots.results})`,
               resultsRevisionId: sql`VALUES(${lots.resultsRevisionId})`,
               resultsComputedAt: sql`VALUES(${lots.resultsComputedAt})`,
+              selection: sql`VALUES(${lots.selection})`,
+              equipmentSystemId: sql`VALUES(${lots.equipmentSystemId})`,
               version: sql`${lots.version} + 1`,
             },
           });

@@ -5,6 +5,7 @@ import { communities, lots, planRevisions, plans, users, type LotStatus } from "
 import { recordAudit } from "@/lib/audit";
 import { AppError, notFound } from "@/lib/errors";
 import { ENGINE_VERSION, type PlanInput } from "@/lib/load";
+import type { LotSelection } from "../equipment";
 import { isFrozen, LotCalculator, recomputeLots, type LotResults, type PermitSnapshot } from "../recompute";
 
 export { FROZEN_STATUSES, isFrozen, recomputeLots, type LotResults, type PermitSnapshot } from "../recompute";
@@ -133,6 +134,8 @@ export async function setLotStatus({ db, accountId, userId, lotId, version, stat
       .update(lots)
       .set({ status, permitSnapshot: snapshot, permitSnapshotAt: snapshot ? (freezing ? new Date() : lot.permitSnapshotAt) : null, version: lot.version + 1 })
       .where(eq(lots.id, lot.id));
+    // A released lot takes the current plan's loads and a new equipment selection again.
+    if (!snapshot && lot.permitSnapshot) await recomputeLots(tx, { accountId, lotIds: [lot.id] });
     await recordAudit(tx, {
       accountId,
       userId,
@@ -177,6 +180,8 @@ async function takeSnapshot(tx: Tx, { accountId, userId, lot }: { accountId: num
     input,
     result: full,
     summary,
+    selection: (lot.selection as LotSelection | null) ?? null,
+    equipmentSystemId: lot.equipmentSystemId,
     engineVersion: ENGINE_VERSION,
   };
 }
