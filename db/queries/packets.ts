@@ -1,0 +1,310 @@
+import "server-only";
+import { and, asc, desc, eq, inArray } from "drizzle-orm";
+import type { Database } from "@/db";
+import { catalogEntryFromRow, sizingLimitsOf, type LotSelection } from "@/db/equipment";
+import { accounts, communities, equipmentSystems, lots, packets, planRevisions, plans, users, LOT_STATUSES, type LotStatus } from "@/db/schema";
+import { recordAudit } from "@/lib/audit";
+import { AppError, notFound } from "@/lib/errors";
+import { computeFacingLoads, parseSiteConditions, type FacingLoads, type PlanInput, type SiteConditions } from "@/lib/load";
+import { sendMail } from "@/lib/mail/send";
+import { lotReportFromResults, renderLotReportsPdf, type LotReport, type LotSystemChoice } from "@/lib/reports";
+import { getObject, objectKey, putObject } from "@/lib/storage/object-store";
+import { catalogForHeatingDesign } from "@/lib/workbook/equipment-columns";
+import { writeXlsx } from "@/lib/workbook/table-io";
+import type { PermitSnapshot } from "../recompute";
+import { equipmentScheduleFile, NOT_SELECTED_YET, safeFilePart, XLSX_TYPE, type GeneratedFile } from "./equipment-schedule";
+import { permitScheduleRows } from "./permit-schedule";
+
+export const PACKET_KINDS = ["permit-packet", "equipment-schedule", "permit-schedule"] as const;
+export type PacketKind = (typeof PACKET_KINDS)[number];
+
+export const PACKET_KIND_LABELS: Record<PacketKind, string> = {
+  "permit-packet": "Permit packet (PDF, one load report per lot)",
+  "equipment-schedule": "Equipment schedule (XLSX)",
+  "permit-schedule": "Permit schedule (XLSX)",
+};
+
+/** Statuses whose lots have been handed in for permit (and so have a frozen snapshot). */
+export const PERMIT_STATUSES: readonly LotStatus[] = ["permit_submitted", "permitted", "built"];
+
+const PDF_TYPE = "application/pdf";
+
+// ---------------------------------------------------------------------------------------------
+// Lot reports from the database.
+
+type LotRow = typeof lots.$inferSelect;
+
+/**
+ * The load reports of some lots of one account, in lot-number order. A lot frozen for permit
+ * reports its permit snapshot (input, site, full result, approval, revision as submitted); any
+ * other lot is computed now from its plan's current revision and the community's conditions.
+ *
+ * @throws AppError not_found when a lot is not of this account; conflict when a lot has no plan.
+ */
+export async function lotReportsFor({ db, accountId, lotIds }: { db: Database; accountId: number; lotIds: number[] }): Promise<{ reports: LotReport[]; lots: LotRow[] }> {
+  if (lotIds.length === 0) return { reports: [], lots: [] };
+  const rows = await db
+    .select({ lot: lots, plan: plans, revision: planRevisions, community: communities })
+    .from(lots)
+    .innerJoin(communities, eq(communities.id, lots.communityId))
+    .leftJoin(plans, eq(plans.id, lots.planId))
+    .leftJoin(planRevisions, eq(planRevisions.id, plans.currentRevisionId))
+    .where(and(eq(lots.accountId, accountId), inArray(lots.id, lotIds)))
+    .orderBy(asc(communities.name), asc(lots.lotNumber));
+  if (rows.length !== new Set(lotIds).size) throw notFound("That lot");
+
+  const [account] = await db.select({ name: accounts.name }).from(accounts).where(eq(accounts.id, accountId));
+  const accountLimits = await sizingLimitsOf(db, accountId);
+  const systemRows = await db.select().from(equipmentSystems).where(eq(equipmentSystems.accountId, accountId));
+  const systemById = new Map(systemRows.map((row) => [row.id, row]));
+  const sites = new Map<number, SiteConditions>();
+  const generatedAt = new Date().toISOString();
+
+  const noPlan = rows.filter((r) => !r.lot.permitSnapshot && (!r.plan || !r.revision)).map((r) => r.lot.lotNumber);
+  if (noPlan.length > 0) {
+    throw new AppError("conflict", `Lot${noPlan.length > 1 ? "s" : ""} ${noPlan.join(", ")} ha${noPlan.length > 1 ? "ve" : "s"} no plan model, so no load report can be made. Nothing was generated; choose a plan for ${noPlan.length > 1 ? "them" : "it"} or leave ${noPlan.length > 1 ? "them" : "it"} out.`);
+  }
+
+  const reports = rows.map(({ lot, plan, revision, community }) => {
+    const snapshot = lot.permitSnapshot as PermitSnapshot | null;
+    let site: SiteConditions;
+    let input: PlanInput;
+    let loads: FacingLoads;
+    let planInfo: { code: string; name: string; revisionNumber: number; status: string };
+    let approval: { name: string | null; credential: string | null; date: string | null };
+    if (snapshot) {
+      site = snapshot.site;
+      input = snapshot.input;
+      loads = snapshot.result;
+      planInfo = { code: snapshot.planCode, name: snapshot.planName, revisionNumber: snapshot.revisionNumber, status: `${snapshot.revisionStatus}, permit snapshot of ${snapshot.frozenAt.slice(0, 10)}` };
+      approval = snapshot.approval;
+    } else {
+      site = sites.get(community.id) ?? parseSiteConditions(community.conditions);
+      sites.set(community.id, site);
+      input = revision!.input as PlanInput;
+      loads = computeFacingLoads(input, site, Number(lot.facingDeg), { validated: true });
+      planInfo = { code: plan!.planCode, name: plan!.name, revisionNumber: revision!.number, status: revision!.status };
+      approval = { name: revision!.approverName, credential: revision!.approverCredential, date: revision!.approvedOn };
+    }
+    const selection = lot.selection as LotSelection | null;
+    return lotReportFromResults({
+      builderAccountName: account?.name ?? "Builder",
+      communityName: community.name,
+      lot: { lotNumber: lot.lotNumber, address: lot.address || null },
+      plan: { ...planInfo, input },
+      site,
+      loads,
+      selection: systemChoiceOf(lot, selection, systemById, site),
+      sizingLimits: selection?.limitsUsed ?? accountLimits,
+      approval: approval.name && approval.date ? { reviewerName: approval.name, credential: approval.credential ?? "", approvedOn: approval.date } : null,
+      generatedAt,
+    });
+  });
+  return { reports, lots: rows.map((r) => r.lot) };
+}
+
+function systemChoiceOf(lot: LotRow, selection: LotSelection | null, systemById: Map<number, typeof equipmentSystems.$inferSelect>, site: SiteConditions): LotSystemChoice {
+  const row = lot.equipmentSystemId === null ? undefined : systemById.get(lot.equipmentSystemId);
+  if (row) {
+    // The heat pump's output at this community's heating design temperature, as the selection saw it.
+    const [entry] = catalogForHeatingDesign([catalogEntryFromRow(row)], site.heatingOutdoorDbF);
+    return { system: entry, overridden: lot.equipmentOverride, overrideNote: lot.equipmentOverride ? "chosen by purchasing in place of the selection's best fit" : null };
+  }
+  if (!selection) return { system: null, reason: `No system: ${NOT_SELECTED_YET}.` };
+  return { system: null, reason: `No catalog system fits within the sizing limits: ${selection.noFitReason ?? "no system fits"}.` };
+}
+
+/** One lot's report as PDF bytes (the per-lot report link). */
+export async function lotReportPdf({ db, accountId, lotId }: { db: Database; accountId: number; lotId: number }): Promise<GeneratedFile> {
+  const { reports, lots: rows } = await lotReportsFor({ db, accountId, lotIds: [lotId] });
+  const body = await renderLotReportsPdf(reports, { title: `Load report: lot ${rows[0].lotNumber}` });
+  return { fileName: `load-report-lot-${safeFilePart(rows[0].lotNumber)}.pdf`, contentType: PDF_TYPE, body };
+}
+
+// ---------------------------------------------------------------------------------------------
+// Packets: generated files kept in object storage with who made them and when.
+
+/** The community of this account, or not found (checked before a request body is read). */
+export async function communityOf(db: Database, accountId: number, communityId: number) {
+  const [community] = await db.select().from(communities).where(and(eq(communities.id, communityId), eq(communities.accountId, accountId)));
+  if (!community) throw notFound("That community");
+  return community;
+}
+
+/**
+ * Which lots of a community a packet holds: the listed lots (each must be of this community),
+ * or the lots with one of the statuses, or every lot. None is a clear error.
+ */
+export async function packetLotIds({ db, accountId, communityId, lotIds, statuses }: { db: Database; accountId: number; communityId: number; lotIds?: number[]; statuses?: LotStatus[] }): Promise<number[]> {
+  const filters = [eq(lots.accountId, accountId), eq(lots.communityId, communityId)];
+  if (statuses && statuses.length > 0) filters.push(inArray(lots.status, statuses));
+  if (lotIds && lotIds.length > 0) filters.push(inArray(lots.id, lotIds));
+  const found = await db.select({ id: lots.id }).from(lots).where(and(...filters));
+  if (lotIds && lotIds.length > 0) {
+    const inCommunity = new Set(found.map((r) => r.id));
+    const missing = [...new Set(lotIds)].filter((id) => !inCommunity.has(id));
+    if (missing.length > 0) {
+      throw new AppError("invalid_input", "Some lots are not lots of this community (or not of the chosen statuses). Nothing was generated.", [
+        { field: "lotIds", message: `lot ids ${missing.join(", ")} are not lots of this community${statuses?.length ? ` with status ${statuses.join(" or ")}` : ""}` },
+      ]);
+    }
+  }
+  if (found.length === 0) {
+    throw new AppError("invalid_input", "No lots match, so there is nothing to put in a packet. Nothing was generated.", [
+      { field: statuses?.length ? "statuses" : "lotIds", message: statuses?.length ? `no lot of this community has status ${statuses.join(" or ")}` : "this community has no lots" },
+    ]);
+  }
+  return found.map((r) => r.id);
+}
+
+/** A permit packet: one PDF of the lots' load reports, with a cover page listing them. */
+async function permitPacketFile({ db, accountId, communityId, lotIds, statuses }: { db: Database; accountId: number; communityId: number; lotIds?: number[]; statuses?: LotStatus[] }): Promise<GeneratedFile & { lotCount: number; lotNumbers: string[] }> {
+  const community = await communityOf(db, accountId, communityId);
+  const ids = await packetLotIds({ db, accountId, communityId, lotIds, statuses });
+  const { reports, lots: rows } = await lotReportsFor({ db, accountId, lotIds: ids });
+  const body = await renderLotReportsPdf(reports, { title: `Permit packet: ${community.name}`, cover: true });
+  return {
+    fileName: `permit-packet-${safeFilePart(community.name)}-${new Date().toISOString().slice(0, 10)}.pdf`,
+    contentType: PDF_TYPE,
+    body,
+    lotCount: rows.length,
+    lotNumbers: rows.map((r) => r.lotNumber),
+  };
+}
+
+async function permitScheduleFile({ db, accountId, communityId }: { db: Database; accountId: number; communityId: number }): Promise<GeneratedFile & { lotCount: number }> {
+  const { community, headers, rows } = await permitScheduleRows({ db, accountId, communityId });
+  return {
+    fileName: `permit-schedule-${safeFilePart(community.name)}-${new Date().toISOString().slice(0, 10)}.xlsx`,
+    contentType: XLSX_TYPE,
+    body: await writeXlsx(headers, rows, { sheetName: "Permit schedule" }),
+    lotCount: rows.length,
+  };
+}
+
+/** Generates one of the files a community can send. */
+async function generateFile({ db, accountId, communityId, kind, lotIds, statuses }: { db: Database; accountId: number; communityId: number; kind: PacketKind; lotIds?: number[]; statuses?: LotStatus[] }): Promise<GeneratedFile & { lotCount: number }> {
+  if (kind === "permit-packet") return permitPacketFile({ db, accountId, communityId, lotIds, statuses });
+  if (kind === "permit-schedule") return permitScheduleFile({ db, accountId, communityId });
+  const file = await equipmentScheduleFile({ db, accountId, communityId, format: "xlsx" });
+  return { ...file, lotCount: file.result.schedule.totals.lotCount };
+}
+
+/**
+ * Puts the file in object storage, runs `deliver` (the e-mail) if given, then records the packet
+ * and its history entry in one transaction; when storing or sending fails nothing is recorded.
+ */
+async function storePacket({ db, accountId, userId, communityId, kind, file, lotCount, sentTo, summary, deliver }: { db: Database; accountId: number; userId: number; communityId: number; kind: PacketKind; file: GeneratedFile; lotCount: number; sentTo: string[] | null; summary: string; deliver?: () => Promise<void> }) {
+  const fileKey = objectKey({ accountId, kind: `packets/${kind}`, fileName: file.fileName });
+  await putObject({ key: fileKey, body: file.body, contentType: file.contentType });
+  if (deliver) await deliver();
+  return db.transaction(async (tx) => {
+    const [{ id }] = await tx
+      .insert(packets)
+      .values({ accountId, communityId, kind, fileName: file.fileName, fileKey, contentType: file.contentType, sizeBytes: file.body.byteLength, lotCount, sentTo, createdByUserId: userId })
+      .$returningId();
+    await recordAudit(tx, {
+      accountId,
+      userId,
+      action: sentTo ? "packet_send" : "packet_generate",
+      entityType: "packet",
+      entityId: id,
+      summary,
+      after: { kind, fileName: file.fileName, sizeBytes: file.body.byteLength, lotCount, sentTo, communityId },
+    });
+    return id;
+  });
+}
+
+export async function createPermitPacket({ db, accountId, userId, communityId, lotIds, statuses }: { db: Database; accountId: number; userId: number; communityId: number; lotIds?: number[]; statuses?: LotStatus[] }) {
+  const community = await communityOf(db, accountId, communityId);
+  const file = await permitPacketFile({ db, accountId, communityId, lotIds, statuses });
+  const packetId = await storePacket({
+    db,
+    accountId,
+    userId,
+    communityId,
+    kind: "permit-packet",
+    file,
+    lotCount: file.lotCount,
+    sentTo: null,
+    summary: `Permit packet of ${community.name}: ${file.lotCount} lot${file.lotCount === 1 ? "" : "s"} (${file.fileName})`,
+  });
+  return { packetId, fileName: file.fileName, lotCount: file.lotCount, sizeBytes: file.body.byteLength };
+}
+
+/** The stored files of a community, newest first, with who made them and when. */
+export async function listPackets({ db, accountId, communityId }: { db: Database; accountId: number; communityId: number }) {
+  await communityOf(db, accountId, communityId);
+  const rows = await db
+    .select({
+      id: packets.id,
+      kind: packets.kind,
+      fileName: packets.fileName,
+      contentType: packets.contentType,
+      sizeBytes: packets.sizeBytes,
+      lotCount: packets.lotCount,
+      sentTo: packets.sentTo,
+      createdAt: packets.createdAt,
+      createdByName: users.name,
+    })
+    .from(packets)
+    .innerJoin(users, eq(users.id, packets.createdByUserId))
+    .where(and(eq(packets.accountId, accountId), eq(packets.communityId, communityId)))
+    .orderBy(desc(packets.createdAt), desc(packets.id));
+  return rows.map((row) => ({ ...row, sentTo: (row.sentTo as string[] | null) ?? null, createdAt: row.createdAt.toISOString() }));
+}
+
+/** A stored file's bytes; a packet of another account is not found. */
+export async function getPacketFile({ db, accountId, packetId }: { db: Database; accountId: number; packetId: number }) {
+  const [packet] = await db.select().from(packets).where(and(eq(packets.id, packetId), eq(packets.accountId, accountId)));
+  if (!packet) throw notFound("That packet");
+  return { packet, body: await getObject(packet.fileKey) };
+}
+
+// ---------------------------------------------------------------------------------------------
+// Sending by e-mail.
+
+/** The message sent with a file: our own wording, the community, what is attached, the caution. */
+export function packetMessage({ accountName, senderName, communityName, kind, fileName, lotCount }: { accountName: string; senderName: string; communityName: string; kind: PacketKind; fileName: string; lotCount: number }) {
+  const what = PACKET_KIND_LABELS[kind];
+  return {
+    subject: `${accountName}: ${what.replace(/ \(.*\)$/, "").toLowerCase()} for ${communityName}`,
+    text: [
+      "Hello,",
+      "",
+      `${senderName} of ${accountName} sent you the ${what.replace(/ \(.*\)$/, "").toLowerCase()} for the community ${communityName}.`,
+      "",
+      `Attached: ${fileName} — ${what}, ${lotCount} lot${lotCount === 1 ? "" : "s"}.`,
+      "",
+      "Caution: the loads and equipment sizes in this file are design estimates from Platload's own method built on published ASHRAE equations; it is not any standard's approved procedure. Local codes and a licensed professional's review govern.",
+      "",
+      "Sent from Platload.",
+    ].join("\n"),
+  };
+}
+
+/**
+ * Generates the file, puts it in object storage, e-mails it as an attachment, then records the
+ * packet with the addresses and a history entry. A failed send records nothing.
+ */
+export async function sendCommunityFile({ db, accountId, userId, senderName, accountName, communityId, to, what, lotIds, statuses }: { db: Database; accountId: number; userId: number; senderName: string; accountName: string; communityId: number; to: string[]; what: PacketKind; lotIds?: number[]; statuses?: LotStatus[] }) {
+  const community = await communityOf(db, accountId, communityId);
+  const file = await generateFile({ db, accountId, communityId, kind: what, lotIds, statuses });
+  const message = packetMessage({ accountName, senderName, communityName: community.name, kind: what, fileName: file.fileName, lotCount: file.lotCount });
+  const packetId = await storePacket({
+    db,
+    accountId,
+    userId,
+    communityId,
+    kind: what,
+    file,
+    lotCount: file.lotCount,
+    sentTo: to,
+    summary: `Sent ${PACKET_KIND_LABELS[what].toLowerCase()} of ${community.name} (${file.lotCount} lots) to ${to.join(", ")}`,
+    deliver: () => sendMail({ to, subject: message.subject, text: message.text, attachments: [{ filename: file.fileName, content: Buffer.from(file.body), contentType: file.contentType }] }),
+  });
+  return { packetId, fileName: file.fileName, lotCount: file.lotCount, sentTo: to };
+}
+
+export { LOT_STATUSES };
