@@ -17,7 +17,19 @@ interface Community {
   version: number;
 }
 
-export function CommunityWorkspace({ communityId, canEditCommunity, canEditLots, canPermit }: { communityId: number; canEditCommunity: boolean; canEditLots: boolean; canPermit: boolean }) {
+export function CommunityWorkspace({
+  communityId,
+  canEditCommunity,
+  canEditLots,
+  canPermit,
+  canOverride,
+}: {
+  communityId: number;
+  canEditCommunity: boolean;
+  canEditLots: boolean;
+  canPermit: boolean;
+  canOverride: boolean;
+}) {
   const queryClient = useQueryClient();
   const community = useQuery({ queryKey: ["community", communityId], queryFn: () => api<{ community: Community }>(`/api/communities/${communityId}`) });
   const [showConditions, setShowConditions] = useState(false);
@@ -77,7 +89,7 @@ export function CommunityWorkspace({ communityId, canEditCommunity, canEditLots,
           <ConditionsForm key={c.version} initial={{ name: c.name, locality: c.locality, conditions: c.conditions }} submitLabel="Save and recompute lots" busy={save.isPending} error={error} disabled={!canEditCommunity} onSubmit={(v) => save.mutate(v)} />
         </section>
       ) : null}
-      <LotsGrid communityId={communityId} canEdit={canEditLots} canPermit={canPermit} />
+      <LotsGrid communityId={communityId} canEdit={canEditLots} canPermit={canPermit} canOverride={canOverride} />
       {canEditLots ? <LotImportPanel communityId={communityId} onDone={onImported} /> : null}
       <Caution />
     </div>

@@ -39,6 +39,13 @@ export interface GridLot {
   snapshotRevisionNumber: number | null;
   liveLoads: LotLoads | null;
   equipmentSystemId: number | null;
+  equipmentOverride: boolean;
+  systemCode: string | null;
+  systemFits: boolean | null;
+  systemReasons: string[];
+  noFitReason: string | null;
+  bestFitCode: string | null;
+  coolingPctOfLoad: number | null;
   version: number;
 }
 
@@ -56,11 +63,14 @@ const isGroup = (r: Row | undefined): r is GroupRow => !!r && (r as GroupRow).ki
 
 const STATUS_LABELS: Record<string, string> = { planned: "Planned", permit_submitted: "Permit submitted", permitted: "Permitted", built: "Built" };
 
-export function LotsGrid({ communityId, canEdit, canPermit }: { communityId: number; canEdit: boolean; canPermit: boolean }) {
+const BEST_FIT = "(best fit)";
+
+export function LotsGrid({ communityId, canEdit, canPermit, canOverride }: { communityId: number; canEdit: boolean; canPermit: boolean; canOverride: boolean }) {
   const queryClient = useQueryClient();
   const key = useMemo(() => ["lots", communityId], [communityId]);
   const lotsQuery = useQuery({ queryKey: key, queryFn: () => api<{ lots: GridLot[] }>(`/api/communities/${communityId}/lots`) });
   const plansQuery = useQuery({ queryKey: ["plan-codes"], queryFn: () => api<{ plans: { id: number; planCode: string; name: string }[] }>("/api/plans/codes") });
+  const systemsQuery = useQuery({ queryKey: ["equipment"], queryFn: () => api<{ systems: { id: number; cells: Record<string, string | number | null> }[] }>("/api/equipment") });
   const gridApi = useRef<GridApi<Row> | null>(null);
   const [banner, setBanner] = useState<{ kind: "error" | "info"; text: string } | null>(null);
   const [selected, setSelected] = useState<GridLot[]>([]);
@@ -86,7 +96,15 @@ export function LotsGrid({ communityId, canEdit, canPermit }: { communityId: num
     onSettled: refresh,
   });
 
+  const override = useMutation({
+    mutationFn: (v: { lotId: number; version: number; systemId: number | null }) => api(`/api/lots/${v.lotId}/equipment`, { method: "POST", body: v }),
+    onSuccess: (_r, v) => setBanner({ kind: "info", text: v.systemId ? "System set by hand; it is kept when loads change." : "Back to the best-fitting system." }),
+    onError,
+    onSettled: refresh,
+  });
+
   const planCodes = plansQuery.data?.plans ?? [];
+  const systemCodes = (systemsQuery.data?.systems ?? []).map((x) => ({ id: x.id, code: String(x.cells.system_code) }));
   const columnDefs = useMemo<ColDef<Row>[]>(() => {
     const lot = (p: { data?: Row }) => (isGroup(p.data) ? undefined : p.data);
     const loads = (p: { data?: Row }) => lot(p)?.loads ?? null;
@@ -185,6 +203,41 @@ export function LotsGrid({ communityId, canEdit, canPermit }: { communityId: num
         },
         cellClass: "cell-computed",
       },
+      {
+        colId: "equipment",
+        headerName: "System",
+        width: 120,
+        pinned: "right",
+        editable: (p) => canOverride && !!lot(p) && !lot(p)!.frozen,
+        valueGetter: (p) => {
+          const l = lot(p);
+          if (!l) return "";
+          if (!l.systemCode) return l.noFitReason ? "none fits" : "";
+          return `${l.systemCode}${l.equipmentOverride ? " (by hand)" : ""}`;
+        },
+        cellEditor: "agSelectCellEditor",
+        cellEditorParams: { values: [BEST_FIT, ...systemCodes.map((x) => x.code)] },
+        valueSetter: (p) => {
+          const l = lot(p);
+          if (!l) return false;
+          const systemId = p.newValue === BEST_FIT ? null : (systemCodes.find((x) => x.code === p.newValue)?.id ?? null);
+          if (p.newValue !== BEST_FIT && systemId === null) return false;
+          override.mutate({ lotId: l.id, version: l.version, systemId });
+          return false;
+        },
+        tooltipValueGetter: (p) => {
+          const l = lot(p);
+          if (!l) return undefined;
+          if (!l.systemCode) return l.noFitReason ? `No system in the catalog fits: ${l.noFitReason}` : "Not selected yet (no catalog?)";
+          const ratio = l.coolingPctOfLoad ? ` Cooling capacity ${Math.round(l.coolingPctOfLoad)} % of the load.` : "";
+          if (l.systemFits === false) return `Chosen by hand but outside the sizing limits: ${l.systemReasons.join("; ")}.${ratio}`;
+          return `${l.equipmentOverride ? `Chosen by hand (best fit would be ${l.bestFitCode ?? "none"}).` : "Best fit within the account's sizing limits."}${ratio}`;
+        },
+        cellClass: (p) => {
+          const l = lot(p);
+          return l && (!l.systemCode || l.systemFits === false) && (l.noFitReason || l.systemCode) ? "cell-error" : "";
+        },
+      },
       { colId: "start", headerName: "Planned start", width: 116, editable: (p) => canEdit && !!lot(p), valueGetter: (p) => lot(p)?.plannedStart ?? "", valueSetter: (p) => save(p.data, { plannedStart: String(p.newValue ?? "").trim() || null }) },
     ];
     function save(row: Row | undefined, change: Record<string, unknown>) {
@@ -192,7 +245,7 @@ export function LotsGrid({ communityId, canEdit, canPermit }: { communityId: num
       edit.mutate([{ lotId: row.id, version: row.version, ...change }]);
       return false;
     }
-  }, [canEdit, canPermit, edit, planCodes, status]);
+  }, [canEdit, canOverride, canPermit, edit, override, planCodes, status, systemCodes]);
 
   const rowData = useMemo<Row[]>(() => {
     const all = lotsQuery.data?.lots ?? [];

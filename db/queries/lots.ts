@@ -1,7 +1,7 @@
 import "server-only";
 import { and, asc, eq, inArray } from "drizzle-orm";
 import type { Database } from "@/db";
-import { communities, lots, planRevisions, plans, users, type LotStatus } from "@/db/schema";
+import { communities, equipmentSystems, lots, planRevisions, plans, users, type LotStatus } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
 import { AppError, notFound } from "@/lib/errors";
 import { ENGINE_VERSION, type PlanInput } from "@/lib/load";
@@ -33,20 +33,32 @@ export async function listLotsForGrid({ db, accountId, communityId }: { db: Data
       permitSnapshotAt: lots.permitSnapshotAt,
       equipmentSystemId: lots.equipmentSystemId,
       equipmentOverride: lots.equipmentOverride,
+      selection: lots.selection,
       version: lots.version,
     })
     .from(lots)
     .leftJoin(plans, eq(plans.id, lots.planId))
     .where(and(eq(lots.accountId, accountId), eq(lots.communityId, communityId)))
     .orderBy(asc(lots.lotNumber));
+  const systems = await db.select({ id: equipmentSystems.id, code: equipmentSystems.systemCode }).from(equipmentSystems).where(eq(equipmentSystems.accountId, accountId));
+  const codeOf = new Map(systems.map((x) => [x.id, x.code]));
   return {
     community,
-    lots: rows.map(({ permitSnapshot, results, ...r }) => {
+    lots: rows.map(({ permitSnapshot, results, selection: liveSelection, ...r }) => {
       const live = results as LotResults | null;
       const snapshot = permitSnapshot as PermitSnapshot | null;
       const shown = snapshot ? snapshot.summary : live;
+      const selection = (snapshot ? snapshot.selection : (liveSelection as LotSelection | null)) ?? null;
+      const systemId = snapshot ? snapshot.equipmentSystemId : r.equipmentSystemId;
       return {
         ...r,
+        equipmentSystemId: systemId,
+        systemCode: systemId ? (codeOf.get(systemId) ?? null) : null,
+        systemFits: selection?.chosen?.fits ?? null,
+        systemReasons: selection?.chosen && !selection.chosen.fits ? selection.chosen.reasons : [],
+        noFitReason: selection && !selection.bestFit ? selection.noFitReason : null,
+        bestFitCode: selection?.bestFit?.systemCode ?? null,
+        coolingPctOfLoad: selection?.chosen?.coolingPctOfLoad ?? null,
         facingDeg: Number(r.facingDeg),
         loads: shown,
         frozen: !!snapshot,

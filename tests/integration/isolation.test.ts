@@ -98,7 +98,7 @@ describe("account isolation", () => {
     const communities = await callRoute(communitiesRoute.GET, { path: "/api/communities", cookie: otherAdminCookie });
     expect(communities.json.communities.every((c: { accountId: number }) => c.accountId === ids.otherAccountId)).toBe(true);
     const systems = await callRoute(equipmentRoute.GET, { path: "/api/equipment", cookie: otherAdminCookie });
-    expect(systems.json.systems.every((s: { accountId: number }) => s.accountId === ids.otherAccountId)).toBe(true);
+    expect(systems.json.systems.map((s: { id: number }) => s.id)).toEqual([ids.otherRecords.systemId]);
     const importsList = await callRoute(importsRoute.GET, { path: "/api/imports", cookie: otherAdminCookie });
     expect(importsList.json.imports.map((i: { id: number }) => i.id)).toEqual([ids.otherRecords.importId]);
     const team = await callRoute(teamRoute.GET, { path: "/api/team", cookie: otherAdminCookie });

@@ -13,6 +13,7 @@ export default async function CommunityPage({ params }: { params: Promise<{ comm
       canEditCommunity={permissions.includes("communities.edit")}
       canEditLots={permissions.includes("lots.edit")}
       canPermit={permissions.includes("lots.permit")}
+      canOverride={permissions.includes("equipment.override")}
     />
   );
 }

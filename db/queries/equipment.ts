@@ -1,0 +1,124 @@
+import "server-only";
+import { and, asc, eq } from "drizzle-orm";
+import type { Database } from "@/db";
+import { accounts, equipmentSystems, imports, lots } from "@/db/schema";
+import { recordAudit } from "@/lib/audit";
+import { sizingLimitsSchema } from "@/lib/equipment";
+import { AppError, notFound } from "@/lib/errors";
+import type { TableCellError } from "@/lib/workbook/columns";
+import { EQUIPMENT_COLUMNS, equipmentEntryToRow, validateEquipmentTable } from "@/lib/workbook/equipment-columns";
+import { readTableFile, TableFileError } from "@/lib/workbook/table-io";
+import { catalogEntryFromRow, rowValuesFromEntry, sizingLimitsOf } from "../equipment";
+import { isFrozen, recomputeLots } from "../recompute";
+
+export const CATALOG_IMPORT_MAX_BYTES = 5 * 1024 * 1024;
+
+export async function listCatalog({ db, accountId }: { db: Database; accountId: number }) {
+  const rows = await db.select().from(equipmentSystems).where(eq(equipmentSystems.accountId, accountId)).orderBy(asc(equipmentSystems.systemCode));
+  return rows.map((r) => ({ id: r.id, version: r.version, cells: equipmentEntryToRow(catalogEntryFromRow(r)) }));
+}
+
+const fieldErrors = (errors: TableCellError[]) => errors.map((e) => ({ field: `row ${e.row}, ${e.column}`, row: e.row, column: e.column, message: e.reason }));
+
+/**
+ * Imports a catalog file: validated as a whole (every bad cell reported, nothing written unless all
+ * are good), systems created or updated by system code in one transaction, then every lot's
+ * selection recomputed (frozen lots keep theirs). Systems not in the file are kept.
+ */
+export async function importCatalog({ db, accountId, userId, fileName, data }: { db: Database; accountId: number; userId: number; fileName: string; data: Uint8Array }) {
+  const [{ id: importId }] = await db.insert(imports).values({ accountId, userId, kind: "equipment", fileName: fileName.slice(0, 255), fileSizeBytes: data.byteLength, state: "validating" }).$returningId();
+  const fail = async (errors: TableCellError[], message: string): Promise<never> => {
+    await db.update(imports).set({ state: "failed", errors, progressPct: 100, finishedAt: new Date() }).where(eq(imports.id, importId));
+    throw new AppError("invalid_input", message, fieldErrors(errors));
+  };
+  if (data.byteLength > CATALOG_IMPORT_MAX_BYTES) return fail([{ row: 1, column: "(file)", reason: `the file is larger than ${CATALOG_IMPORT_MAX_BYTES / 1048576} MB` }], "The file is too large; nothing was imported.");
+  let table;
+  try {
+    table = await readTableFile(fileName, data);
+  } catch (error) {
+    if (error instanceof TableFileError) return fail([{ row: 1, column: "(file)", reason: error.message }], `The file could not be read: ${error.message}. Nothing was imported.`);
+    throw error;
+  }
+  const result = validateEquipmentTable(table);
+  if (!result.ok) return fail(result.errors, `${result.errors.length} problem(s) in the file; nothing was imported.`);
+  return db.transaction(async (tx) => {
+    const existing = await tx.select().from(equipmentSystems).where(eq(equipmentSystems.accountId, accountId)).for("update");
+    const byCode = new Map(existing.map((e) => [e.systemCode.toLowerCase(), e]));
+    let created = 0;
+    let updated = 0;
+    for (const entry of result.systems) {
+      const values = rowValuesFromEntry(entry, accountId);
+      const found = byCode.get(entry.id.toLowerCase());
+      if (found) {
+        await tx.update(equipmentSystems).set({ ...values, systemCode: found.systemCode, version: found.version + 1 }).where(eq(equipmentSystems.id, found.id));
+        updated++;
+      } else {
+        await tx.insert(equipmentSystems).values(values);
+        created++;
+      }
+    }
+    const recomputed = await recomputeLots(tx, { accountId });
+    await recordAudit(tx, { accountId, userId, action: "equipment_import", entityType: "equipment", entityId: null, summary: `Imported the equipment catalog ${fileName}: ${created} systems created, ${updated} updated; ${recomputed.recomputed} lots reselected`, after: { importId, created, updated } });
+    await tx.update(imports).set({ state: "succeeded", createdCount: created, updatedCount: updated, errors: [], progressPct: 100, finishedAt: new Date() }).where(eq(imports.id, importId));
+    return { importId, created, updated, lotsReselected: recomputed.recomputed };
+  });
+}
+
+/** Edits one system's cells (as the catalog table reads them) with a version check, then reselects every lot. */
+export async function editCatalogSystem({ db, accountId, userId, systemId, version, cells }: { db: Database; accountId: number; userId: number; systemId: number; version: number; cells: Record<string, string | number | null> }) {
+  return db.transaction(async (tx) => {
+    const [row] = await tx.select().from(equipmentSystems).where(and(eq(equipmentSystems.id, systemId), eq(equipmentSystems.accountId, accountId))).for("update");
+    if (!row) throw notFound("That equipment system");
+    if (row.version !== version) throw new AppError("conflict", `${row.systemCode} was changed by someone else since you loaded it. Nothing was saved; reload to see it.`);
+    const before = equipmentEntryToRow(catalogEntryFromRow(row));
+    const merged = { ...before, ...cells };
+    const table = { headers: EQUIPMENT_COLUMNS.map((c) => c.header), rows: [{ rowNumber: 2, cells: EQUIPMENT_COLUMNS.map((c) => (merged[c.key] === null || merged[c.key] === undefined ? "" : String(merged[c.key]))) }] };
+    const result = validateEquipmentTable(table);
+    if (!result.ok) throw new AppError("invalid_input", `${row.systemCode}: ${result.errors.map((e) => `${e.column} ${e.reason}`).join("; ")}. Nothing was saved.`, result.errors.map((e) => ({ field: EQUIPMENT_COLUMNS.find((c) => c.header === e.column)?.key ?? e.column, column: e.column, message: e.reason })));
+    const entry = result.systems[0];
+    const clash = entry.id.toLowerCase() !== row.systemCode.toLowerCase() ? (await tx.select({ id: equipmentSystems.id }).from(equipmentSystems).where(and(eq(equipmentSystems.accountId, accountId), eq(equipmentSystems.systemCode, entry.id))))[0] : undefined;
+    if (clash) throw new AppError("conflict", `System code ${entry.id} is already used.`, [{ field: "system_code", message: "Already used" }]);
+    await tx.update(equipmentSystems).set({ ...rowValuesFromEntry(entry, accountId), version: row.version + 1 }).where(eq(equipmentSystems.id, systemId));
+    const recomputed = await recomputeLots(tx, { accountId });
+    await recordAudit(tx, { accountId, userId, action: "equipment_edit", entityType: "equipment", entityId: systemId, summary: `Edited equipment system ${entry.id}`, before, after: equipmentEntryToRow(entry) });
+    return { version: row.version + 1, lotsReselected: recomputed.recomputed };
+  });
+}
+
+export async function getSizingLimits({ db, accountId }: { db: Database; accountId: number }) {
+  const [account] = await db.select({ limits: accounts.sizingLimits }).from(accounts).where(eq(accounts.id, accountId));
+  return { limits: await sizingLimitsOf(db, accountId), custom: account?.limits !== null && account?.limits !== undefined };
+}
+
+/** An admin sets the account's sizing limits; every lot is reselected with them. */
+export async function setSizingLimits({ db, accountId, userId, limits }: { db: Database; accountId: number; userId: number; limits: unknown }) {
+  const parsed = sizingLimitsSchema.safeParse(limits);
+  if (!parsed.success) throw new AppError("invalid_input", "Some sizing limits are not valid; nothing was saved.", parsed.error.issues.map((i) => ({ field: i.path.join("."), message: i.message })));
+  return db.transaction(async (tx) => {
+    const before = await sizingLimitsOf(tx, accountId);
+    await tx.update(accounts).set({ sizingLimits: parsed.data }).where(eq(accounts.id, accountId));
+    const recomputed = await recomputeLots(tx, { accountId });
+    await recordAudit(tx, { accountId, userId, action: "sizing_limits", entityType: "account", entityId: accountId, summary: `Changed the equipment sizing limits; ${recomputed.recomputed} lots reselected`, before, after: parsed.data });
+    return { limits: parsed.data, lotsReselected: recomputed.recomputed };
+  });
+}
+
+/** A purchaser picks a lot's system (kept through recomputes), or clears the pick to use the best fit again. */
+export async function overrideLotSystem({ db, accountId, userId, lotId, version, systemId }: { db: Database; accountId: number; userId: number; lotId: number; version: number; systemId: number | null }) {
+  return db.transaction(async (tx) => {
+    const [lot] = await tx.select().from(lots).where(and(eq(lots.id, lotId), eq(lots.accountId, accountId))).for("update");
+    if (!lot) throw notFound("That lot");
+    if (lot.version !== version) throw new AppError("conflict", `Lot ${lot.lotNumber} was changed by someone else since you loaded it. Nothing was saved; reload to see it.`);
+    if (isFrozen(lot.status)) throw new AppError("conflict", `Lot ${lot.lotNumber} is frozen for permit; its equipment is part of the permit copy. Move it back to planned first.`);
+    let code: string | null = null;
+    if (systemId !== null) {
+      const [system] = await tx.select().from(equipmentSystems).where(and(eq(equipmentSystems.id, systemId), eq(equipmentSystems.accountId, accountId)));
+      if (!system) throw notFound("That equipment system");
+      code = system.systemCode;
+    }
+    await tx.update(lots).set({ equipmentSystemId: systemId, equipmentOverride: systemId !== null, version: lot.version + 1 }).where(eq(lots.id, lotId));
+    await recomputeLots(tx, { accountId, lotIds: [lotId] });
+    await recordAudit(tx, { accountId, userId, action: "lot_equipment", entityType: "lot", entityId: lotId, summary: systemId ? `Lot ${lot.lotNumber}: system set to ${code} by hand` : `Lot ${lot.lotNumber}: back to the best-fitting system`, before: { equipmentSystemId: lot.equipmentSystemId, override: lot.equipmentOverride }, after: { equipmentSystemId: systemId, override: systemId !== null } });
+    return { ok: true };
+  });
+}
