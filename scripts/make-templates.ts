@@ -10,6 +10,7 @@ import { fileURLToPath } from "node:url";
 import { parseSiteConditions } from "../lib/load/input";
 import { formatTableErrors } from "../lib/workbook/columns";
 import { PLAN_COLUMNS, PLAN_HEADERS, validatePlanTable } from "../lib/workbook/plan-columns";
+import { equipmentTemplateFiles } from "../lib/workbook/equipment-columns";
 import { readCsv, writeCsv, writeXlsx } from "../lib/workbook/table-io";
 import { EXAMPLE_PLAN_ROWS, EXAMPLE_SITE, TEMPLATE_EXAMPLE_ROW, type ExampleRow } from "../lib/workbook/templates";
 import { renderTemplatesReadme } from "../lib/workbook/templates-readme";
@@ -50,6 +51,8 @@ async function main(): Promise<void> {
     ["example-plans.csv", exampleCsv + "\r\n"],
     ["example-site.json", `${JSON.stringify(EXAMPLE_SITE, null, 2)}\n`],
     ["README.md", renderTemplatesReadme()],
+    // The equipment catalog's template, example and column guide (lib/workbook/equipment-columns.ts).
+    ...(await equipmentTemplateFiles()).map(({ name, content }): [string, string | Uint8Array] => [name, content]),
   ];
   for (const [name, content] of files) {
     await writeFile(path.join(templatesDir, name), content);

@@ -18,7 +18,9 @@
 import {
   ATTIC_KINDS,
   CEILING_BASE_ASSEMBLIES,
+  DUCT_HEATING_SYSTEMS,
   DUCT_LOCATIONS,
+  DUCT_METHODS,
   FACADES,
   FLOOR_BASE_ASSEMBLIES,
   FOUNDATION_KINDS,
@@ -180,6 +182,8 @@ const SPECS: Spec[] = [
   { key: "duct_r", header: "Duct insulation R", group: "Air & ducts", value: num("rValue"), path: "ducts.insulationR", engineDefault: true, meaning: "Insulation on the ducts.", example: "R-8" },
   { key: "duct_supply_leakage_pct", header: "Duct supply leakage (%)", group: "Air & ducts", value: num("percent"), path: "ducts.supplyLeakagePct", engineDefault: true, meaning: "Supply leakage to outside the envelope, % of system airflow.", example: "4%" },
   { key: "duct_return_leakage_pct", header: "Duct return leakage (%)", group: "Air & ducts", value: num("percent"), path: "ducts.returnLeakagePct", engineDefault: true, meaning: "Return leakage from outside the envelope, % of system airflow.", example: "4%" },
+  { key: "duct_heating_system", header: "Heating by (for duct losses)", group: "Air & ducts", value: oneOf(DUCT_HEATING_SYSTEMS), path: "ducts.heatingSystem", engineDefault: true, meaning: "furnace or heat-pump: HoF 2021 ch. 17 Table 6 gives different duct loss factors for each.", example: "furnace" },
+  { key: "duct_method", header: "Duct loss method", group: "Air & ducts", value: oneOf(DUCT_METHODS), path: "ducts.method", engineDefault: true, meaning: "handbook-table: HoF 2021 ch. 17 Table 6 factors; conduction-leakage: Platload's own physical model (used anyway for encapsulated attics and garages).", example: "handbook-table" },
   { key: "cooling_supply_delta_f", header: "Cooling supply ΔT (°F)", group: "Air & ducts", value: num("temperatureDifferenceF"), path: "coolingSupplyDeltaF", engineDefault: true, meaning: "Room-to-supply-air temperature difference, for the cooling airflow.", example: "20" },
   // Internal gains
   { key: "internal_sensible_btuh", header: "Appliance & equipment sensible (Btu/h, blank = default)", group: "Internal gains", value: num("btuh"), path: "internalGains.rows.0.sensibleBtuh", meaning: "Total sensible gain of appliances, lighting and equipment; blank = the default of HoF 2021 ch. 17 eq. 30, occupants included.", example: "" },
