@@ -206,7 +206,7 @@ export function LotsGrid({ communityId, canEdit, canPermit, canOverride }: { com
       {
         colId: "equipment",
         headerName: "System",
-        width: 120,
+        width: 150,
         pinned: "right",
         editable: (p) => canOverride && !!lot(p) && !lot(p)!.frozen,
         valueGetter: (p) => {
