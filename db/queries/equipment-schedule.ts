@@ -8,15 +8,27 @@ import type { SizingLimits } from "@/lib/equipment";
 import { notFound } from "@/lib/errors";
 import { buildEquipmentSchedule, equipmentScheduleTables, type EquipmentSchedule, type ScheduleCell, type ScheduleTable } from "@/lib/reports/equipment-schedule";
 import { writeCsv } from "@/lib/workbook/table-io";
+import type { PermitSnapshot } from "../recompute";
 
 /** Shown for a lot that has no system yet because the selection has not run (not a misfit). */
 export const NOT_SELECTED_YET = "not selected yet: the equipment selection has not run for this lot";
+
+/**
+ * The system and selection a lot is counted and reported with: a lot frozen for permit keeps the
+ * ones of its permit snapshot (as the lots grid shows them); the others their current ones.
+ */
+export function lotEquipment(lot: { equipmentSystemId: number | null; selection: unknown; permitSnapshot: unknown }): { systemId: number | null; selection: LotSelection | null } {
+  const snapshot = lot.permitSnapshot as PermitSnapshot | null;
+  // Snapshots taken before selections existed carry no equipment: the lot's own columns then.
+  if (snapshot && snapshot.equipmentSystemId !== undefined) return { systemId: snapshot.equipmentSystemId, selection: snapshot.selection ?? null };
+  return { systemId: lot.equipmentSystemId, selection: (lot.selection as LotSelection | null) ?? null };
+}
 
 /** The sizing limits in words, as every schedule and report states them. */
 export const SIZING_LIMIT_LABELS: Record<keyof SizingLimits, string> = {
   coolingMinPct: "Cooling capacity, least % of the cooling total load",
   coolingMaxPct: "Cooling capacity, most % of the cooling total load",
-  heatPumpCoolingMaxPct: "Heat pump cooling capacity, most % of the cooling total load",
+  heatPumpCoolingMaxPct: "Heat pump cooling capacity where the heating load is the larger, most % of the cooling total load",
   heatingMinPct: "Heating capacity, least % of the heating load",
   heatingMaxPct: "Furnace output, most % of the heating load",
 };
@@ -51,14 +63,14 @@ export async function communityEquipmentSchedule({ db, accountId, communityId }:
   const systemRows = await db.select().from(equipmentSystems).where(eq(equipmentSystems.accountId, accountId)).orderBy(asc(equipmentSystems.systemCode));
   const codeById = new Map(systemRows.map((row) => [row.id, row.systemCode]));
   const lotRows = await db
-    .select({ id: lots.id, lotNumber: lots.lotNumber, status: lots.status, plannedStart: lots.plannedStart, equipmentSystemId: lots.equipmentSystemId, equipmentOverride: lots.equipmentOverride, selection: lots.selection })
+    .select({ id: lots.id, lotNumber: lots.lotNumber, status: lots.status, plannedStart: lots.plannedStart, equipmentSystemId: lots.equipmentSystemId, equipmentOverride: lots.equipmentOverride, selection: lots.selection, permitSnapshot: lots.permitSnapshot })
     .from(lots)
     .where(and(eq(lots.accountId, accountId), eq(lots.communityId, communityId)))
     .orderBy(asc(lots.lotNumber));
 
   const lines: ScheduleLotLine[] = lotRows.map((lot) => {
-    const systemCode = lot.equipmentSystemId === null ? null : (codeById.get(lot.equipmentSystemId) ?? null);
-    const selection = lot.selection as LotSelection | null;
+    const { systemId, selection } = lotEquipment(lot);
+    const systemCode = systemId === null ? null : (codeById.get(systemId) ?? null);
     const reason = systemCode !== null ? null : selection ? (selection.noFitReason ?? "no system fits within the sizing limits") : NOT_SELECTED_YET;
     return { lotId: lot.id, lotNumber: lot.lotNumber, status: lot.status, plannedStart: lot.plannedStart, systemCode, overridden: lot.equipmentOverride, reason };
   });

@@ -12,7 +12,7 @@ import { getObject, objectKey, putObject } from "@/lib/storage/object-store";
 import { catalogForHeatingDesign } from "@/lib/workbook/equipment-columns";
 import { writeXlsx } from "@/lib/workbook/table-io";
 import type { PermitSnapshot } from "../recompute";
-import { equipmentScheduleFile, NOT_SELECTED_YET, safeFilePart, XLSX_TYPE, type GeneratedFile } from "./equipment-schedule";
+import { equipmentScheduleFile, lotEquipment, NOT_SELECTED_YET, safeFilePart, XLSX_TYPE, type GeneratedFile } from "./equipment-schedule";
 import { permitScheduleRows } from "./permit-schedule";
 
 export const PACKET_KINDS = ["permit-packet", "equipment-schedule", "permit-schedule"] as const;
@@ -86,7 +86,7 @@ export async function lotReportsFor({ db, accountId, lotIds }: { db: Database; a
       planInfo = { code: plan!.planCode, name: plan!.name, revisionNumber: revision!.number, status: revision!.status };
       approval = { name: revision!.approverName, credential: revision!.approverCredential, date: revision!.approvedOn };
     }
-    const selection = lot.selection as LotSelection | null;
+    const { systemId, selection } = lotEquipment(lot);
     return lotReportFromResults({
       builderAccountName: account?.name ?? "Builder",
       communityName: community.name,
@@ -94,7 +94,7 @@ export async function lotReportsFor({ db, accountId, lotIds }: { db: Database; a
       plan: { ...planInfo, input },
       site,
       loads,
-      selection: systemChoiceOf(lot, selection, systemById, site),
+      selection: systemChoiceOf({ systemId, overridden: lot.equipmentOverride }, selection, systemById, site),
       sizingLimits: selection?.limitsUsed ?? accountLimits,
       approval: approval.name && approval.date ? { reviewerName: approval.name, credential: approval.credential ?? "", approvedOn: approval.date } : null,
       generatedAt,
@@ -103,12 +103,13 @@ export async function lotReportsFor({ db, accountId, lotIds }: { db: Database; a
   return { reports, lots: rows.map((r) => r.lot) };
 }
 
-function systemChoiceOf(lot: LotRow, selection: LotSelection | null, systemById: Map<number, typeof equipmentSystems.$inferSelect>, site: SiteConditions): LotSystemChoice {
-  const row = lot.equipmentSystemId === null ? undefined : systemById.get(lot.equipmentSystemId);
+function systemChoiceOf(lot: { systemId: number | null; overridden: boolean }, selection: LotSelection | null, systemById: Map<number, typeof equipmentSystems.$inferSelect>, site: SiteConditions): LotSystemChoice {
+  const row = lot.systemId === null ? undefined : systemById.get(lot.systemId);
   if (row) {
     // The heat pump's output at this community's heating design temperature, as the selection saw it.
     const [entry] = catalogForHeatingDesign([catalogEntryFromRow(row)], site.heatingOutdoorDbF);
-    return { system: entry, overridden: lot.equipmentOverride, overrideNote: lot.equipmentOverride ? "chosen by purchasing in place of the selection's best fit" : null };
+    const overridden = lot.overridden && selection?.bestFit?.systemId !== row.id;
+    return { system: entry, overridden, overrideNote: overridden ? "chosen by purchasing in place of the selection's best fit" : null };
   }
   if (!selection) return { system: null, reason: `No system: ${NOT_SELECTED_YET}.` };
   return { system: null, reason: `No catalog system fits within the sizing limits: ${selection.noFitReason ?? "no system fits"}.` };

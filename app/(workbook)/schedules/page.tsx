@@ -1,23 +1,17 @@
 import type { Metadata } from "next";
 import { PageHeader } from "@/components/layout/page-header";
-import { Caution } from "@/components/ui/caution";
+import { SchedulesWorkspace } from "@/components/schedules/schedules-workspace";
 import { getPageContext } from "@/lib/auth/page";
 
 export const metadata: Metadata = { title: "Schedules" };
 
-export default async function SchedulesPage() {
-  await getPageContext();
+export default async function SchedulesPage({ searchParams }: { searchParams: Promise<{ community?: string }> }) {
+  const { permissions } = await getPageContext();
+  const raw = Number((await searchParams).community);
   return (
-    <div className="max-w-4xl">
-      <PageHeader title="Schedules" description="Permit schedules, equipment schedules and per-lot load reports, per community." />
-      <div className="rounded border border-dashed border-zinc-300 bg-white p-4 text-zinc-600" data-testid="schedules-not-yet">
-        <p className="mb-2 font-medium text-zinc-800">Not built yet.</p>
-        <p>
-          This page will export the permit schedule (one row per lot: loads, design conditions, equipment, reviewer), the equipment schedule (counts per
-          system per community) and per-lot PDF reports, and send them by e-mail. Until then no schedule can be exported.
-        </p>
-      </div>
-      <Caution className="mt-4" />
+    <div className="max-w-6xl">
+      <PageHeader title="Schedules" description="Per community: the equipment schedule for purchasing, the permit schedule, load reports per lot, permit packets, and sending them by e-mail." />
+      <SchedulesWorkspace initialCommunityId={Number.isSafeInteger(raw) && raw > 0 ? raw : null} canExport={permissions.includes("schedules.export")} />
     </div>
   );
 }
