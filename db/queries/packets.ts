@@ -2,7 +2,7 @@ import "server-only";
 import { and, asc, desc, eq, inArray } from "drizzle-orm";
 import type { Database } from "@/db";
 import { catalogEntryFromRow, sizingLimitsOf, type LotSelection } from "@/db/equipment";
-import { accounts, communities, equipmentSystems, lots, packets, planRevisions, plans, users, LOT_STATUSES, type LotStatus } from "@/db/schema";
+import { accounts, communities, equipmentSystems, lots, packets, planRevisions, plans, users, type LotStatus } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
 import { AppError, notFound } from "@/lib/errors";
 import { computeFacingLoads, parseSiteConditions, type FacingLoads, type PlanInput, type SiteConditions } from "@/lib/load";
@@ -308,4 +308,3 @@ export async function sendCommunityFile({ db, accountId, userId, senderName, acc
   return { packetId, fileName: file.fileName, lotCount: file.lotCount, sentTo: to };
 }
 
-export { LOT_STATUSES };

@@ -9,7 +9,7 @@ import path from "node:path";
 import ExcelJS from "exceljs";
 import { and, count, eq, isNotNull, isNull } from "drizzle-orm";
 import { PDFParse } from "pdf-parse";
-import { beforeAll, describe, expect, it } from "vitest";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import * as scheduleRoute from "@/app/api/communities/[communityId]/equipment-schedule/route";
 import * as packetsRoute from "@/app/api/communities/[communityId]/packets/route";
 import * as sendRoute from "@/app/api/communities/[communityId]/send/route";
@@ -61,6 +61,15 @@ describe("schedules, packets and sending", () => {
   let otherAdmin: string;
   let communityId: string;
   let lotNumbers: string[];
+  let frozeLotId: number | null = null;
+
+  afterAll(async () => {
+    // put back the lot this file froze, so other test files see the seeded statuses
+    if (frozeLotId === null) return;
+    const db = getDb();
+    const [lot] = await db.select().from(lots).where(eq(lots.id, frozeLotId));
+    await setLotStatus({ db, accountId: ids.demoAccountId, userId: ids.roleUsers.designer, lotId: lot.id, version: lot.version, status: "planned" });
+  });
 
   beforeAll(async () => {
     ids = await seededIds(getDb());
@@ -132,6 +141,9 @@ describe("schedules, packets and sending", () => {
     expect(refused.status).toBe(409);
     expect(refused.json.error.message).toContain("=1+2");
     expect((await db.select({ n: count() }).from(packets))[0].n).toBe(before);
+    // leave the account as the other test files expect it: every lot with a plan
+    await db.delete(lots).where(eq(lots.communityId, oddCommunity));
+    await db.delete(communities).where(eq(communities.id, oddCommunity));
   });
 
   it("a permit packet is stored, listed with who and when, downloadable, and its PDF carries the caution and every lot number", async () => {
@@ -158,7 +170,10 @@ describe("schedules, packets and sending", () => {
   it("a packet of the permit-submitted lots holds just those, and a frozen lot's report is its permit snapshot", async () => {
     const db = getDb();
     const [lot] = await db.select().from(lots).where(eq(lots.communityId, ids.demoRecords.communityId)).limit(1);
-    if (lot.status === "planned") await setLotStatus({ db, accountId: ids.demoAccountId, userId: ids.roleUsers.designer, lotId: lot.id, version: lot.version, status: "permit_submitted" });
+    if (lot.status === "planned") {
+      await setLotStatus({ db, accountId: ids.demoAccountId, userId: ids.roleUsers.designer, lotId: lot.id, version: lot.version, status: "permit_submitted" });
+      frozeLotId = lot.id;
+    }
     const res = await callRoute(packetsRoute.POST, { path: "/x", method: "POST", params: { communityId }, cookie: purchasing, body: { statuses: ["permit_submitted"] } });
     expect(res.status, res.text).toBe(200);
     const [{ n: submitted }] = await db.select({ n: count() }).from(lots).where(and(eq(lots.communityId, ids.demoRecords.communityId), eq(lots.status, "permit_submitted")));
