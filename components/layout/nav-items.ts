@@ -6,7 +6,7 @@ export const NAV_ITEMS: (NavItem & { permission: Permission })[] = [
   { href: "/plans", label: "Plans", permission: "read" },
   { href: "/communities", label: "Communities", permission: "read" },
   { href: "/equipment", label: "Equipment", permission: "read" },
-  { href: "/schedules", label: "Schedules", permission: "schedules.export" },
+  { href: "/schedules", label: "Schedules", permission: "read" },
   { href: "/imports", label: "Imports", permission: "imports.read" },
   { href: "/history", label: "History", permission: "read" },
   { href: "/team", label: "Team", permission: "read" },
