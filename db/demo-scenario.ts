@@ -144,6 +144,8 @@ export function demoLots(planCodes: string[]) {
       address: `${100 + n * 4} ${STREETS[street]}`,
       planCode: planCodes[(i * 7 + street) % planCodes.length],
       facingDeg: FACINGS_BY_STREET[street][n % 2],
+      // Construction starts street by street, a few lots a month through 2027.
+      plannedStart: `2027-${String(1 + street * 3 + Math.floor((n - 1) / 10)).padStart(2, "0")}-01`,
     };
   });
 }
@@ -160,6 +162,7 @@ export const DEMO_EQUIPMENT = [
   ["ACF-22", "ac-furnace", "MF-CU24", "MF-AH21", "MF-GF30", 2.0, 21700, 18200, 28800, 2060],
   ["ACF-24", "ac-furnace", "MF-CU24", "MF-AH24", "MF-GF40", 2.0, 23300, 19600, 38400, 2150],
   ["ACF-25", "ac-furnace", "MF-CU24", "MF-AH27", "MF-GF30", 2.0, 24400, 20500, 28800, 2210],
+  ["ACF-27", "ac-furnace", "MF-CU30", "MF-AH24", "MF-GF30", 2.5, 26500, 22300, 28800, 2330],
   ["ACF-26", "ac-furnace", "MF-CU30", "MF-AH24", "MF-GF40", 2.5, 25600, 21500, 38400, 2290],
   ["ACF-28", "ac-furnace", "MF-CU30", "MF-AH27", "MF-GF40", 2.5, 27300, 22900, 38400, 2360],
   ["ACF-29", "ac-furnace", "MF-CU30", "MF-AH30", "MF-GF40", 2.5, 29000, 24400, 38400, 2420],
@@ -168,6 +171,7 @@ export const DEMO_EQUIPMENT = [
   ["ACF-33", "ac-furnace", "MF-CU36", "MF-AH33", "MF-GF40", 3.0, 32400, 27200, 38400, 2600],
   ["ACF-34", "ac-furnace", "MF-CU36", "MF-AH33", "MF-GF60", 3.0, 33300, 28000, 57600, 2640],
   ["ACF-36", "ac-furnace", "MF-CU36", "MF-AH36", "MF-GF60", 3.0, 34800, 29200, 57600, 2710],
+  ["ACF-38", "ac-furnace", "MF-CU42", "MF-AH36", "MF-GF40", 3.5, 37500, 31500, 38400, 2820],
   ["ACF-40", "ac-furnace", "MF-CU42", "MF-AH36", "MF-GF60", 3.5, 38300, 32200, 57600, 2880],
   ["ACF-42", "ac-furnace", "MF-CU42", "MF-AH42", "MF-GF60", 3.5, 40500, 34000, 57600, 2990],
   ["ACF-48", "ac-furnace", "MF-CU48", "MF-AH48", "MF-GF80", 4.0, 46400, 39000, 76800, 3290],

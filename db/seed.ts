@@ -57,7 +57,7 @@ export async function seedDatabase(db: Database): Promise<SeedSummary> {
       for (const p of DEMO_PLANS) planIds.set(p.planCode, await addPlan(tx, accountId, designerId, p));
       const [{ id: communityId }] = await tx.insert(communities).values({ accountId, ...DEMO_ACCOUNT.community, conditions: site }).$returningId();
       await tx.insert(lots).values(
-        demoLots([...planIds.keys()]).map((l) => ({ accountId, communityId, lotNumber: l.lotNumber, address: l.address, planId: planIds.get(l.planCode)!, facingDeg: String(l.facingDeg) })),
+        demoLots([...planIds.keys()]).map((l) => ({ accountId, communityId, lotNumber: l.lotNumber, address: l.address, planId: planIds.get(l.planCode)!, facingDeg: String(l.facingDeg), plannedStart: l.plannedStart })),
       );
       await tx.insert(equipmentSystems).values(
         DEMO_EQUIPMENT.map(([systemCode, systemType, outdoorModel, indoorModel, furnaceModel, tons, total, sensible, heating, price]) => ({
