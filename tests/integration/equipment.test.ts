@@ -79,19 +79,19 @@ describe("equipment catalog and selection", () => {
     expect((await gridLots()).find((l: { id: number }) => l.id === lot.id).equipmentOverride).toBe(false);
   });
 
-  it("the account's sizing limits are used: widening the cooling limit lets more lots fit", async () => {
+  it("the account's sizing limits are used: narrowing the cooling limit leaves fewer lots fitting", async () => {
     const fitting = async () => (await getDb().select({ n: count() }).from(lots).where(and(eq(lots.accountId, ids.demoAccountId), isNotNull(lots.equipmentSystemId))))[0].n;
     const before = await fitting();
     const viewer = await sessionCookie({ userId: ids.roleUsers.viewer, accountId: ids.demoAccountId });
     expect((await callRoute(sizingRoute.PUT, { path: "/x", method: "PUT", cookie: viewer, body: { limits: { coolingMaxPct: 130 } } })).status).toBe(403);
     const bad = await callRoute(sizingRoute.PUT, { path: "/x", method: "PUT", cookie: admin, body: { limits: { coolingMinPct: 120, coolingMaxPct: 110 } } });
     expect(bad.status).toBe(400);
-    const res = await callRoute(sizingRoute.PUT, { path: "/x", method: "PUT", cookie: admin, body: { limits: { coolingMinPct: 90, coolingMaxPct: 130, heatPumpCoolingMaxPct: 135, heatingMinPct: 100, heatingMaxPct: 200 } } });
+    const res = await callRoute(sizingRoute.PUT, { path: "/x", method: "PUT", cookie: admin, body: { limits: { coolingMinPct: 95, coolingMaxPct: 101, heatPumpCoolingMaxPct: 101, heatingMinPct: 100, heatingMaxPct: 140 } } });
     expect(res.status, JSON.stringify(res.json)).toBe(200);
-    expect(await fitting()).toBeGreaterThan(before);
-    const lot = (await gridLots()).find((l: { systemCode: string | null; frozen: boolean }) => l.systemCode && !l.frozen);
+    expect(await fitting()).toBeLessThan(before);
+    const lot = (await gridLots()).find((l: { frozen: boolean }) => !l.frozen);
     const [row] = await getDb().select().from(lots).where(eq(lots.id, lot.id));
-    expect((row.selection as { limitsUsed: { coolingMaxPct: number } }).limitsUsed.coolingMaxPct).toBe(130);
+    expect((row.selection as { limitsUsed: { coolingMaxPct: number } }).limitsUsed.coolingMaxPct).toBe(101);
     await callRoute(sizingRoute.PUT, { path: "/x", method: "PUT", cookie: admin, body: { limits: {} } });
   });
 
