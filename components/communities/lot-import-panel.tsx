@@ -3,6 +3,7 @@
 import Link from "next/link";
 import { useEffect, useState } from "react";
 import { Button } from "@/components/ui/field";
+import { ImportErrors } from "@/components/ui/import-errors";
 import type { ErrorBody } from "@/lib/errors";
 
 interface ImportState {
@@ -130,29 +131,7 @@ export function LotImportPanel({ communityId, onDone }: { communityId: number; o
           {error}
         </p>
       ) : null}
-      {status?.state === "failed" ? (
-        <div className="mt-2 rounded border border-red-200 bg-red-50 p-2 text-xs text-red-800" data-testid="lot-import-errors">
-          <p className="font-medium">{status.errors?.length ?? 0} problem(s) in the file; nothing was imported.</p>
-          <table className="mt-1 w-full text-left">
-            <thead>
-              <tr>
-                <th className="pr-3 font-medium">Row</th>
-                <th className="pr-3 font-medium">Column</th>
-                <th className="font-medium">Problem</th>
-              </tr>
-            </thead>
-            <tbody>
-              {(status.errors ?? []).slice(0, 200).map((e, i) => (
-                <tr key={i}>
-                  <td className="pr-3 align-top">{e.row}</td>
-                  <td className="pr-3 align-top">{e.column}</td>
-                  <td>{e.reason}</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
-      ) : null}
+      {status?.state === "failed" ? <ImportErrors message={`${status.errors?.length ?? 0} problem(s) in the file; nothing was imported.`} errors={status.errors ?? []} testId="lot-import-errors" /> : null}
     </section>
   );
 }

@@ -6,22 +6,13 @@ import { AgGridReact } from "ag-grid-react";
 import { useCallback, useMemo, useRef, useState } from "react";
 import { fmtInt, gridTheme } from "@/components/grid/grid-theme";
 import { Button } from "@/components/ui/field";
+import type { LotResults } from "@/db/recompute";
 import { api, ApiError } from "@/lib/client/api";
 import { facingLabel, parseFacing } from "@/lib/workbook/facing";
 import { LOT_STATUSES } from "@/lib/workbook/lot-columns";
 
-interface LotLoads {
-  heatingBtuh: number;
-  coolingSensibleBtuh: number;
-  coolingLatentBtuh: number;
-  coolingTotalBtuh: number;
-  tons: number;
-  floorAreaPerTonFt2: number;
-  facingRank: number;
-  changed: boolean;
-  previous: { heatingBtuh: number; coolingTotalBtuh: number } | null;
-  revisionNumber: number;
-}
+/** The loads a lot keeps (db/recompute.ts); a type-only import, nothing of the database reaches the browser. */
+type LotLoads = LotResults;
 
 export interface GridLot {
   id: number;

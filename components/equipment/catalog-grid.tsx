@@ -5,9 +5,8 @@ import type { ColDef, ColGroupDef } from "ag-grid-community";
 import { AgGridReact } from "ag-grid-react";
 import { useMemo, useState } from "react";
 import { fmtNum, gridTheme } from "@/components/grid/grid-theme";
-import { Button } from "@/components/ui/field";
+import { FileImportPanel } from "@/components/ui/file-import-panel";
 import { api } from "@/lib/client/api";
-import type { ErrorBody, FieldError } from "@/lib/errors";
 import { EQUIPMENT_COLUMN_GROUPS, EQUIPMENT_COLUMNS } from "@/lib/workbook/equipment-columns";
 
 interface CatalogRow {
@@ -97,59 +96,15 @@ export function CatalogGrid({ canEdit }: { canEdit: boolean }) {
 }
 
 function CatalogImport({ onDone }: { onDone: () => void }) {
-  const [file, setFile] = useState<File | null>(null);
-  const [busy, setBusy] = useState(false);
-  const [result, setResult] = useState<string | null>(null);
-  const [error, setError] = useState<{ message: string; fields: FieldError[] } | null>(null);
-  async function upload() {
-    if (!file) return;
-    setBusy(true);
-    setError(null);
-    setResult(null);
-    const form = new FormData();
-    form.append("file", file);
-    const response = await fetch("/api/equipment/import", { method: "POST", body: form });
-    const body = (await response.json().catch(() => null)) as (Partial<ErrorBody> & { created?: number; updated?: number; lotsReselected?: number }) | null;
-    setBusy(false);
-    if (!response.ok) {
-      setError({ message: body?.error?.message ?? `The server answered ${response.status}.`, fields: body?.error?.fieldErrors ?? [] });
-      return;
-    }
-    setResult(`Imported: ${body?.created ?? 0} systems created, ${body?.updated ?? 0} updated; ${body?.lotsReselected ?? 0} lots reselected.`);
-    onDone();
-  }
   return (
-    <section className="rounded border border-zinc-200 bg-white p-3" data-testid="catalog-import" aria-labelledby="catalog-import-heading">
-      <h2 id="catalog-import-heading" className="mb-1 text-sm font-semibold">
-        Import the catalog
-      </h2>
-      <p className="mb-2 text-xs text-zinc-600">CSV or XLSX in the template layout. Systems are created or updated by system code; if any cell is wrong, nothing is imported and every bad cell is listed.</p>
-      <div className="flex items-center gap-2">
-        <label htmlFor="catalog-import-file" className="sr-only">
-          Catalog file
-        </label>
-        <input id="catalog-import-file" type="file" accept=".csv,.xlsx" className="text-xs" onChange={(e) => setFile(e.target.files?.[0] ?? null)} />
-        <Button type="button" onClick={upload} disabled={!file || busy}>
-          {busy ? "Importing…" : "Import"}
-        </Button>
-      </div>
-      {result ? (
-        <p className="mt-2 text-xs text-accent-800" data-testid="catalog-import-result">
-          {result}
-        </p>
-      ) : null}
-      {error ? (
-        <div className="mt-2 rounded border border-red-200 bg-red-50 p-2 text-xs text-red-800" data-testid="catalog-import-errors">
-          <p className="font-medium">{error.message}</p>
-          <ul className="mt-1 list-disc pl-5">
-            {error.fields.slice(0, 100).map((f, i) => (
-              <li key={i}>
-                row {f.row}, {f.column}: {f.message}
-              </li>
-            ))}
-          </ul>
-        </div>
-      ) : null}
-    </section>
+    <FileImportPanel<{ created: number; updated: number; lotsReselected: number }>
+      title="Import the catalog"
+      description="CSV or XLSX in the template layout. Systems are created or updated by system code; if any cell is wrong, nothing is imported and every bad cell is listed."
+      endpoint="/api/equipment/import"
+      inputId="catalog-import-file"
+      testId="catalog-import"
+      describeResult={(b) => `Imported: ${b.created} systems created, ${b.updated} updated; ${b.lotsReselected} lots reselected.`}
+      onImported={onDone}
+    />
   );
 }

@@ -5,9 +5,8 @@ import { accounts, equipmentSystems, imports, lots } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
 import { sizingLimitsSchema } from "@/lib/equipment";
 import { AppError, notFound } from "@/lib/errors";
-import type { TableCellError } from "@/lib/workbook/columns";
 import { EQUIPMENT_COLUMNS, equipmentEntryToRow, validateEquipmentTable } from "@/lib/workbook/equipment-columns";
-import { readTableFile, TableFileError } from "@/lib/workbook/table-io";
+import { openTableImport } from "./import-file";
 import { catalogEntryFromRow, rowValuesFromEntry, sizingLimitsOf } from "../equipment";
 import { isFrozen, recomputeLots } from "../recompute";
 
@@ -18,29 +17,15 @@ export async function listCatalog({ db, accountId }: { db: Database; accountId: 
   return rows.map((r) => ({ id: r.id, version: r.version, cells: equipmentEntryToRow(catalogEntryFromRow(r)) }));
 }
 
-const fieldErrors = (errors: TableCellError[]) => errors.map((e) => ({ field: `row ${e.row}, ${e.column}`, row: e.row, column: e.column, message: e.reason }));
-
 /**
  * Imports a catalog file: validated as a whole (every bad cell reported, nothing written unless all
  * are good), systems created or updated by system code in one transaction, then every lot's
  * selection recomputed (frozen lots keep theirs). Systems not in the file are kept.
  */
 export async function importCatalog({ db, accountId, userId, fileName, data }: { db: Database; accountId: number; userId: number; fileName: string; data: Uint8Array }) {
-  const [{ id: importId }] = await db.insert(imports).values({ accountId, userId, kind: "equipment", fileName: fileName.slice(0, 255), fileSizeBytes: data.byteLength, state: "validating" }).$returningId();
-  const fail = async (errors: TableCellError[], message: string): Promise<never> => {
-    await db.update(imports).set({ state: "failed", errors, progressPct: 100, finishedAt: new Date() }).where(eq(imports.id, importId));
-    throw new AppError("invalid_input", message, fieldErrors(errors));
-  };
-  if (data.byteLength > CATALOG_IMPORT_MAX_BYTES) return fail([{ row: 1, column: "(file)", reason: `the file is larger than ${CATALOG_IMPORT_MAX_BYTES / 1048576} MB` }], "The file is too large; nothing was imported.");
-  let table;
-  try {
-    table = await readTableFile(fileName, data);
-  } catch (error) {
-    if (error instanceof TableFileError) return fail([{ row: 1, column: "(file)", reason: error.message }], `The file could not be read: ${error.message}. Nothing was imported.`);
-    throw error;
-  }
+  const { importId, table, fail } = await openTableImport({ db, accountId, userId, kind: "equipment", fileName, data, maxBytes: CATALOG_IMPORT_MAX_BYTES });
   const result = validateEquipmentTable(table);
-  if (!result.ok) return fail(result.errors, `${result.errors.length} problem(s) in the file; nothing was imported.`);
+  if (!result.ok) return fail(result.errors);
   return db.transaction(async (tx) => {
     const existing = await tx.select().from(equipmentSystems).where(eq(equipmentSystems.accountId, accountId)).for("update");
     const byCode = new Map(existing.map((e) => [e.systemCode.toLowerCase(), e]));

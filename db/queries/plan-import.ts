@@ -3,18 +3,13 @@ import { eq } from "drizzle-orm";
 import type { Database } from "@/db";
 import { imports, planRevisions, plans } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
-import { AppError } from "@/lib/errors";
-import { readTable, type TableCellError } from "@/lib/workbook/columns";
+import { readTable } from "@/lib/workbook/columns";
 import { PLAN_COLUMNS, validatePlanTable } from "@/lib/workbook/plan-columns";
-import { readTableFile, TableFileError } from "@/lib/workbook/table-io";
 import { recomputeLots } from "./lots";
+import { openTableImport } from "./import-file";
 import { revisionCells, writePlanRevision, type PlanCells } from "./plans";
 
 export const PLAN_IMPORT_MAX_BYTES = 5 * 1024 * 1024;
-
-function tableErrorsToFields(errors: TableCellError[]) {
-  return errors.map((e) => ({ field: `row ${e.row}, ${e.column}`, row: e.row, column: e.column, message: e.reason }));
-}
 
 /**
  * Imports a plan library file (CSV or XLSX in the template layout): validated as a whole, every bad
@@ -22,23 +17,9 @@ function tableErrorsToFields(errors: TableCellError[]) {
  * code in one transaction. The import is recorded either way, with its errors.
  */
 export async function importPlanLibrary({ db, accountId, userId, fileName, data }: { db: Database; accountId: number; userId: number; fileName: string; data: Uint8Array }) {
-  const [{ id: importId }] = await db.insert(imports).values({ accountId, userId, kind: "plans", fileName: fileName.slice(0, 255), fileSizeBytes: data.byteLength, state: "validating" }).$returningId();
-  const fail = async (errors: TableCellError[], message: string) => {
-    await db.update(imports).set({ state: "failed", errors, progressPct: 100, finishedAt: new Date() }).where(eq(imports.id, importId));
-    throw new AppError("invalid_input", message, tableErrorsToFields(errors));
-  };
-  if (data.byteLength > PLAN_IMPORT_MAX_BYTES) {
-    return fail([{ row: 1, column: "(file)", reason: `the file is ${(data.byteLength / 1048576).toFixed(1)} MB; the limit is ${PLAN_IMPORT_MAX_BYTES / 1048576} MB` }], "The file is too large; nothing was imported.");
-  }
-  let table;
-  try {
-    table = await readTableFile(fileName, data);
-  } catch (error) {
-    if (error instanceof TableFileError) return fail([{ row: 1, column: "(file)", reason: error.message }], `The file could not be read: ${error.message}. Nothing was imported.`);
-    throw error;
-  }
+  const { importId, table, fail } = await openTableImport({ db, accountId, userId, kind: "plans", fileName, data, maxBytes: PLAN_IMPORT_MAX_BYTES });
   const result = validatePlanTable(table);
-  if (!result.ok) return fail(result.errors, `${result.errors.length} problem(s) in the file; nothing was imported.`);
+  if (!result.ok) return fail(result.errors);
   const entered = new Map(readTable(table, PLAN_COLUMNS).rows.map((r) => [r.rowNumber, r.entered]));
 
   const counts = await db.transaction(async (tx) => {

@@ -1,56 +1,11 @@
 import "server-only";
 import { and, asc, desc, eq } from "drizzle-orm";
 import type { Database } from "@/db";
-import { auditLog, communities, equipmentSystems, imports, lots, planRevisions, plans, users } from "@/db/schema";
+import { auditLog, communities, equipmentSystems, imports, lots, users } from "@/db/schema";
 import { notFound } from "@/lib/errors";
 
 // Read queries for the account's records. Every one takes the account id, so none can forget it;
 // a record of another account is simply not found.
-
-export async function listPlans({ db, accountId }: { db: Database; accountId: number }) {
-  return db
-    .select({
-      id: plans.id,
-      planCode: plans.planCode,
-      name: plans.name,
-      version: plans.version,
-      updatedAt: plans.updatedAt,
-      revisionId: planRevisions.id,
-      revisionNumber: planRevisions.number,
-      revisionStatus: planRevisions.status,
-      input: planRevisions.input,
-      results: planRevisions.results,
-      engineVersion: planRevisions.engineVersion,
-    })
-    .from(plans)
-    .leftJoin(planRevisions, eq(planRevisions.id, plans.currentRevisionId))
-    .where(eq(plans.accountId, accountId))
-    .orderBy(asc(plans.planCode));
-}
-
-export async function getPlanById({ db, accountId, planId }: { db: Database; accountId: number; planId: number }) {
-  const [plan] = await db.select().from(plans).where(and(eq(plans.id, planId), eq(plans.accountId, accountId)));
-  if (!plan) throw notFound("That plan model");
-  const revisions = await db
-    .select({
-      id: planRevisions.id,
-      number: planRevisions.number,
-      status: planRevisions.status,
-      input: planRevisions.input,
-      results: planRevisions.results,
-      engineVersion: planRevisions.engineVersion,
-      approverName: planRevisions.approverName,
-      approverCredential: planRevisions.approverCredential,
-      approvedOn: planRevisions.approvedOn,
-      createdAt: planRevisions.createdAt,
-      createdBy: users.name,
-    })
-    .from(planRevisions)
-    .leftJoin(users, eq(users.id, planRevisions.createdByUserId))
-    .where(and(eq(planRevisions.planId, planId), eq(planRevisions.accountId, accountId)))
-    .orderBy(desc(planRevisions.number));
-  return { plan, revisions };
-}
 
 export async function listCommunities({ db, accountId }: { db: Database; accountId: number }) {
   return db.select().from(communities).where(eq(communities.accountId, accountId)).orderBy(asc(communities.name));
@@ -62,38 +17,10 @@ export async function getCommunityById({ db, accountId, communityId }: { db: Dat
   return community;
 }
 
-export async function listLotsOfCommunity({ db, accountId, communityId }: { db: Database; accountId: number; communityId: number }) {
-  await getCommunityById({ db, accountId, communityId });
-  return db
-    .select({
-      id: lots.id,
-      lotNumber: lots.lotNumber,
-      address: lots.address,
-      planId: lots.planId,
-      planCode: plans.planCode,
-      facingDeg: lots.facingDeg,
-      optionsNote: lots.optionsNote,
-      status: lots.status,
-      plannedStart: lots.plannedStart,
-      results: lots.results,
-      permitSnapshotAt: lots.permitSnapshotAt,
-      equipmentSystemId: lots.equipmentSystemId,
-      version: lots.version,
-    })
-    .from(lots)
-    .leftJoin(plans, eq(plans.id, lots.planId))
-    .where(and(eq(lots.accountId, accountId), eq(lots.communityId, communityId)))
-    .orderBy(asc(lots.lotNumber));
-}
-
 export async function getLotById({ db, accountId, lotId }: { db: Database; accountId: number; lotId: number }) {
   const [lot] = await db.select().from(lots).where(and(eq(lots.id, lotId), eq(lots.accountId, accountId)));
   if (!lot) throw notFound("That lot");
   return lot;
-}
-
-export async function listEquipment({ db, accountId }: { db: Database; accountId: number }) {
-  return db.select().from(equipmentSystems).where(eq(equipmentSystems.accountId, accountId)).orderBy(asc(equipmentSystems.systemCode));
 }
 
 export async function getEquipmentSystemById({ db, accountId, systemId }: { db: Database; accountId: number; systemId: number }) {

@@ -28,7 +28,7 @@ test("a designer imports the template, edits with a formula, bulk-raises insulat
   // import the template from templates/
   await page.locator("#plan-import-file").setInputFiles(path.resolve(__dirname, "../../templates/plan-library-template.csv"));
   await page.getByTestId("plan-import").getByRole("button", { name: "Import" }).click();
-  await expect(page.getByTestId("import-result")).toContainText("1 created");
+  await expect(page.getByTestId("plan-import-result")).toContainText("1 created");
 
   // a formula in a cell: the facing loads change
   let plans = await plansFromApi(page);
