@@ -57,7 +57,7 @@ export function FileImportPanel<T>({
       <p className="mb-2 text-xs text-zinc-600">{description}</p>
       <div className="flex items-center gap-2">
         <label htmlFor={inputId} className="sr-only">
-          {title}: file
+          Choose a .csv or .xlsx file
         </label>
         <input id={inputId} type="file" accept=".csv,.xlsx" onChange={(e) => setFile(e.target.files?.[0] ?? null)} className="text-xs" />
         <Button type="button" onClick={upload} disabled={!file || busy}>
