@@ -2,7 +2,7 @@
 // and the catalog table use (lib/workbook/equipment-columns.ts), and the selection kept per lot.
 // No "server-only" guard: the seed and the benchmark use it too.
 import { eq } from "drizzle-orm";
-import { DEFAULT_SIZING_LIMITS, selectEquipment, sizingLimitsSchema, type SizingLimits } from "@/lib/equipment";
+import { DEFAULT_SIZING_LIMITS, parseCatalog, selectFromParsed, sizingLimitsSchema, type CatalogSystem, type SizingLimits } from "@/lib/equipment";
 import { catalogForHeatingDesign, joinModelNumbers, type EquipmentCatalogEntry } from "@/lib/workbook/equipment-columns";
 import type { Database } from "./index";
 import { accounts, equipmentSystems, type EquipmentSystem } from "./schema";
@@ -73,8 +73,6 @@ export interface LotSelection {
   fittingCodes: string[];
   /** When nothing fits: the nearest system's reasons, in words (too big, too small, latent short…). */
   noFitReason: string | null;
-  /** Every system that does not fit, with its reasons. */
-  misfits: { systemCode: string; reasons: string[] }[];
   /** The chosen system (override or best fit) against the loads. */
   chosen: { systemId: number; systemCode: string; fits: boolean; reasons: string[]; coolingPctOfLoad: number | null; heatingPctOfLoad: number | null } | null;
   limitsUsed: SizingLimits;
@@ -82,7 +80,7 @@ export interface LotSelection {
 
 /** Selects equipment for lots of one account: the catalog is read once, adjusted per community. */
 export class LotEquipmentSelector {
-  private perSite = new Map<number, EquipmentCatalogEntry[]>();
+  private perSite = new Map<number, CatalogSystem[]>();
   private idByCode: Map<string, number>;
   private codeById: Map<number, string>;
 
@@ -110,10 +108,11 @@ export class LotEquipmentSelector {
   ): { selection: LotSelection; systemId: number | null } {
     let catalog = this.perSite.get(communityId);
     if (!catalog) {
-      catalog = catalogForHeatingDesign(this.rows.map(catalogEntryFromRow), heatingOutdoorDbF);
+      // Parsed once per community (heat pumps rated at its heating design temperature), not per lot.
+      catalog = parseCatalog(catalogForHeatingDesign(this.rows.map(catalogEntryFromRow), heatingOutdoorDbF));
       this.perSite.set(communityId, catalog);
     }
-    const result = selectEquipment({ loads, catalog, limits: this.limits });
+    const result = selectFromParsed({ loads: { ...loads, coolingRequired: true }, catalog, limits: this.limits });
     const evaluations = [...result.fitting, ...result.notFitting];
     const best = result.bestFit;
     const chosenCode = overrideSystemId ? this.codeById.get(overrideSystemId) : best?.system.id;
@@ -125,7 +124,6 @@ export class LotEquipmentSelector {
       bestFit: best ? { systemId: this.idByCode.get(best.system.id)!, systemCode: best.system.id, coolingPctOfLoad: best.coolingPctOfLoad, heatingPctOfLoad: best.heatingPctOfLoad } : null,
       fittingCodes: result.fitting.map((e) => e.system.id),
       noFitReason: best ? null : this.rows.length === 0 ? "the catalog is empty" : nearest ? `nearest is ${nearest.system.id}: ${nearest.reasons.map((r) => r.message).join("; ")}` : "no system fits",
-      misfits: result.notFitting.map((e) => ({ systemCode: e.system.id, reasons: e.reasons.map((r) => r.message) })),
       chosen: chosen
         ? { systemId: this.idByCode.get(chosen.system.id)!, systemCode: chosen.system.id, fits: chosen.fits, reasons: chosen.reasons.map((r) => r.message), coolingPctOfLoad: chosen.coolingPctOfLoad, heatingPctOfLoad: chosen.heatingPctOfLoad }
         : null,

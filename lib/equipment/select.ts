@@ -49,7 +49,8 @@ export interface EquipmentSelection {
   limitsUsed: SizingLimits;
 }
 
-const fmt = (n: number) => Math.round(n).toLocaleString("en-US");
+/** Whole Btu/h with thousands commas ("12,345"); plain string work, since Intl formatting is slow in bulk reselection. */
+const fmt = (n: number) => String(Math.round(n)).replace(/\B(?=(\d{3})+(?!\d))/g, ",");
 
 function pctOf(capacity: number, load: number): number | null {
   return load > 0 ? (100 * capacity) / load : null;
@@ -133,15 +134,27 @@ export function selectEquipment(args: {
 }): EquipmentSelection {
   const loads = parseOrThrow(selectionLoadsSchema.safeParse(args.loads), "loads");
   const limits = args.limits ? parseOrThrow(sizingLimitsSchema.safeParse(args.limits), "limits") : { ...DEFAULT_SIZING_LIMITS };
+  return selectFromParsed({ loads, catalog: parseCatalog(args.catalog), limits });
+}
+
+/** Validates a catalog once (every bad row named), for many selections with `selectFromParsed`. */
+export function parseCatalog(raw: readonly unknown[]): CatalogSystem[] {
   const issues: LoadInputIssue[] = [];
   const catalog: CatalogSystem[] = [];
-  args.catalog.forEach((raw, i) => {
-    const parsed = catalogSystemSchema.safeParse(raw);
+  raw.forEach((row, i) => {
+    const parsed = catalogSystemSchema.safeParse(row);
     if (parsed.success) catalog.push(parsed.data);
     else issues.push(...toLoadInputIssues(parsed.error, `catalog.${i}`));
   });
   if (issues.length > 0) throw LoadInputError.fromIssues(issues);
+  return catalog;
+}
 
+/**
+ * The selection itself, for inputs already validated (a bulk recompute selects for thousands of
+ * lots with one parsed catalog). `selectEquipment` validates and calls it.
+ */
+export function selectFromParsed({ loads, catalog, limits }: { loads: SelectionLoads; catalog: readonly CatalogSystem[]; limits: SizingLimits }): EquipmentSelection {
   const evaluations = catalog.map((system) => evaluateSystem(system, loads, limits));
   const fitting = evaluations
     .filter((e) => e.fits)
