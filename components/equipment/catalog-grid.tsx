@@ -6,6 +6,7 @@ import { AgGridReact } from "ag-grid-react";
 import { useMemo, useState } from "react";
 import { fmtNum, gridTheme } from "@/components/grid/grid-theme";
 import { FileImportPanel } from "@/components/ui/file-import-panel";
+import { TableFileLinks } from "@/components/ui/table-file-links";
 import { api } from "@/lib/client/api";
 import { EQUIPMENT_COLUMN_GROUPS, EQUIPMENT_COLUMNS } from "@/lib/workbook/equipment-columns";
 
@@ -76,20 +77,7 @@ export function CatalogGrid({ canEdit }: { canEdit: boolean }) {
           tooltipShowDelay={300}
         />
       </div>
-      <div className="flex gap-3 text-xs">
-        <a className="text-accent-700 hover:underline" href="/api/equipment/export?format=xlsx">
-          Export XLSX
-        </a>
-        <a className="text-accent-700 hover:underline" href="/api/equipment/export?format=csv">
-          Export CSV
-        </a>
-        <a className="text-accent-700 hover:underline" href="/api/equipment/template?format=xlsx">
-          Template XLSX
-        </a>
-        <a className="text-accent-700 hover:underline" href="/api/equipment/template?format=csv">
-          Template CSV
-        </a>
-      </div>
+      <TableFileLinks base="/api/equipment" />
       {canEdit ? <CatalogImport onDone={() => void queryClient.invalidateQueries({ queryKey: ["equipment"] })} /> : null}
     </div>
   );

@@ -7,6 +7,7 @@ import Link from "next/link";
 import { useCallback, useMemo, useRef, useState } from "react";
 import { fmtInt, fmtNum, gridTheme } from "@/components/grid/grid-theme";
 import { Caution } from "@/components/ui/caution";
+import { TableFileLinks } from "@/components/ui/table-file-links";
 import { Button, FormError } from "@/components/ui/field";
 import { api, ApiError } from "@/lib/client/api";
 import { isFormula } from "@/lib/workbook/formula";
@@ -406,19 +407,8 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
           <input type="checkbox" checked={allFacings} onChange={(e) => setAllFacings(e.target.checked)} data-testid="toggle-facings" />
           Show all four facings
         </label>
-        <div className="ml-auto flex gap-3 text-xs">
-          <a className="text-accent-700 hover:underline" href={`/api/plans/export?format=xlsx${communityId ? `&communityId=${communityId}` : ""}`}>
-            Export XLSX
-          </a>
-          <a className="text-accent-700 hover:underline" href={`/api/plans/export?format=csv${communityId ? `&communityId=${communityId}` : ""}`}>
-            Export CSV
-          </a>
-          <a className="text-accent-700 hover:underline" href="/api/plans/template?format=xlsx">
-            Template XLSX
-          </a>
-          <a className="text-accent-700 hover:underline" href="/api/plans/template?format=csv">
-            Template CSV
-          </a>
+        <div className="ml-auto">
+          <TableFileLinks base="/api/plans" query={communityId ? `&communityId=${communityId}` : ""} />
         </div>
       </div>
 
