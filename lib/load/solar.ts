@@ -2,9 +2,11 @@
  * Solar geometry and the ASHRAE clear-sky model, HoF 2021 ch. 14 ("Climatic Design
  * Information", section on clear-sky solar radiation).
  *
- * Equation numbers are as recalled (from memory); the chapter itself was not in the reference
- * store. The formulas reproduce the chapter's Atlanta July 21 example (beam 784, diffuse 166 W/m²
- * at noon; 280/121/88 W/m² on a surface 60° W of S at 3 pm) to within 0.5 % — see
+ * Equations, numbers and constants checked against the 2021 SI edition of the chapter, read in a
+ * stored Markdown copy (section 2 "Calculating Clear-Sky Solar Radiation" and section 3
+ * "Transposition to Receiving Surfaces", pp. 14.8–14.12). The formulas reproduce the chapter's
+ * Atlanta July 21 Examples 3 and 7 (beam 784, diffuse 166 W/m² at noon; 280/121/87.9 W/m² on a
+ * surface 60° W of S at 3 pm daylight time) to within 0.5 % — see
  * tests/unit/load/reference-checks.test.ts.
  *
  * Conventions (stated once): angles in degrees; azimuths measured clockwise from north
@@ -15,10 +17,10 @@
  */
 import { DEG } from "./units";
 
-/** Solar constant, W/m² (HoF 2021 ch. 14, Esc = 1367 W/m²). */
+/** Solar constant, W/m² (HoF 2021 ch. 14, Esc = 1367 W/m², the WMO 1981 value the chapter uses). */
 export const SOLAR_CONSTANT_W_M2 = 1367;
 
-/** Day of year of the 21st of each month, the handbook's design days (HoF ch. 14 Table 2 dates). */
+/** Day of year of the 21st of each month, the handbook's design days (HoF 2021 ch. 14 Table 2, day of year row). */
 const DAY_OF_YEAR_21ST = [21, 52, 80, 111, 141, 172, 202, 233, 264, 294, 325, 355] as const;
 
 export function designDayOfYear(month: number): number {
@@ -27,7 +29,7 @@ export function designDayOfYear(month: number): number {
   return n;
 }
 
-/** Extraterrestrial normal irradiance E0, W/m² (HoF 2021 ch. 14 eq. 1). */
+/** Extraterrestrial normal irradiance E0, W/m² (HoF 2021 ch. 14 eq. 4). */
 export function extraterrestrialIrradianceWm2(dayOfYear: number): number {
   return SOLAR_CONSTANT_W_M2 * (1 + 0.033 * Math.cos((360 * (dayOfYear - 3) * DEG) / 365));
 }
@@ -41,7 +43,7 @@ export function equationOfTimeMin(dayOfYear: number): number {
   );
 }
 
-/** Solar declination, degrees (HoF 2021 ch. 14 eq. 6). */
+/** Solar declination, degrees (HoF 2021 ch. 14 eq. 10). */
 export function declinationDeg(dayOfYear: number): number {
   return 23.45 * Math.sin(((360 * (dayOfYear + 284)) / 365) * DEG);
 }
@@ -66,8 +68,8 @@ export interface SunPosition {
 }
 
 /**
- * Solar altitude and azimuth (HoF 2021 ch. 14 eq. 8–12): hour angle H = 15(AST − 12);
- * sin β = cos L cos δ cos H + sin L sin δ; azimuth from the handbook's south-based angle φ.
+ * Solar altitude and azimuth (HoF 2021 ch. 14 eq. 11–15): hour angle H = 15(AST − 12) (eq. 11);
+ * sin β = cos L cos δ cos H + sin L sin δ (eq. 12); azimuth from the handbook's south-based angle φ.
  */
 export function sunPosition(latitudeDeg: number, dayOfYear: number, solarTimeHours: number): SunPosition {
   const lat = latitudeDeg * DEG;
@@ -75,7 +77,8 @@ export function sunPosition(latitudeDeg: number, dayOfYear: number, solarTimeHou
   const hourAngle = 15 * (solarTimeHours - 12) * DEG;
   const sinBeta = Math.cos(lat) * Math.cos(dec) * Math.cos(hourAngle) + Math.sin(lat) * Math.sin(dec);
   const beta = Math.asin(Math.max(-1, Math.min(1, sinBeta)));
-  // φ measured from south, positive west (afternoon), HoF ch. 14 eq. 11–12.
+  // φ measured from south, positive west (afternoon), HoF 2021 ch. 14 eq. 14–15; this cos φ is
+  // the same quantity as eq. 15's (cos H cos δ sin L − sin δ cos L)/cos β, written with sin β.
   const cosPhi = (sinBeta * Math.sin(lat) - Math.sin(dec)) / (Math.cos(beta) * Math.cos(lat));
   let phi = Math.acos(Math.max(-1, Math.min(1, cosPhi)));
   if (hourAngle < 0) phi = -phi;
@@ -128,7 +131,7 @@ export interface SurfaceIrradiance {
 }
 
 /**
- * Irradiance on a surface (HoF 2021 ch. 14 eq. 22–29): cos θ = cos β cos γ sin Σ + sin β cos Σ;
+ * Irradiance on a surface (HoF 2021 ch. 14 eq. 21–31): γ = φ − ψ, cos θ = cos β cos γ sin Σ + sin β cos Σ;
  * beam Eb·cos θ; sky diffuse Ed·Y on vertical surfaces, Ed·(Y sin Σ + cos Σ) for Σ ≤ 90°, with
  * Y = max(0.45, 0.55 + 0.437 cos θ + 0.313 cos² θ); ground-reflected (Eb sin β + Ed)·ρg·(1 − cos Σ)/2.
  */

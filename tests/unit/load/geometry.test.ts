@@ -6,7 +6,7 @@ import { overhangSunlitFraction, shgcAngleRatio } from "../../../lib/load/window
 import { ASPEN_1, CEDAR_BEND_SITE } from "../../fixtures/engine/example-plans";
 
 describe("solar geometry", () => {
-  it("July 21 declination and equation of time match HoF ch. 14 Table 2 (20.4°, −6.4 min; from memory)", () => {
+  it("July 21 declination and equation of time match HoF 2021 SI ch. 14 Table 2 (20.4°, −6.4 min; read in a stored copy, p. 14.8)", () => {
     const n = designDayOfYear(7);
     expect(n).toBe(202);
     expect(declinationDeg(n)).toBeCloseTo(20.4, 0);
