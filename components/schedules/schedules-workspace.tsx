@@ -92,6 +92,9 @@ export function SchedulesWorkspace({ initialCommunityId, canExport }: { initialC
             <a className="text-accent-700 hover:underline" data-testid="permit-schedule-csv" href={`/api/communities/${communityId}/permit-schedule?format=csv`}>
               Permit schedule CSV
             </a>
+            <a className="text-accent-700 hover:underline" data-testid="account-equipment-schedule" href="/api/equipment-schedule?format=xlsx">
+              Equipment schedule, all communities XLSX
+            </a>
           </div>
         ) : null}
       </div>

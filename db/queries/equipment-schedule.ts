@@ -147,3 +147,21 @@ export async function equipmentScheduleFile({ db, accountId, communityId, format
 }
 
 export { XLSX_TYPE, safeFilePart };
+
+/**
+ * The account-wide equipment schedule for purchasing: every community's lots counted under their
+ * systems, by community and by month of planned start, with totals and cost.
+ */
+export async function accountEquipmentScheduleFile({ db, accountId, format }: { db: Database; accountId: number; format: "xlsx" | "csv" }): Promise<GeneratedFile> {
+  const all = await db.select({ id: communities.id }).from(communities).where(eq(communities.accountId, accountId)).orderBy(asc(communities.name));
+  const perCommunity = await Promise.all(all.map((c) => communityEquipmentSchedule({ db, accountId, communityId: c.id })));
+  const systemRows = await db.select().from(equipmentSystems).where(eq(equipmentSystems.accountId, accountId)).orderBy(asc(equipmentSystems.systemCode));
+  const schedule = buildEquipmentSchedule({
+    systems: systemRows.map(catalogEntryFromRow),
+    lots: perCommunity.flatMap((r) => r.lots.map((line) => ({ communityName: r.community.name, lotNumber: line.lotNumber, systemCode: line.systemCode, noFitReason: line.reason, plannedStart: line.plannedStart }))),
+  });
+  const tables = scheduleTablesWithLimits({ community: { id: 0, name: "All communities" }, schedule, limits: await sizingLimitsOf(db, accountId), lots: perCommunity.flatMap((r) => r.lots) });
+  const fileName = `equipment-schedule-all-communities-${new Date().toISOString().slice(0, 10)}.${format}`;
+  if (format === "csv") return { fileName, contentType: "text/csv; charset=utf-8", body: new TextEncoder().encode(writeTablesCsv(tables)) };
+  return { fileName, contentType: XLSX_TYPE, body: await writeTablesXlsx(tables) };
+}

@@ -112,3 +112,39 @@ describe("equipment catalog and selection", () => {
     expect(res.json.lotsReselected).toBeGreaterThan(0);
   });
 });
+
+describe("the account-wide equipment schedule", () => {
+  it("counts every lot of every community under its system, and only the account's own", async () => {
+    const { default: ExcelJS } = await import("exceljs");
+    const { NextRequest } = await import("next/server");
+    const { GET } = await import("@/app/api/equipment-schedule/route");
+    const ids = await seededIds(getDb());
+    const cookie = await sessionCookie({ userId: ids.roleUsers.viewer, accountId: ids.demoAccountId });
+    const csv = await callRoute(GET, { path: "/api/equipment-schedule?format=csv", cookie });
+    expect(csv.status).toBe(200);
+    expect(csv.text).toContain("All communities");
+    expect(csv.text).not.toContain("BW-30"); // the other account's system
+    const response = await GET(new NextRequest("http://127.0.0.1/api/equipment-schedule?format=xlsx", { headers: { cookie } }), { params: Promise.resolve({}) });
+    const workbook = new ExcelJS.Workbook();
+    await workbook.xlsx.load(Buffer.from(await response.arrayBuffer()) as unknown as ExcelJS.Buffer);
+    // every sheet's numbers are written as numbers; the lots with a system, counted here from the database,
+    // equal the sum of the per-community counts in the by-community sheet
+    const [{ n }] = await getDb().select({ n: count() }).from(lots).where(and(eq(lots.accountId, ids.demoAccountId), isNotNull(lots.equipmentSystemId)));
+    const sheet = workbook.worksheets.find((w) => /communit/i.test(w.name))!;
+    expect(sheet, workbook.worksheets.map((w) => w.name).join(", ")).toBeTruthy();
+    const header = (sheet.getRow(1).values as unknown[]).map(String);
+    const countCol = header.findIndex((h) => /^count$/i.test(h));
+    let sum = 0;
+    let grandTotal = 0;
+    sheet.eachRow((row, i) => {
+      if (i === 1) return;
+      const value = row.getCell(countCol).value;
+      if (typeof value !== "number") return;
+      if (row.getCell(2).value === "Total") {
+        if (row.getCell(1).value === "All communities") grandTotal = value;
+      } else sum += value;
+    });
+    expect(sum).toBe(n);
+    expect(grandTotal).toBe(n);
+  });
+});
