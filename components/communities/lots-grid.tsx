@@ -111,6 +111,24 @@ export function LotsGrid({ communityId, canEdit, canPermit, canOverride }: { com
     });
     return [
       { colId: "lot", headerName: "Lot", width: 90, pinned: "left", valueGetter: (p) => lot(p)?.lotNumber, editable: false },
+      {
+        colId: "report",
+        headerName: "",
+        width: 64,
+        pinned: "left",
+        editable: false,
+        sortable: false,
+        filter: false,
+        headerTooltip: "The lot's load report (PDF)",
+        cellRenderer: (p: { data?: Row }) => {
+          const l = lot(p);
+          return l && l.loads ? (
+            <a href={`/api/lots/${l.id}/report`} target="_blank" rel="noreferrer" className="text-accent-700 hover:underline" data-testid={`report-${l.lotNumber}`}>
+              Report
+            </a>
+          ) : null;
+        },
+      },
       { colId: "address", headerName: "Address", width: 180, editable: (p) => canEdit && !!lot(p), valueGetter: (p) => lot(p)?.address, valueSetter: (p) => save(p.data, { address: String(p.newValue ?? "") }) },
       {
         colId: "plan",

@@ -10,6 +10,7 @@ import * as lotEquipmentRoute from "@/app/api/lots/[lotId]/equipment/route";
 import * as plansRoute from "@/app/api/plans/route";
 import { getDb } from "@/db";
 import { equipmentSystems, lots } from "@/db/schema";
+import ExcelJS from "exceljs";
 import { readCsv } from "@/lib/workbook/table-io";
 import { seededIds } from "../support/demo-ids";
 import { callRoute, sessionCookie } from "../support/requests";
@@ -115,7 +116,6 @@ describe("equipment catalog and selection", () => {
 
 describe("the account-wide equipment schedule", () => {
   it("counts every lot of every community under its system, and only the account's own", async () => {
-    const { default: ExcelJS } = await import("exceljs");
     const { NextRequest } = await import("next/server");
     const { GET } = await import("@/app/api/equipment-schedule/route");
     const ids = await seededIds(getDb());
