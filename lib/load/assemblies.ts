@@ -3,17 +3,23 @@
  * (parallel-path method, HoF 2021 ch. 27/26: U = Σ fᵢ / Rᵢ over the framing and cavity paths,
  * each path's R the sum of its layers in series).
  *
- * Material and film resistances (h·ft²·°F/Btu):
- * - surface films, HoF 2021 ch. 26 Table 10: inside vertical 0.68, heat flow up 0.61, heat flow
- *   down 0.92, outside winter 15 mph 0.17, outside summer 7.5 mph 0.25; 45° slopes up 0.62 /
- *   down 0.76 (from memory).
- * - materials, HoF 2021 ch. 26 Table 1 as ENGINE.md lists them (the chapter was not in the
- *   reference store; gypsum ½ in 0.45 matches a public copy of the 1997 edition's table):
- *   gypsum ½ in 0.45; OSB 7/16 in 0.62; plywood ¾ in 1.08;
- *   vinyl siding 0.62; asphalt shingles 0.44; softwood 1.25 per inch (from memory, the ASHRAE
- *   90.1 Appendix A convention); 8 in hollow normal-weight block 1.1 (ENGINE.md: about 1.0–1.1),
- *   core-filled (perlite) 2.0 (from memory); stucco ⅞ in 0.18 (from memory); unventilated
- *   vertical air space ¾–3½ in about 1.0 (from memory, HoF ch. 26 Table 3 order of magnitude).
+ * Material and film resistances (h·ft²·°F/Btu), checked against HoF 2021 SI ch. 26 read in a
+ * stored Markdown copy of the SI chapter (SI values × 5.678 = IP; tests/unit/load/material-resistances.test.ts):
+ * - surface films, ch. 26 Table 10 (nonreflective, ε 0.90; R = 1/h): inside vertical 0.68
+ *   (h 8.29 W/m²·K), heat flow up 0.61 (9.26), heat flow down 0.92 (6.13), 45° slope up 0.62
+ *   (9.09) / down 0.76 (7.50); outside winter 6.7 m/s (15 mph) 0.17 (h 34.0), outside summer
+ *   3.4 m/s (7.5 mph) 0.25 (h 22.7).
+ * - materials, ch. 26 Table 1: gypsum or plaster board ½ in 0.45 (k 0.16 W/m·K); OSB 7/16 in
+ *   0.62 (9 to 11 mm, R 0.11 m²·K/W); plywood ¾ in 1.08 (19.0 mm, R 0.19); vinyl siding
+ *   hollow-backed 0.62 (R 0.11); asphalt shingles 0.44 (R 0.078); stucco ⅞ in 0.18 (cement
+ *   plaster, sand aggregate, k 0.72); 8 in hollow normal-weight block 1.1 (printed range
+ *   0.17–0.20 m²·K/W = 0.97–1.14 for 2 or 3 cores; 1.1 as in ENGINE.md), perlite-filled
+ *   cores 1.99 (R 0.35; was 2.0 from memory); softwood 1.25 per inch (the ASHRAE 90.1
+ *   Appendix A convention, from memory; inside Table 1's hem/fir and spruce/pine/fir range,
+ *   k 0.11–0.13 W/m·K = 1.11–1.31 per inch; Douglas fir and southern pine, k 0.14–0.16, are
+ *   lower, about 0.9–1.0 per inch).
+ * - unventilated vertical air space ¾–3½ in about 1.0: our rounded value inside ch. 26 Table 3
+ *   (20 to 90 mm, vertical, ε 0.82: 0.13–0.27 m²·K/W = 0.8–1.5 by mean temperature).
  * - framing fractions, 90.1 Appendix A (from memory): walls 25 % at 16 in o.c., 22 % at 24 in;
  *   attic ceilings 85 % full-depth insulation, 5 % half depth (eaves), 10 % joist (truss chord);
  *   rafters and floor joists 10 % at 16 in, 7 % at 24 in (from memory).
@@ -48,10 +54,14 @@ export const MATERIAL_R = {
   asphaltShingles: 0.44,
   softwoodPerInch: 1.25,
   cmu8inHollow: 1.1,
-  cmu8inCoreFilled: 2.0,
+  cmu8inCoreFilled: 1.99,
   stuccoSevenEighthsInch: 0.18,
   airSpaceVertical: 1.0,
-  /** Blown loose-fill insulation per inch, used only to find how much lies over a ceiling joist (from memory). */
+  /**
+   * Blown loose-fill insulation per inch, used only to find how much lies over a ceiling joist: our
+   * middle value between HoF 2021 ch. 26 Table 1 attic glass fiber (k 0.052–0.055 W/m·K, 2.6–2.8
+   * per inch) and attic cellulose (k 0.039–0.040, 3.6–3.7 per inch).
+   */
   looseFillPerInch: 3.1,
 } as const;
 
@@ -63,7 +73,7 @@ interface Path {
   r: number;
 }
 
-/** Parallel-path U-factor: U = Σ fᵢ/Rᵢ (HoF 2021 ch. 27 parallel-path method). */
+/** Parallel-path U-factor: U = Σ fᵢ/Rᵢ (HoF 2021 ch. 27 parallel-path method; chapter not read). */
 export function parallelPathU(paths: readonly Path[]): number {
   let u = 0;
   for (const p of paths) u += p.fraction / p.r;

@@ -1,0 +1,74 @@
+/**
+ * Film and material resistances of lib/load/assemblies.ts against HoF 2021 SI ch. 26, read in a
+ * stored Markdown copy of the 2021 SI chapter: Table 1 "Building and Insulating Materials: Design
+ * Values" (pp. 26.8–26.12) and Table 10 "Surface Film Coefficients/Resistances" (p. 26.21,
+ * nonreflective surfaces, ε = 0.90) and Table 3 "Thermal Resistances of Plane Air Spaces" (pp. 26.14–26.15).
+ * The SI values are converted here with
+ * 1 m²·K/W = 5.678263 h·ft²·°F/Btu (NIST SP 811); the tolerance ±0.01 h·ft²·°F/Btu is the
+ * rounding of our two-decimal IP constants.
+ */
+import { describe, expect, it } from "vitest";
+import { FILM_R, MATERIAL_R } from "../../../lib/load/assemblies";
+
+const IP_R_PER_SI_R = 5.678263;
+const ROUNDING = 0.01;
+
+describe("surface films against HoF 2021 SI ch. 26 Table 10 (ε 0.90; R = 1/h)", () => {
+  const rows: ReadonlyArray<[keyof typeof FILM_R, number, string]> = [
+    ["insideHeatFlowUp", 9.26, "indoor, horizontal, heat flow upward, h 9.26 W/(m²·K)"],
+    ["insideSlopedUp", 9.09, "indoor, sloping 45°, upward, h 9.09"],
+    ["insideVertical", 8.29, "indoor, vertical, horizontal heat flow, h 8.29"],
+    ["insideSlopedDown", 7.5, "indoor, sloping 45°, downward, h 7.50"],
+    ["insideHeatFlowDown", 6.13, "indoor, horizontal, heat flow downward, h 6.13"],
+    ["outsideWinter", 34.0, "outdoor, any position, wind 6.7 m/s (15 mph, winter), h 34.0"],
+    ["outsideSummer", 22.7, "outdoor, any position, wind 3.4 m/s (7.5 mph, summer), h 22.7"],
+  ];
+  it.each(rows)("%s: %f W/(m²·K) (%s)", (name, hSi) => {
+    expect(Math.abs(FILM_R[name] - IP_R_PER_SI_R / hSi)).toBeLessThanOrEqual(ROUNDING);
+  });
+});
+
+describe("materials against HoF 2021 SI ch. 26 Table 1", () => {
+  const rows: ReadonlyArray<[keyof typeof MATERIAL_R, number, string]> = [
+    // Gypsum or plaster board, 640 kg/m³, k 0.16 W/(m·K), ½ in = 12.7 mm.
+    ["gypsumHalfInch", 0.0127 / 0.16, "gypsum or plaster board, k 0.16, 12.7 mm"],
+    // Oriented strand board, 9 to 11 mm, R 0.11 m²·K/W (7/16 in = 11.1 mm).
+    ["osbSevenSixteenthsInch", 0.11, "OSB 9 to 11 mm, R 0.11"],
+    // Plywood/wood panels, 19.0 mm, R 0.19.
+    ["plywoodThreeQuarterInch", 0.19, "plywood/wood panels 19.0 mm, R 0.19"],
+    // Siding: aluminum, steel or vinyl over sheathing, hollow-backed, R 0.11.
+    ["vinylSiding", 0.11, "aluminum, steel or vinyl siding, hollow-backed, R 0.11"],
+    // Roofing: asphalt shingles, R 0.078.
+    ["asphaltShingles", 0.078, "asphalt shingles, R 0.078"],
+    // Plastering: cement plaster, sand aggregate, k 0.72, ⅞ in = 22.2 mm.
+    ["stuccoSevenEighthsInch", 0.0222 / 0.72, "cement plaster, sand aggregate, k 0.72, 22.2 mm"],
+    // Concrete blocks, normal-weight aggregate, ~200 mm, with perlite-filled cores, R 0.35.
+    ["cmu8inCoreFilled", 0.35, "normal-weight block ~200 mm, perlite-filled cores, R 0.35"],
+  ];
+  it.each(rows)("%s: %f m²·K/W (%s)", (name, rSi) => {
+    expect(Math.abs(MATERIAL_R[name] - rSi * IP_R_PER_SI_R)).toBeLessThanOrEqual(ROUNDING);
+  });
+
+  it("8 in hollow normal-weight block lies in the printed range (~200 mm, 2 or 3 cores, R 0.17 to 0.20)", () => {
+    expect(MATERIAL_R.cmu8inHollow).toBeGreaterThanOrEqual(0.17 * IP_R_PER_SI_R);
+    expect(MATERIAL_R.cmu8inHollow).toBeLessThanOrEqual(0.2 * IP_R_PER_SI_R);
+  });
+
+  it("softwood per inch lies in the printed range of hem/fir and spruce/pine/fir (k 0.11 to 0.13 W/(m·K))", () => {
+    // R per inch = 0.0254 m / k, in SI, then converted; 1.25 itself is the ASHRAE 90.1 Appendix A convention (from memory).
+    expect(MATERIAL_R.softwoodPerInch).toBeGreaterThanOrEqual((0.0254 / 0.13) * IP_R_PER_SI_R);
+    expect(MATERIAL_R.softwoodPerInch).toBeLessThanOrEqual((0.0254 / 0.11) * IP_R_PER_SI_R);
+  });
+
+  it("blown loose fill per inch lies between attic glass fiber (k 0.052 to 0.055) and attic cellulose (k 0.039 to 0.040)", () => {
+    expect(MATERIAL_R.looseFillPerInch).toBeGreaterThanOrEqual((0.0254 / 0.055) * IP_R_PER_SI_R);
+    expect(MATERIAL_R.looseFillPerInch).toBeLessThanOrEqual((0.0254 / 0.039) * IP_R_PER_SI_R);
+  });
+});
+
+describe("plane air space against HoF 2021 SI ch. 26 Table 3", () => {
+  it("the unventilated vertical air space (1.0) lies within the printed 20 to 90 mm, ε 0.82, vertical rows (0.13 to 0.27 m²·K/W)", () => {
+    expect(MATERIAL_R.airSpaceVertical).toBeGreaterThanOrEqual(0.13 * IP_R_PER_SI_R);
+    expect(MATERIAL_R.airSpaceVertical).toBeLessThanOrEqual(0.27 * IP_R_PER_SI_R);
+  });
+});
