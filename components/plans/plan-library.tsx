@@ -135,6 +135,19 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
     onSettled: () => queryClient.invalidateQueries({ queryKey: ["plans"] }),
   });
 
+  const [copyCode, setCopyCode] = useState("");
+  const [copyName, setCopyName] = useState("");
+  const copyModel = useMutation({
+    mutationFn: (fromPlanId: number) => api<{ planId: number }>("/api/plans", { method: "POST", body: { fromPlanId, planCode: copyCode, name: copyName } }),
+    onSuccess: () => {
+      setBanner({ kind: "info", text: `Created ${copyCode} as a copy; edit its cells in the grid.` });
+      setCopyCode("");
+      setCopyName("");
+    },
+    onError: (error: Error) => setBanner({ kind: "error", text: error.message + (error instanceof ApiError && error.fieldErrors.length ? ` ${error.fieldErrors.map((f) => `${f.column ?? f.field}: ${f.message}`).join("; ")}` : "") }),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: ["plans"] }),
+  });
+
   const saveCells = useCallback(
     (changes: CellChange[], action: EditAction) => {
       if (changes.length > 0) save.mutate({ changes, action });
@@ -248,6 +261,19 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
     (event: CellKeyDownEvent<LibraryPlan>) => {
       const e = event.event as KeyboardEvent | null;
       if (!e || !event.data) return;
+      if ((e.ctrlKey || e.metaKey) && e.key.toLowerCase() === "c" && !event.api.getEditingCells().length) {
+        // AG Grid Community has no clipboard module: copy the selected rows' visible cells (as entered,
+        // formulas kept) as tab-separated lines, or the focused cell alone, for pasting into a spreadsheet.
+        const keys = event.api.getAllDisplayedColumns().map((c) => c.getColId()).filter((k) => PLAN_COLUMN_BY_KEY.has(k));
+        const rows = event.api.getSelectedRows();
+        const key = event.column.getColId();
+        const textOut = rows.length > 0 ? rows.map((r) => keys.map((k) => text(r.cells[k])).join("\t")).join("\n") : PLAN_COLUMN_BY_KEY.has(key) ? text(event.data.cells[key]) : String(event.value ?? "");
+        void navigator.clipboard?.writeText(textOut).then(
+          () => setBanner({ kind: "info", text: rows.length > 0 ? `Copied ${rows.length} model(s) × ${keys.length} columns.` : "Copied the cell." }),
+          () => setBanner({ kind: "error", text: "The browser did not allow copying to the clipboard." }),
+        );
+        return;
+      }
       if ((e.ctrlKey || e.metaKey) && e.key.toLowerCase() === "z") {
         e.preventDefault();
         const last = undoStack.at(-1);
@@ -403,6 +429,25 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
             </Button>
           </div>
         ) : null}
+        {canEdit && selectedIds.length === 1 ? (
+          <div className="flex items-end gap-2" data-testid="copy-model">
+            <div>
+              <label htmlFor="copy-code" className="block text-xs font-medium text-zinc-600">
+                New model from the selected one: code
+              </label>
+              <input id="copy-code" className="w-28 rounded border border-zinc-300 px-2 py-1" value={copyCode} onChange={(e) => setCopyCode(e.target.value)} placeholder="AS-1450X" />
+            </div>
+            <div>
+              <label htmlFor="copy-name" className="block text-xs font-medium text-zinc-600">
+                name
+              </label>
+              <input id="copy-name" className="w-32 rounded border border-zinc-300 px-2 py-1" value={copyName} onChange={(e) => setCopyName(e.target.value)} placeholder="Aster with loft" />
+            </div>
+            <Button type="button" variant="secondary" disabled={copyModel.isPending} onClick={() => copyModel.mutate(selectedIds[0])}>
+              Create copy
+            </Button>
+          </div>
+        ) : null}
         <label className="flex items-center gap-1.5 text-xs text-zinc-700">
           <input type="checkbox" checked={allFacings} onChange={(e) => setAllFacings(e.target.checked)} data-testid="toggle-facings" />
           Show all four facings
@@ -451,7 +496,7 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
         />
       </div>
       <p className="text-xs text-zinc-500">
-        Enter edits and moves down, Tab moves right, Escape cancels, Delete clears, Ctrl+Z undoes the last saved change. Cells take numbers with units
+        Enter edits and moves down, Tab moves right, Escape cancels, Delete clears, Ctrl+C copies the selected models (or the cell), Ctrl+Z undoes the last saved change. Cells take numbers with units
         (&quot;R-19&quot;, &quot;1,250 sf&quot;) or formulas (<code>=38*9-2*15</code>, <code>=front_wall_ft2*0.15</code>; hover a header for its formula name).
         Computed columns (tinted) are read-only. Paste a block copied from a spreadsheet into the focused cell.
       </p>

@@ -328,3 +328,21 @@ export async function approveRevision({
     });
   });
 }
+
+/** A new plan model copied from another (a new code and name; the copy starts as revision 1, a draft). */
+export async function copyPlan({ db, accountId, userId, fromPlanId, planCode, name }: { db: Database; accountId: number; userId: number; fromPlanId: number; planCode: string; name: string }) {
+  return db.transaction(async (tx) => {
+    const [source] = await tx.select({ plan: plans, revision: planRevisions }).from(plans).innerJoin(planRevisions, eq(planRevisions.id, plans.currentRevisionId)).where(and(eq(plans.id, fromPlanId), eq(plans.accountId, accountId)));
+    if (!source) throw notFound("That plan model");
+    const cells: PlanCells = { ...revisionCells(source.revision, source.plan.planCode, source.plan.name), plan_code: planCode, plan_name: name };
+    const result = rowToPlanInput(cells as PlanRowCells);
+    if (!result.ok) throw new AppError("invalid_input", "The new model's code or name is not valid; nothing was created.", result.errors.map((e) => ({ field: e.key || "plan", column: e.header, message: e.reason })));
+    const [clash] = await tx.select({ id: plans.id }).from(plans).where(and(eq(plans.accountId, accountId), eq(plans.planCode, result.planCode)));
+    if (clash) throw new AppError("conflict", `Plan code ${result.planCode} is already used by another plan model.`, [{ field: "planCode", message: "Already used" }]);
+    const [{ id: planId }] = await tx.insert(plans).values({ accountId, planCode: result.planCode, name: result.planName }).$returningId();
+    const [{ id: revisionId }] = await tx.insert(planRevisions).values({ accountId, planId, number: 1, cells, input: result.input, createdByUserId: userId }).$returningId();
+    await tx.update(plans).set({ currentRevisionId: revisionId }).where(eq(plans.id, planId));
+    await recordAudit(tx, { accountId, userId, action: "plan_copy", entityType: "plan", entityId: planId, summary: `Created ${result.planCode} as a copy of ${source.plan.planCode}`, after: [{ planId, planCode: result.planCode, cells }] });
+    return { planId };
+  });
+}

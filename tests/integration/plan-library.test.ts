@@ -198,3 +198,25 @@ describe("plan library", () => {
     expect(res.status).toBe(404);
   });
 });
+
+describe("copying a plan model", () => {
+  it("creates a draft copy under a new code; a used code is refused and nothing is created", async () => {
+    const ids = await seededIds(getDb());
+    const designer = await sessionCookie({ userId: ids.roleUsers.designer, accountId: ids.demoAccountId });
+    const [source] = await getDb().select().from(plans).where(eq(plans.id, ids.demoRecords.planId));
+    const res = await callRoute(plansRoute.POST, { path: "/api/plans", method: "POST", cookie: designer, body: { fromPlanId: source.id, planCode: "COPY-1", name: "Copy one" } });
+    expect(res.status, JSON.stringify(res.json)).toBe(200);
+    const library = (await callRoute(plansRoute.GET, { path: "/api/plans", cookie: designer })).json.plans;
+    const copy = library.find((p: { planCode: string }) => p.planCode === "COPY-1");
+    const original = library.find((p: { id: number }) => p.id === source.id);
+    expect(copy).toMatchObject({ name: "Copy one", revisionNumber: 1, revisionStatus: "draft" });
+    expect(copy.cells.bedrooms).toBe(original.cells.bedrooms);
+    expect(copy.loads.facings[0].coolingTotalBtuh).toBeCloseTo(original.loads.facings[0].coolingTotalBtuh, 6);
+    const again = await callRoute(plansRoute.POST, { path: "/api/plans", method: "POST", cookie: designer, body: { fromPlanId: source.id, planCode: "COPY-1", name: "Copy two" } });
+    expect(again.status).toBe(409);
+    const bad = await callRoute(plansRoute.POST, { path: "/api/plans", method: "POST", cookie: designer, body: { fromPlanId: source.id, planCode: "has space", name: "x" } });
+    expect(bad.status).toBe(400);
+    const viewer = await sessionCookie({ userId: ids.roleUsers.viewer, accountId: ids.demoAccountId });
+    expect((await callRoute(plansRoute.POST, { path: "/api/plans", method: "POST", cookie: viewer, body: { fromPlanId: source.id, planCode: "V-1", name: "v" } })).status).toBe(403);
+  });
+});

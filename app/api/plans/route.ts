@@ -1,6 +1,6 @@
-import { applyPlanEdits, listPlanLibrary } from "@/db/queries/plans";
+import { applyPlanEdits, copyPlan, listPlanLibrary } from "@/db/queries/plans";
 import { apiRoute, parseJsonBody } from "@/lib/auth/route";
-import { libraryQuerySchema, planEditSchema } from "./schema";
+import { copyPlanSchema, libraryQuerySchema, planEditSchema } from "./schema";
 
 /** The plan library with each model's four-facing loads for the chosen community's design conditions. */
 export const GET = apiRoute({ permission: "read" }, async ({ db, member, request }) => {
@@ -12,4 +12,10 @@ export const GET = apiRoute({ permission: "read" }, async ({ db, member, request
 export const PATCH = apiRoute({ permission: "plans.edit" }, async ({ db, member, request }) => {
   const { action, changes } = await parseJsonBody(request, planEditSchema);
   return applyPlanEdits({ db, accountId: member.accountId, userId: member.userId, changes, action });
+});
+
+/** A new plan model, copied from an existing one under a new code and name. */
+export const POST = apiRoute({ permission: "plans.edit" }, async ({ db, member, request }) => {
+  const body = await parseJsonBody(request, copyPlanSchema);
+  return copyPlan({ db, accountId: member.accountId, userId: member.userId, ...body });
 });

@@ -17,3 +17,9 @@ export const planEditSchema = z.object({
 });
 
 export const libraryQuerySchema = z.object({ communityId: z.coerce.number().int().positive().optional() });
+
+export const copyPlanSchema = z.object({
+  fromPlanId: z.number().int().positive(),
+  planCode: z.string().trim().min(1, "Enter a plan code for the new model").max(40),
+  name: z.string().trim().min(1, "Enter a name for the new model").max(120),
+});
