@@ -94,7 +94,7 @@ export type VentilationKind = (typeof VENTILATION_KINDS)[number];
 export const FACADES = ["front", "left", "back", "right"] as const;
 export type Facade = (typeof FACADES)[number];
 
-/** LBL model shelter classes, HoF 2021 ch. 16 Table 4 (1 = no obstructions ... 5 = very heavy shielding). */
+/** LBL model shelter classes, HoF 2021 ch. 16 Table 5 (1 = no obstructions or local shielding ... 5 = buildings or other structures closer than one house height). */
 export const SHELTER_CLASSES = [1, 2, 3, 4, 5] as const;
 export type ShelterClass = (typeof SHELTER_CLASSES)[number];
 
@@ -346,9 +346,9 @@ export const infiltrationSchema = z.object({
   ach50: ranged(0.1, 50, "1/h").optional(),
   /** Blower-door flow at 50 Pa, cfm. Give this or ach50. */
   cfm50: ranged(1, 100_000, "cfm").optional(),
-  /** LBL shelter class 1–5, HoF 2021 ch. 16 Table 4; default 4 (typical suburban lot, from memory). */
+  /** LBL shelter class 1–5, HoF 2021 ch. 16 Table 5; default 4 ("urban buildings on larger lots", our default for a subdivision lot). */
   shelterClass: rangedInt(1, 5, "").default(4),
-  /** Flow exponent of the blower-door curve (HoF 2021 ch. 16: typical 0.65). */
+  /** Flow exponent of the blower-door curve (HoF 2021 ch. 16, eq. 40: "a typical value for n is about 0.65"). */
   flowExponent: ranged(0.5, 1, "").default(0.65),
 });
 export type InfiltrationInput = z.output<typeof infiltrationSchema>;

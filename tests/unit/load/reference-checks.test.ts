@@ -57,7 +57,7 @@ const ACTUAL: Record<string, () => number> = {
   "wall-u-r15": () => wallU({ baseId: "wood-2x4-16in-oc", cavityR: 15, continuousR: 0 }),
   "ceiling-u-r38": () => ceilingU({ baseId: "attic-joists-24in-oc", cavityR: 38, continuousR: 0 }),
   "ceiling-u-r49": () => ceilingU({ baseId: "attic-joists-24in-oc", cavityR: 49, continuousR: 0 }),
-  // HoF eq. 48 in SI with Cs (2 stories) 0.000290 and Cw (2 stories, class 3) 0.000231: L/s → m³/s.
+  // HoF 2021 ch. 16 eq. 48 in SI with Cs (Table 4, 2 stories) 0.000290 and Cw (Table 6, 2 stories, class 3) 0.000231: L/s → m³/s.
   "lbl-example-2": () => lblInfiltrationLps(500, 0.00029, 39, 0.000231, 6.7) / 1000,
   "ventilation-622": () => ashrae622VentilationCfm(2000, 3),
   "internal-sensible-example": () => defaultInternalSensibleW(195.3, 4),
