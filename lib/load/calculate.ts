@@ -69,13 +69,17 @@ import { designDayOfYear, SiteSolarDay, type SurfaceProfile } from "./solar";
 import { BTUH_FT2_PER_W_M2, BTUH_PER_TON, DEG } from "./units";
 import { DIFFUSE_SHGC_RATIO, overhangSunlitFraction, shgcAngleRatio } from "./windows";
 
-export const ENGINE_VERSION = "0.1.1"; // 0.1.1: HoF 2021 ch. 14 Table 6 daily-range fractions as read
+export const ENGINE_VERSION = "0.1.1"; // 0.1.1: values as read in HoF 2021 (ch. 14 Table 6 daily range, ch. 26 Table 1 filled block)
 
-/** Clear-sky optical depths used when a site has none (typical of US sites in July, from memory). */
+/**
+ * Clear-sky optical depths used when a site has none (typical of US sites in July, from memory).
+ * HoF 2021 ch. 14 (read) gives no default: τb and τd are location-specific and tabulated by
+ * station for the 21st of each month; for scale, its Atlanta July values are 0.515 / 2.066.
+ */
 export const DEFAULT_TAU_BEAM = 0.5;
 export const DEFAULT_TAU_DIFFUSE = 2.0;
 
-/** Sea-level air-side factors (HoF 2021 ch. 17: Cs 1.23 W/(L/s·K) = 1.10 Btu/h·cfm·°F; Cl 3010 → 0.69 Btu/h·cfm·gr). */
+/** Sea-level air-side factors (HoF 2021 ch. 17, read: Cs 1.23 W/(L/s·K) = 1.10 Btu/h·cfm·°F; Cl 3010 W/(L/s) → 0.69 Btu/h·cfm·gr). */
 const SENSIBLE_AIR_FACTOR_SEA_LEVEL = 1.1;
 const LATENT_AIR_FACTOR_SEA_LEVEL = 0.69;
 
@@ -363,7 +367,8 @@ export function preparePlan(plan: PlanInput, site: PreparedSite): PreparedPlan {
         ventLatentCfm: ventilationProvidedCfm * (1 - v.latentRecoveryEffectiveness),
       };
     }
-    // Unbalanced flow combines with infiltration sub-additively (HoF ch. 16 / 62.2, from memory).
+    // Unbalanced flow combines with infiltration sub-additively: HoF 2021 ch. 16 eq. 51, read
+    // (ch. 17 eq. 14 uses max(Q_unbal, Q_i + 0.5·Q_unbal) instead).
     const combined = Math.sqrt(infCfm * infCfm + ventilationProvidedCfm * ventilationProvidedCfm);
     return { infiltrationCfm: infCfm, ventSensibleCfm: combined - infCfm, ventLatentCfm: combined - infCfm };
   };

@@ -34,7 +34,7 @@ const AIR_DENSITY_KG_M3 = 1.2;
 /** Reference pressure of the effective leakage area, Pa (HoF 2021 ch. 16: effective leakage area at 4 Pa, C_D = 1). */
 const ELA_REFERENCE_PA = 4;
 
-/** Wind speeds for design infiltration, mph (HoF 2021 ch. 17: 7.5 mph cooling, 15 mph heating). */
+/** Wind speeds for design infiltration, mph (HoF 2021 ch. 17 eq. 10 and example: 3.4 m/s cooling, 6.7 m/s heating, read). */
 export const COOLING_WIND_MPH = 7.5;
 export const HEATING_WIND_MPH = 15;
 

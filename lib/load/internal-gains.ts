@@ -1,9 +1,11 @@
 /**
  * Internal gains.
  *
- * Default: HoF 2021 ch. 17 eq. 30–31 (residential internal gains, occupants included):
- * sensible q = 464 + 0.70·A_cf + 75·N_oc Btu/h, latent q = 68 + 0.07·A_cf + 41·N_oc Btu/h
- * (SI: 136 + 2.2·A_cf + 22·N_oc W and 20 + 0.22·A_cf + 12·N_oc W).
+ * Default: HoF 2021 ch. 17 eq. 30–31 (residential internal gains, occupants included), read in
+ * a stored Markdown copy of the SI chapter (p. 17.10): 136 + 2.2·A_cf + 22·N_oc W sensible and
+ * 20 + 0.22·A_cf + 12·N_oc W latent, A_cf in m². In IP, rounded: sensible
+ * q = 464 + 0.70·A_cf + 75·N_oc Btu/h, latent q = 68 + 0.07·A_cf + 41·N_oc Btu/h (A_cf in ft²).
+ * The chapter derives them from load profiles at 4:00 pm and calls them typical of U.S. homes.
  */
 import type { InternalGainsInput } from "./input";
 
@@ -37,7 +39,7 @@ export function internalGains(input: InternalGainsInput, conditionedFloorAreaFt2
   return { sensibleBtuh, latentBtuh, method: "explicit-rows" };
 }
 
-/** Occupants: the plan's figure, else bedrooms + 1 (common practice). */
+/** Occupants: the plan's figure, else bedrooms + 1 (HoF 2021 ch. 17 eq. 30–31: "if unknown, estimate as N_br + 1"; also common practice). */
 export function occupantsOf(plan: { occupants?: number; bedrooms: number }): number {
   return plan.occupants ?? plan.bedrooms + 1;
 }
