@@ -248,13 +248,22 @@ export function slabFFactor(edgeInsulationR: number, insulationDepthFt: number):
 }
 
 /**
+ * Soil conductivity for below-grade heat loss, Btu/h·ft·°F: HoF 2021 SI ch. 26 Table 8 (read in a
+ * stored copy), "high" design value, "moderately conservative ... for maximum heat loss (e.g., peak
+ * winter heat loss calculations for a basement)": 2.25 W/(m·K) for sands, silts and loams (clays
+ * 1.56), taken because the soil is not known; ÷ 1.7307 = 1.30. Was 0.8 (from memory).
+ */
+const SOIL_CONDUCTIVITY_BTUH_FT_F = 1.3;
+
+/**
  * Below-grade concrete wall, Btu/h·ft²·°F to the ground temperature: inside film 0.68, 8 in
- * concrete (C-factor 1.14 → R 0.88, 90.1 Appendix A, from memory), added continuous insulation,
- * and an effective soil resistance of half the depth over soil conductivity 0.8 Btu/h·ft·°F
- * (a rough simplification of HoF ch. 18's below-grade method, from memory).
+ * concrete (C-factor 1.14 → R 0.88, 90.1 Appendix A, from memory; HoF 2021 ch. 26 Table 1 gives
+ * sand-and-gravel concretes k 1.3–2.9 W/(m·K), i.e. R 0.40–0.89 for 8 in, so 0.88 is its top),
+ * added continuous insulation, and an effective soil resistance of half the depth over the soil
+ * conductivity (a rough simplification of our own for HoF's below-grade methods, from memory).
  */
 export function belowGradeWallU(insulationR: number, depthBelowGradeFt: number): number {
-  const soilR = (0.5 * depthBelowGradeFt) / 0.8;
+  const soilR = (0.5 * depthBelowGradeFt) / SOIL_CONDUCTIVITY_BTUH_FT_F;
   return 1 / (FILM_R.insideVertical + 0.88 + insulationR + soilR);
 }
 

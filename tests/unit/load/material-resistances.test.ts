@@ -2,13 +2,14 @@
  * Film and material resistances of lib/load/assemblies.ts against HoF 2021 SI ch. 26, read in a
  * stored Markdown copy of the 2021 SI chapter: Table 1 "Building and Insulating Materials: Design
  * Values" (pp. 26.8–26.12) and Table 10 "Surface Film Coefficients/Resistances" (p. 26.21,
- * nonreflective surfaces, ε = 0.90) and Table 3 "Thermal Resistances of Plane Air Spaces" (pp. 26.14–26.15).
+ * nonreflective surfaces, ε = 0.90), Table 3 "Thermal Resistances of Plane Air Spaces" (pp. 26.14–26.15) and
+ * Table 8 soil conductivities (p. 26.21).
  * The SI values are converted here with
  * 1 m²·K/W = 5.678263 h·ft²·°F/Btu (NIST SP 811); the tolerance ±0.01 h·ft²·°F/Btu is the
  * rounding of our two-decimal IP constants.
  */
 import { describe, expect, it } from "vitest";
-import { FILM_R, MATERIAL_R } from "../../../lib/load/assemblies";
+import { belowGradeWallU, FILM_R, MATERIAL_R } from "../../../lib/load/assemblies";
 
 const IP_R_PER_SI_R = 5.678263;
 const ROUNDING = 0.01;
@@ -70,5 +71,14 @@ describe("plane air space against HoF 2021 SI ch. 26 Table 3", () => {
   it("the unventilated vertical air space (1.0) lies within the printed 20 to 90 mm, ε 0.82, vertical rows (0.13 to 0.27 m²·K/W)", () => {
     expect(MATERIAL_R.airSpaceVertical).toBeGreaterThanOrEqual(0.13 * IP_R_PER_SI_R);
     expect(MATERIAL_R.airSpaceVertical).toBeLessThanOrEqual(0.27 * IP_R_PER_SI_R);
+  });
+});
+
+describe("soil under a basement wall against HoF 2021 SI ch. 26 Table 8", () => {
+  it("the soil conductivity implied by two depths is the 'high' design value for sands, silts and loams, 2.25 W/(m·K)", () => {
+    // Our soil path adds 0.5·depth/k in series, so 1/U(4 ft) − 1/U(2 ft) = 1 ft / k.
+    const kBtuhFtF = 1 / (1 / belowGradeWallU(0, 4) - 1 / belowGradeWallU(0, 2));
+    const W_PER_M_K_PER_BTUH_FT_F = 1.730735; // NIST SP 811
+    expect(Math.abs(kBtuhFtF * W_PER_M_K_PER_BTUH_FT_F - 2.25)).toBeLessThanOrEqual(0.01);
   });
 });
