@@ -23,14 +23,15 @@ export function atticAirTemperatureF(params: {
 }
 
 /**
- * Sol-air temperature (HoF 2021 ch. 18 eq. 30): T_e = T_o + α·E_t/h_o − ε·ΔR/h_o, with
- * ε·ΔR/h_o = 7 °F for horizontal surfaces and 0 for vertical (HoF ch. 18, as ENGINE.md states);
- * tilted surfaces scale it by cos Σ (from memory). h_o = 4.0 Btu/h·ft²·°F, the inverse of the
- * summer 7.5 mph outside film R-0.25 (HoF ch. 26 Table 10) that the U-factors use, so that the
- * sol-air and conduction paths agree (ch. 18 itself uses 17 W/m²·K ≈ 3.0 for walls).
+ * Sol-air temperature, HoF 2021 SI ch. 18 eq. 29 (read in a stored copy, p. 18.24):
+ * T_e = T_o + α·E_t/h_o − ε·ΔR/h_o, with ε·ΔR/h_o = 4 K (7.2 °F) for horizontal surfaces and
+ * 0 for vertical ("common practice", the chapter says); tilted surfaces scale it by cos Σ (our
+ * interpolation). h_o = 4.0 Btu/h·ft²·°F, the inverse of the summer 3.4 m/s outside film R-0.25
+ * (HoF 2021 ch. 26 Table 10, h 22.7 W/m²·K) that the U-factors use, so that the sol-air and
+ * conduction paths agree (ch. 18's 4 K example assumes h_o = 17 W/m²·K ≈ 3.0 Btu/h·ft²·°F).
  */
 export const SOL_AIR_HO_BTUH_FT2F = 4.0;
-export const SOL_AIR_LONGWAVE_HORIZONTAL_F = 7;
+export const SOL_AIR_LONGWAVE_HORIZONTAL_F = 7.2;
 
 export function solAirTemperatureF(outdoorF: number, absorptance: number, irradianceBtuhFt2: number, tiltDeg: number): number {
   const longwaveF = SOL_AIR_LONGWAVE_HORIZONTAL_F * Math.max(0, Math.cos((tiltDeg * Math.PI) / 180));

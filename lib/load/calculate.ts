@@ -69,7 +69,7 @@ import { designDayOfYear, SiteSolarDay, type SurfaceProfile } from "./solar";
 import { BTUH_FT2_PER_W_M2, BTUH_PER_TON, DEG } from "./units";
 import { DIFFUSE_SHGC_RATIO, overhangSunlitFraction, shgcAngleRatio } from "./windows";
 
-export const ENGINE_VERSION = "0.1.1"; // 0.1.1: values as read in HoF 2021 (ch. 14 Table 6 daily range; ch. 26 Table 1 filled block, Table 8 soil)
+export const ENGINE_VERSION = "0.1.1"; // 0.1.1: values as read in HoF 2021 (ch. 14 Table 6 daily range; ch. 26 Table 1 filled block, Table 8 soil; ch. 18 sol-air 4 K)
 
 /**
  * Clear-sky optical depths used when a site has none (typical of US sites in July, from memory).

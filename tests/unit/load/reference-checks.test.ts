@@ -5,6 +5,7 @@
 import SunCalc from "suncalc";
 import { describe, expect, it } from "vitest";
 import { ceilingU, wallU } from "../../../lib/load/assemblies";
+import { solAirTemperatureF } from "../../../lib/load/attic";
 import { computeFacingLoads } from "../../../lib/load";
 import { ductLossFactor } from "../../../lib/load/ducts";
 import { ashrae622VentilationCfm, lblInfiltrationLps } from "../../../lib/load/infiltration";
@@ -129,5 +130,16 @@ describe("internal gains of the HoF 2021 SI ch. 17 example house in the engine's
   });
   it("latent 111 W (±1 %)", () => {
     expect(Math.abs(gains.latentBtuh / BTUH_PER_W - 111)).toBeLessThanOrEqual(1.11);
+  });
+});
+
+describe("sol-air long-wave correction (HoF 2021 SI ch. 18 eq. 29, read in a stored copy, p. 18.24)", () => {
+  // ε·ΔR/h_o = 4 K for horizontal surfaces, 0 for vertical ones; with no sun the sol-air
+  // temperature is the outdoor temperature less that correction.
+  it("horizontal: 4 K = 7.2 °F below the outdoor air", () => {
+    expect(solAirTemperatureF(95, 0.9, 0, 0)).toBeCloseTo(95 - 4 * 1.8, 9);
+  });
+  it("vertical: no correction", () => {
+    expect(solAirTemperatureF(95, 0.9, 0, 90)).toBeCloseTo(95, 9);
   });
 });
