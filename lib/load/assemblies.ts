@@ -14,15 +14,19 @@
  *   hollow-backed 0.62 (R 0.11); asphalt shingles 0.44 (R 0.078); stucco ⅞ in 0.18 (cement
  *   plaster, sand aggregate, k 0.72); 8 in hollow normal-weight block 1.1 (printed range
  *   0.17–0.20 m²·K/W = 0.97–1.14 for 2 or 3 cores; 1.1 as in ENGINE.md), perlite-filled
- *   cores 1.99 (R 0.35; was 2.0 from memory); softwood 1.25 per inch (the ASHRAE 90.1
- *   Appendix A convention, from memory; inside Table 1's hem/fir and spruce/pine/fir range,
+ *   cores 1.99 (R 0.35; was 2.0 from memory); softwood 1.25 per inch (as ch. 27 Example 3
+ *   uses, below, and the 90.1 Appendix A convention; inside Table 1's hem/fir and spruce/pine/fir range,
  *   k 0.11–0.13 W/m·K = 1.11–1.31 per inch; Douglas fir and southern pine, k 0.14–0.16, are
  *   lower, about 0.9–1.0 per inch).
  * - unventilated vertical air space ¾–3½ in about 1.0: our rounded value inside ch. 26 Table 3
  *   (20 to 90 mm, vertical, ε 0.82: 0.13–0.27 m²·K/W = 0.8–1.5 by mean temperature).
- * - framing fractions, 90.1 Appendix A (from memory): walls 25 % at 16 in o.c., 22 % at 24 in;
- *   attic ceilings 85 % full-depth insulation, 5 % half depth (eaves), 10 % joist (truss chord);
- *   rafters and floor joists 10 % at 16 in, 7 % at 24 in (from memory).
+ * - framing fractions: walls 25 % at 16 in o.c., 22 % at 24 in — HoF 2021 SI ch. 27 (read in a
+ *   stored copy, p. 27.3: studs, plates and sills 0.21 / 0.18 plus headers 0.04, cavity 0.75 /
+ *   0.78), which is also the 90.1 Appendix A convention (from memory); attic ceilings 85 %
+ *   full-depth insulation, 5 % half depth (eaves), 10 % joist (truss chord); rafters and floor
+ *   joists 10 % at 16 in, 7 % at 24 in (from memory).
+ * - softwood 1.25 per inch is also what HoF 2021 ch. 27 Example 3 uses: a 38 × 90 mm stud at
+ *   R 0.77 m²·K/W = 4.37 h·ft²·°F/Btu for 3.5 in (read); the wall test reproduces that example.
  *
  * Walls follow the 90.1 Appendix A wall convention (films, siding, studs and cavity, gypsum; the
  * structural sheathing is not counted), which reproduces its published U-factors and errs a few
@@ -73,7 +77,7 @@ interface Path {
   r: number;
 }
 
-/** Parallel-path U-factor: U = Σ fᵢ/Rᵢ (HoF 2021 ch. 27 parallel-path method; chapter not read). */
+/** Parallel-path U-factor: U = Σ fᵢ/Rᵢ (HoF 2021 ch. 27, the method it gives for wood-frame walls; read). */
 export function parallelPathU(paths: readonly Path[]): number {
   let u = 0;
   for (const p of paths) u += p.fraction / p.r;

@@ -42,8 +42,10 @@ describe("model behaviour", () => {
   it("thin air at elevation carries less heat per cfm (air loads scale with P/P0)", () => {
     const high = at(symmetricPlan(), { ...SEA_LEVEL_SITE, elevationFt: 5000 });
     const low = at(symmetricPlan());
-    // Standard atmosphere: P(5000 ft)/P0 ≈ 0.832 (HoF ch. 1 Table 1, from memory); infiltration flow is the same.
-    expect(high.heating.byComponent.infiltration / low.heating.byComponent.infiltration).toBeCloseTo(0.832, 2);
+    // Standard atmosphere, HoF 2021 SI ch. 1 eq. 3 (read in a stored copy): p = 101.325(1 − 2.25577e−5·Z)^5.2559 kPa,
+    // Z = 5000 ft = 1524 m → P/P0 = 0.832; infiltration flow is the same.
+    const pRatio = Math.pow(1 - 2.25577e-5 * 5000 * 0.3048, 5.2559);
+    expect(high.heating.byComponent.infiltration / low.heating.byComponent.infiltration).toBeCloseTo(pRatio, 2);
   });
 
   it("explicit internal gain rows replace the handbook default and add occupants", () => {

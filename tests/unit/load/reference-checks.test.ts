@@ -56,6 +56,9 @@ const ACTUAL: Record<string, () => number> = {
   "wall-u-r11": () => wallU({ baseId: "wood-2x4-16in-oc", cavityR: 11, continuousR: 0 }),
   "wall-u-r13": () => wallU({ baseId: "wood-2x4-16in-oc", cavityR: 13, continuousR: 0 }),
   "wall-u-r15": () => wallU({ baseId: "wood-2x4-16in-oc", cavityR: 15, continuousR: 0 }),
+  // SI inputs of the example converted to IP (1 m²·K/W = 5.678263 h·ft²·°F/Btu), the result back to SI.
+  "wall-u-hof27-example-3": () =>
+    wallU({ baseId: "wood-2x4-16in-oc", cavityR: 2.3 * 5.678263, continuousR: 0.7 * 5.678263 }, "heating") * 5.678263,
   "ceiling-u-r38": () => ceilingU({ baseId: "attic-joists-24in-oc", cavityR: 38, continuousR: 0 }),
   "ceiling-u-r49": () => ceilingU({ baseId: "attic-joists-24in-oc", cavityR: 49, continuousR: 0 }),
   // HoF 2021 ch. 16 eq. 48 in SI with Cs (Table 4, 2 stories) 0.000290 and Cw (Table 6, 2 stories, class 3) 0.000231: L/s → m³/s.
