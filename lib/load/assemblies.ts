@@ -224,6 +224,9 @@ export function floorU(construction: FloorConstruction, underside: "still-air" |
  * Slab-on-grade F-factors, Btu/h·ft·°F per ft of perimeter, unheated slab with vertical edge
  * insulation: ASHRAE 90.1 Appendix A Table A6.3 (from memory; uninsulated 0.73 and R-10 to
  * 24 in 0.54 as in ENGINE.md). Rows by insulation depth, columns by R; linear interpolation.
+ * For scale, HoF 2021 SI ch. 18 Table 24 (read) gives heating F_p by wall construction:
+ * uninsulated 1.17–2.07 W/(m·K) = 0.68–1.20 Btu/h·ft·°F (3.67 with a perimeter duct), and
+ * 0.85–0.92 W/(m·K) = 0.49–0.53 with R-0.95 m²·K/W (R-5.4) from the slab edge to the footer.
  */
 const SLAB_F_R = [0, 5, 10, 15, 20, 30] as const;
 const SLAB_F_BY_DEPTH: ReadonlyArray<{ depthFt: number; f: readonly number[] }> = [
@@ -264,7 +267,10 @@ const SOIL_CONDUCTIVITY_BTUH_FT_F = 1.3;
  * concrete (C-factor 1.14 → R 0.88, 90.1 Appendix A, from memory; HoF 2021 ch. 26 Table 1 gives
  * sand-and-gravel concretes k 1.3–2.9 W/(m·K), i.e. R 0.40–0.89 for 8 in, so 0.88 is its top),
  * added continuous insulation, and an effective soil resistance of half the depth over the soil
- * conductivity (a rough simplification of our own for HoF's below-grade methods, from memory).
+ * conductivity: our one-line simplification of HoF 2021 ch. 18 eq. 38 (read), which it matches
+ * within +1 to +8 % (higher, so conservative) from 1 to 8 ft deep, uninsulated or R-10, at the
+ * same soil conductivity (tests/unit/load/material-resistances.test.ts). Ch. 18 itself tabulates
+ * at k 1.4 W/(m·K), "a typical value"; we take ch. 26's high design value for peak heat loss.
  */
 export function belowGradeWallU(insulationR: number, depthBelowGradeFt: number): number {
   const soilR = (0.5 * depthBelowGradeFt) / SOIL_CONDUCTIVITY_BTUH_FT_F;

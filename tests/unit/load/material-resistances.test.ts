@@ -86,3 +86,21 @@ describe("soil under a basement wall against HoF 2021 SI ch. 26 Table 8", () => 
     expect(Math.abs(kBtuhFtF * W_PER_M_K_PER_BTUH_FT_F - 2.25)).toBeLessThanOrEqual(0.01);
   });
 });
+
+describe("below-grade wall U against HoF 2021 SI ch. 18 eq. 38 (read in a stored copy, p. 18.39), same soil conductivity", () => {
+  // Eq. 38: U_avg = 2k/(π(z2 − z1))·[ln(z2 + 2kR/π) − ln(z1 + 2kR/π)], grade to depth z2 (z1 = 0),
+  // R_other = 0.259 m²·K/W for an uninsulated concrete wall with its indoor film (the chapter's value)
+  // plus the insulation. Our one-line soil path (half the depth over k in series) is checked to ±10 %,
+  // at k = 2.25 W/(m·K) as the engine uses (ch. 26 Table 8).
+  const K_SOIL = 2.25;
+  const eq38 = (depthM: number, rOther: number) => {
+    const a = (2 * K_SOIL * rOther) / Math.PI;
+    return ((2 * K_SOIL) / (Math.PI * depthM)) * (Math.log(depthM + a) - Math.log(a));
+  };
+  const cases = [1, 2, 4, 6, 8].flatMap((depthFt) => [0, 10].map((insulationR) => [depthFt, insulationR] as const));
+  it.each(cases)("%i ft below grade, insulation R-%i", (depthFt, insulationR) => {
+    const ours = belowGradeWallU(insulationR, depthFt) * IP_R_PER_SI_R;
+    const handbook = eq38(depthFt * 0.3048, 0.259 + insulationR / IP_R_PER_SI_R);
+    expect(Math.abs(ours / handbook - 1)).toBeLessThanOrEqual(0.1);
+  });
+});
