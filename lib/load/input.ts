@@ -261,11 +261,10 @@ export const atticSchema = z.object({
   /** Roof pitch, inches of rise per 12 in of run (roof area = ceiling area × slope factor). */
   roofPitchRisePer12In: ranged(0, 24, "in/12 in").default(6),
   /**
-   * Solar absorptance of the roofing; default 0.90 for a dark shingle (from memory). HoF 2021 ch. 17
-   * Table 8 (read) gives asphalt shingles 0.75 white or light, 0.85 medium, 0.92 dark: the default is
-   * to become 0.92 together with a regeneration of the plan-library templates, which print it.
+   * Solar absorptance of the roofing; default 0.92, dark asphalt shingles, HoF 2021 ch. 17 Table 8
+   * (read in a stored copy: 0.75 white or light, 0.85 medium, 0.92 dark).
    */
-  roofSolarAbsorptance: ranged(0.1, 1, "").default(0.9),
+  roofSolarAbsorptance: ranged(0.1, 1, "").default(0.92),
   /** Vented-attic ventilation, cfm per ft² of ceiling (0.30 ≈ 3–4 attic air changes per hour, from memory). */
   ventilationCfmPerFt2: ranged(0, 5, "cfm/ft²").default(0.3),
 });
@@ -275,8 +274,8 @@ export type AtticInput = z.output<typeof atticSchema>;
 export const vaultedCeilingSchema = z.object({
   areaFt2: ranged(0, MAX_AREA_FT2, "ft²").default(0),
   construction: roofConstructionSchema.prefault({ cavityR: 30 }),
-  /** As the attic's (0.90 from memory; HoF 2021 ch. 17 Table 8, read: dark asphalt shingles 0.92). */
-  roofSolarAbsorptance: ranged(0.1, 1, "").default(0.9),
+  /** As the attic's: dark asphalt shingles 0.92 (HoF 2021 ch. 17 Table 8, read). */
+  roofSolarAbsorptance: ranged(0.1, 1, "").default(0.92),
 });
 export type VaultedCeilingInput = z.output<typeof vaultedCeilingSchema>;
 
