@@ -20,11 +20,11 @@ started=$(date +%s)
 echo "== type check"
 npx tsc --noEmit -p .
 echo "== unit and integration tests (Vitest)"
-npx vitest run
+npx vitest run --config tests/vitest.config.mts
 echo "== build"
 export NEXTAUTH_SECRET="platload-e2e-secret"
 npx next build >.data/e2e-build.log 2>&1 || { cat .data/e2e-build.log; exit 1; }
 echo "== end-to-end tests (Playwright, Chromium)"
 npx tsx tests/e2e/prepare-database.ts
-npx playwright test
+npx playwright test --config tests/playwright.config.ts
 echo "== all tests passed in $(( $(date +%s) - started )) s"

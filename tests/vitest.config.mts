@@ -1,10 +1,12 @@
 import { fileURLToPath } from "node:url";
 import { defineConfig } from "vitest/config";
-import { INTEGRATION_DATABASE, TEST_MAILBOX_DIR, TEST_NEXTAUTH_SECRET, TEST_S3_PORT, TEST_SMTP_PORT, testDatabaseUrl } from "./tests/support/test-env";
+import { INTEGRATION_DATABASE, TEST_MAILBOX_DIR, TEST_NEXTAUTH_SECRET, TEST_S3_PORT, TEST_SMTP_PORT, testDatabaseUrl } from "./support/test-env";
 
-const root = fileURLToPath(new URL("./", import.meta.url));
+// This file lives in tests/; the project root is one folder up.
+const root = fileURLToPath(new URL("../", import.meta.url));
 
 export default defineConfig({
+  root,
   resolve: { alias: { "@": root, "server-only": `${root}tests/support/server-only-stub.ts` } },
   test: {
     projects: [
@@ -18,7 +20,7 @@ export default defineConfig({
           name: "integration",
           include: ["tests/integration/**/*.test.ts"],
           environment: "node",
-          globalSetup: ["tests/support/integration-setup.ts"],
+          globalSetup: [`${root}tests/support/integration-setup.ts`],
           fileParallelism: false,
           testTimeout: 60_000,
           hookTimeout: 120_000,

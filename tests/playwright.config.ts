@@ -1,12 +1,13 @@
 import { defineConfig } from "@playwright/test";
-import { E2E_DATABASE, TEST_APP_PORT, TEST_MAILBOX_DIR, TEST_NEXTAUTH_SECRET, TEST_S3_PORT, TEST_SMTP_PORT, testDatabaseUrl } from "./tests/support/test-env";
+import { E2E_DATABASE, TEST_APP_PORT, TEST_MAILBOX_DIR, TEST_NEXTAUTH_SECRET, TEST_S3_PORT, TEST_SMTP_PORT, testDatabaseUrl } from "./support/test-env";
 
 const baseURL = `http://127.0.0.1:${TEST_APP_PORT}`;
 
 // Debian's Chromium (apt package chromium); Playwright never downloads a browser here.
 export default defineConfig({
-  testDir: "tests/e2e",
-  outputDir: "test-results",
+  // This file lives in tests/: paths below are relative to it.
+  testDir: "e2e",
+  outputDir: "../test-results",
   workers: 1,
   fullyParallel: false,
   timeout: 60_000,
@@ -24,6 +25,7 @@ export default defineConfig({
   webServer: {
     command: `npx next start -H 127.0.0.1 -p ${TEST_APP_PORT}`,
     url: `${baseURL}/sign-in`,
+    cwd: "..",
     reuseExistingServer: false,
     timeout: 120_000,
     env: {
