@@ -9,6 +9,7 @@ import { fmtInt, fmtNum, gridTheme } from "@/components/grid/grid-theme";
 import { Caution } from "@/components/ui/caution";
 import { TableFileLinks } from "@/components/ui/table-file-links";
 import { Button, FormError } from "@/components/ui/field";
+import type { FacingSummary } from "@/db/queries/plans";
 import { api, ApiError } from "@/lib/client/api";
 import { isFormula } from "@/lib/workbook/formula";
 import { readRowCells } from "@/lib/workbook/columns";
@@ -18,15 +19,6 @@ import { PlanImportPanel } from "./plan-import-panel";
 
 type Cells = Record<string, string | number | boolean | null>;
 
-interface FacingLoadsRow {
-  label: "N" | "E" | "S" | "W";
-  heatingBtuh: number;
-  coolingSensibleBtuh: number;
-  coolingLatentBtuh: number;
-  coolingTotalBtuh: number;
-  tons: number;
-  floorAreaPerTonFt2: number;
-}
 
 export interface LibraryPlan {
   id: number;
@@ -36,7 +28,8 @@ export interface LibraryPlan {
   revisionNumber: number;
   revisionStatus: "draft" | "approved";
   cells: Cells;
-  loads: { engineVersion: string; facings: FacingLoadsRow[]; worst: { label: string; coolingTotalBtuh: number }; coolingSpreadBtuh: number } | null;
+  /** The route's facing summary (a type-only import: nothing of the server module reaches the browser). */
+  loads: FacingSummary | null;
   loadsError: string | null;
 }
 

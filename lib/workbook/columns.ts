@@ -34,6 +34,20 @@ export interface ColumnDef {
 
 export type CellValue = number | string | boolean;
 
+/** How a column's value reads in generated documentation; the number unit is the caller's wording. */
+export function describeColumnValue(value: ColumnValueType, numberUnit: string): string {
+  switch (value.type) {
+    case "number":
+      return numberUnit;
+    case "enum":
+      return `one of: ${value.choices.map((choice) => `\`${choice}\``).join(", ")}`;
+    case "text":
+      return value.maxLength ? `text (≤ ${value.maxLength} characters)` : "text";
+    case "boolean":
+      return "yes / no";
+  }
+}
+
 /** One bad cell: row as the user sees it (header = row 1), the column's header, the reason. */
 export interface TableCellError {
   row: number;

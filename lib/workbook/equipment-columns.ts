@@ -15,7 +15,7 @@
  * dry bulb.
  */
 import { SYSTEM_TYPES, catalogSystemSchema, type CatalogSystemInput, type SystemType } from "../equipment/catalog";
-import { matchColumn, readTable, type ColumnDef, type ColumnValueType, type RawTable, type TableCellError } from "./columns";
+import { describeColumnValue, matchColumn, readTable, type ColumnDef, type ColumnValueType, type RawTable, type TableCellError } from "./columns";
 import { readCsv, writeCsv, writeXlsx } from "./table-io";
 import { QUANTITY_KIND_INFO, type QuantityKind } from "./units";
 
@@ -529,20 +529,11 @@ export function equipmentExampleCells(rows: readonly EquipmentExampleRow[]): str
 // templates/EQUIPMENT.md, generated from the column list so it cannot drift.
 
 function unitOf(column: EquipmentColumnDef): string {
-  switch (column.value.type) {
-    case "number": {
-      if (column.key === "price_usd") return "US dollars";
-      if (column.key === "nominal_tons") return "tons (12,000 Btu/h)";
-      if (column.value.quantity === "ratio") return "number";
-      return QUANTITY_KIND_INFO[column.value.quantity].unit;
-    }
-    case "enum":
-      return `one of: ${column.value.choices.map((choice) => `\`${choice}\``).join(", ")}`;
-    case "text":
-      return column.value.maxLength ? `text (≤ ${column.value.maxLength} characters)` : "text";
-    case "boolean":
-      return "yes / no";
-  }
+  if (column.value.type !== "number") return describeColumnValue(column.value, "");
+  if (column.key === "price_usd") return "US dollars";
+  if (column.key === "nominal_tons") return "tons (12,000 Btu/h)";
+  if (column.value.quantity === "ratio") return "number";
+  return QUANTITY_KIND_INFO[column.value.quantity].unit;
 }
 
 function rangeOf(column: EquipmentColumnDef): string {

@@ -2,23 +2,15 @@
  * templates/README.md, generated from the plan-library column list so the documentation
  * cannot drift from the columns the importer reads.
  */
+import { describeColumnValue } from "./columns";
 import { FORMULA_FUNCTIONS } from "./formula";
 import { PLAN_COLUMN_GROUPS, PLAN_COLUMNS, PLAN_RESULT_COLUMNS, type PlanColumnDef } from "./plan-columns";
 import { QUANTITY_KIND_INFO } from "./units";
 
 function unitOf(column: PlanColumnDef): string {
-  switch (column.value.type) {
-    case "number": {
-      const unit = QUANTITY_KIND_INFO[column.value.quantity].unit;
-      return unit === "count" ? "whole number" : unit;
-    }
-    case "enum":
-      return `one of: ${column.value.choices.map((choice) => `\`${choice}\``).join(", ")}`;
-    case "text":
-      return column.value.maxLength ? `text (≤ ${column.value.maxLength} characters)` : "text";
-    case "boolean":
-      return "yes / no";
-  }
+  if (column.value.type !== "number") return describeColumnValue(column.value, "");
+  const unit = QUANTITY_KIND_INFO[column.value.quantity].unit;
+  return unit === "count" ? "whole number" : unit;
 }
 
 function defaultOf(column: PlanColumnDef): string {

@@ -220,3 +220,21 @@ describe("copying a plan model", () => {
     expect((await callRoute(plansRoute.POST, { path: "/api/plans", method: "POST", cookie: viewer, body: { fromPlanId: source.id, planCode: "V-1", name: "v" } })).status).toBe(403);
   });
 });
+
+describe("import templates", () => {
+  it("serve the files in templates/ as downloads", async () => {
+    const { GET: planTemplate } = await import("@/app/api/plans/template/route");
+    const { GET: catalogTemplate } = await import("@/app/api/equipment/template/route");
+    const ids = await seededIds(getDb());
+    const cookie = await sessionCookie({ userId: ids.roleUsers.viewer, accountId: ids.demoAccountId });
+    const csv = await callRoute(planTemplate, { path: "/api/plans/template?format=csv", cookie });
+    expect(csv.status).toBe(200);
+    expect(csv.headers.get("content-disposition")).toBe('attachment; filename="plan-library-template.csv"');
+    // Response.text() drops the byte-order mark the file starts with
+    expect(csv.text).toBe(readFileSync(path.join(root, "templates/plan-library-template.csv"), "utf8").replace(/^\uFEFF/, ""));
+    const xlsx = await callRoute(catalogTemplate, { path: "/api/equipment/template?format=xlsx", cookie });
+    expect(xlsx.status).toBe(200);
+    expect(xlsx.headers.get("content-type")).toContain("spreadsheetml");
+    expect((await callRoute(planTemplate, { path: "/api/plans/template?format=pdf", cookie })).status).toBe(400);
+  });
+});
