@@ -59,7 +59,7 @@ export function rowValuesFromEntry(entry: EquipmentCatalogEntry, accountId: numb
   };
 }
 
-/** The account's sizing limits, or the defaults (ENGINE.md, from memory and common practice). */
+/** The account's sizing limits, or the defaults (from memory and common practice). */
 export async function sizingLimitsOf(db: Database | Tx, accountId: number): Promise<SizingLimits> {
   const [account] = await db.select({ limits: accounts.sizingLimits }).from(accounts).where(eq(accounts.id, accountId));
   const parsed = sizingLimitsSchema.safeParse(account?.limits ?? {});

@@ -13,7 +13,7 @@ const FIELDS = [
   { key: "heatingMaxPct", label: "Furnace output at most (% of heating load)" },
 ] as const;
 
-/** The account's equipment sizing limits: defaults from ENGINE.md (from memory and common practice); an admin may change them. */
+/** The account's equipment sizing limits: defaults (from memory and common practice); an admin may change them. */
 export function SizingLimitsForm({ canEdit }: { canEdit: boolean }) {
   const queryClient = useQueryClient();
   const query = useQuery({ queryKey: ["sizing-limits"], queryFn: () => api<{ limits: Record<string, number>; custom: boolean }>("/api/account/sizing-limits") });

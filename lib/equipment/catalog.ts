@@ -55,7 +55,7 @@ const pct = (what: string) =>
 
 /**
  * Sizing limits (percent of the design load). Defaults from memory and common practice
- * (ENGINE.md "Equipment selection"): cooling 95–115 % for air conditioners, up to 125 % for heat
+ * (lib/equipment): cooling 95–115 % for air conditioners, up to 125 % for heat
  * pumps where the heating load exceeds the cooling load; furnace output 100–140 % of the heating
  * load. The account can change them, and reports state the ones used.
  */

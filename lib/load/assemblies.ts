@@ -13,7 +13,7 @@
  *   0.62 (9 to 11 mm, R 0.11 m²·K/W); plywood ¾ in 1.08 (19.0 mm, R 0.19); vinyl siding
  *   hollow-backed 0.62 (R 0.11); asphalt shingles 0.44 (R 0.078); stucco ⅞ in 0.18 (cement
  *   plaster, sand aggregate, k 0.72); 8 in hollow normal-weight block 1.1 (printed range
- *   0.17–0.20 m²·K/W = 0.97–1.14 for 2 or 3 cores; 1.1 as in ENGINE.md), perlite-filled
+ *   0.17–0.20 m²·K/W = 0.97–1.14 for 2 or 3 cores; 1.1 used), perlite-filled
  *   cores 1.99 (R 0.35; was 2.0 from memory); softwood 1.25 per inch (as ch. 27 Example 3
  *   uses, below, and the 90.1 Appendix A convention; inside Table 1's hem/fir and spruce/pine/fir range,
  *   k 0.11–0.13 W/m·K = 1.11–1.31 per inch; Douglas fir and southern pine, k 0.14–0.16, are
@@ -127,6 +127,7 @@ export function wallMassClass(baseId: WallBaseAssembly): MassClass {
 
 /** Wall U-factor, Btu/h·ft²·°F, for a base assembly plus added cavity/continuous insulation. */
 export function wallU(construction: WallConstruction, season: Season = "heating"): number {
+  if (construction.uFactor !== undefined) return construction.uFactor;
   const base = WALL_BASES[construction.baseId];
   const framingR = base.framingDepthIn * MATERIAL_R.softwoodPerInch;
   const cavityR = construction.cavityR > 0 ? construction.cavityR : MATERIAL_R.airSpaceVertical;
@@ -145,6 +146,7 @@ export function wallU(construction: WallConstruction, season: Season = "heating"
  * convention, from memory). The attic side has a still-air film.
  */
 export function ceilingU(construction: CeilingConstruction, season: Season = "heating"): number {
+  if (construction.uFactor !== undefined) return construction.uFactor;
   const joistFraction = construction.baseId === "attic-joists-16in-oc" ? 0.13 : 0.1;
   const chordDepthIn = 3.5;
   const film = season === "heating" ? 2 * FILM_R.insideHeatFlowUp : 2 * FILM_R.insideHeatFlowDown;
@@ -177,6 +179,7 @@ export function roofU(
   construction: RoofConstruction,
   options: { season: Season; gypsumCeiling: boolean; includeOutsideFilm?: boolean },
 ): number {
+  if (construction.uFactor !== undefined) return construction.uFactor;
   const depthIn = RAFTER_DEPTH_IN[construction.baseId];
   const framingFraction = 0.07;
   const insideFilm = options.season === "heating" ? FILM_R.insideSlopedUp : FILM_R.insideSlopedDown;
@@ -205,6 +208,7 @@ export function ventedRoofDeckUWithoutOutsideFilm(): number {
  * at 16 in (10 %) or 24 in (7 %) o.c., still-air films both sides, or an outdoor film below.
  */
 export function floorU(construction: FloorConstruction, underside: "still-air" | "outdoors", season: Season = "heating"): number {
+  if (construction.uFactor !== undefined) return construction.uFactor;
   const framingFraction = construction.baseId === "floor-joists-2x10-24in-oc" ? 0.07 : 0.1;
   const depthIn = 9.25;
   const filmAbove = season === "heating" ? FILM_R.insideHeatFlowDown : FILM_R.insideHeatFlowUp;
@@ -223,7 +227,7 @@ export function floorU(construction: FloorConstruction, underside: "still-air" |
 /**
  * Slab-on-grade F-factors, Btu/h·ft·°F per ft of perimeter, unheated slab with vertical edge
  * insulation: ASHRAE 90.1 Appendix A Table A6.3 (from memory; uninsulated 0.73 and R-10 to
- * 24 in 0.54 as in ENGINE.md). Rows by insulation depth, columns by R; linear interpolation.
+ * 24 in 0.54). Rows by insulation depth, columns by R; linear interpolation.
  * For scale, HoF 2021 SI ch. 18 Table 24 (read) gives heating F_p by wall construction:
  * uninsulated 1.17–2.07 W/(m·K) = 0.68–1.20 Btu/h·ft·°F (3.67 with a perimeter duct), and
  * 0.85–0.92 W/(m·K) = 0.49–0.53 with R-0.95 m²·K/W (R-5.4) from the slab edge to the footer.

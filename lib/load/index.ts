@@ -2,8 +2,7 @@
  * Platload load engine: plain data in, plain data out (no React, database or Next.js imports).
  * Results are design estimates; local codes and a licensed professional govern.
  */
-export { ENGINE_VERSION, computeFacingLoads, computePlanFacings, prepareSite, preparePlan } from "./calculate";
-export type { ComputeOptions, PreparedPlan, PreparedSite } from "./calculate";
+export { ENGINE_VERSION, computeFacingLoads, computePlanFacings, type ComputeOptions } from "./procedures";
 export * from "./input";
 export * from "./errors";
 export * from "./results";

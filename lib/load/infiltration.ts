@@ -15,7 +15,7 @@
  * reproduces ch. 16 Examples 2, 3 and 4 (0.0736, 0.0392, 0.077 m³/s). The tables assume rural
  * terrain with scattered obstacles, half the leakage in the walls, equal floor and ceiling
  * leakage, and story heights 2.5/5.0/7.5 m. In IP they are Cs 0.0150/0.0299/0.0449
- * (cfm²/in⁴/°F) as ENGINE.md lists.
+ * (cfm²/in⁴/°F).
  */
 import { CM2_PER_IN2, LPS_PER_CFM, MPS_PER_MPH, deltaFToK } from "./units";
 

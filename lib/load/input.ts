@@ -88,6 +88,10 @@ export type DuctMethod = (typeof DUCT_METHODS)[number];
 export const DUCT_HEATING_SYSTEMS = ["furnace", "heat-pump"] as const;
 export type DuctHeatingSystem = (typeof DUCT_HEATING_SYSTEMS)[number];
 
+/** What covers a slab on grade indoors. */
+export const SLAB_FLOOR_COVERINGS = ["carpet", "tile", "bare"] as const;
+export type SlabFloorCovering = (typeof SLAB_FLOOR_COVERINGS)[number];
+
 export const VENTILATION_KINDS = ["none", "exhaust", "supply", "balanced"] as const;
 export type VentilationKind = (typeof VENTILATION_KINDS)[number];
 
@@ -178,27 +182,32 @@ const addedInsulation = {
   cavityR: ranged(0, R_MAX, "h·ft²·°F/Btu").default(0),
   /** Continuous insulation across the framing (rigid board, exterior or interior), R. */
   continuousR: ranged(0, R_MAX, "h·ft²·°F/Btu").default(0),
+  /**
+   * A whole-assembly U-factor from a rated or separately calculated assembly, Btu/h·ft²·°F. When
+   * given it replaces the base assembly plus added insulation in both seasons (the sheet says so).
+   */
+  uFactor: ranged(0.01, 1.5, "Btu/h·ft²·°F").optional(),
 };
 
-export const wallConstructionSchema = z.object({
+export const wallConstructionSchema = z.strictObject({
   baseId: choice(WALL_BASE_ASSEMBLIES, "wall construction"),
   ...addedInsulation,
 });
 export type WallConstruction = z.output<typeof wallConstructionSchema>;
 
-export const ceilingConstructionSchema = z.object({
+export const ceilingConstructionSchema = z.strictObject({
   baseId: choice(CEILING_BASE_ASSEMBLIES, "ceiling construction").default("attic-joists-24in-oc"),
   ...addedInsulation,
 });
 export type CeilingConstruction = z.output<typeof ceilingConstructionSchema>;
 
-export const roofConstructionSchema = z.object({
+export const roofConstructionSchema = z.strictObject({
   baseId: choice(ROOF_BASE_ASSEMBLIES, "roof construction").default("roof-rafters-2x10-24in-oc"),
   ...addedInsulation,
 });
 export type RoofConstruction = z.output<typeof roofConstructionSchema>;
 
-export const floorConstructionSchema = z.object({
+export const floorConstructionSchema = z.strictObject({
   baseId: choice(FLOOR_BASE_ASSEMBLIES, "floor construction").default("floor-joists-2x10-16in-oc"),
   ...addedInsulation,
 });
@@ -216,6 +225,11 @@ const windowFields = {
   shgc: ranged(0, 1, "").default(0.25),
   /** Interior shading coefficient (interior attenuation, IAC): 1 = no interior shade credit. */
   interiorShadingCoefficient: ranged(0.1, 1, "").default(1),
+  /**
+   * Exterior attenuation of transmitted solar (insect screens, exterior shades; HoF 2021 ch. 17
+   * Table 11 gives typical values): 1 = nothing outside the glass.
+   */
+  exteriorAttenuation: ranged(0.05, 1, "").default(1),
   /** Horizontal projection of the overhang (or porch roof) beyond the wall, ft. */
   overhangDepthFt: ranged(0, 30, "ft").default(0),
   /** Vertical distance from the window head up to the overhang's underside, ft. */
@@ -225,10 +239,10 @@ const windowFields = {
 };
 
 /** One group of like windows on a facade (one group per facade is the usual, preferred case). */
-export const windowGroupSchema = z.object(windowFields);
+export const windowGroupSchema = z.strictObject(windowFields);
 export type WindowGroup = z.output<typeof windowGroupSchema>;
 
-export const facadeSchema = z.object({
+export const facadeSchema = z.strictObject({
   /** Gross wall area of the facade including windows and doors, ft². */
   grossWallAreaFt2: ranged(0, MAX_AREA_FT2, "ft²"),
   /** This facade's wall construction when it differs from the plan's `wall`. */
@@ -247,7 +261,7 @@ export type FacadeInput = z.output<typeof facadeSchema>;
 // ---------------------------------------------------------------------------------------------
 // Attic and roof, skylights.
 
-export const atticSchema = z.object({
+export const atticSchema = z.strictObject({
   kind: choice(ATTIC_KINDS, "attic kind").default("vented"),
   /**
    * Ceiling area below the attic, ft². Default: conditioned floor area ÷ stories (the top floor's
@@ -271,7 +285,7 @@ export const atticSchema = z.object({
 export type AtticInput = z.output<typeof atticSchema>;
 
 /** Ceilings with the roof directly above (cathedral / vaulted), no attic between. */
-export const vaultedCeilingSchema = z.object({
+export const vaultedCeilingSchema = z.strictObject({
   areaFt2: ranged(0, MAX_AREA_FT2, "ft²").default(0),
   construction: roofConstructionSchema.prefault({ cavityR: 30 }),
   /** As the attic's: dark asphalt shingles 0.92 (HoF 2021 ch. 17 Table 8, read). */
@@ -279,7 +293,7 @@ export const vaultedCeilingSchema = z.object({
 });
 export type VaultedCeilingInput = z.output<typeof vaultedCeilingSchema>;
 
-export const skylightSchema = z.object({
+export const skylightSchema = z.strictObject({
   areaFt2: ranged(0, MAX_AREA_FT2, "ft²").default(0),
   /** Rated U-factor of the skylight, Btu/h·ft²·°F (default 0.55, from memory). */
   uFactor: ranged(0.05, 2, "Btu/h·ft²·°F").default(0.55),
@@ -295,7 +309,7 @@ export type SkylightInput = z.output<typeof skylightSchema>;
 // ---------------------------------------------------------------------------------------------
 // Foundation and framed floors over unconditioned space.
 
-export const foundationSchema = z.object({
+export const foundationSchema = z.strictObject({
   kind: choice(FOUNDATION_KINDS, "foundation kind").default("slab-on-grade"),
   /** Exposed slab-edge perimeter, ft (slab-on-grade; also a basement slab at grade). */
   slabPerimeterFt: ranged(0, 10_000, "ft").default(0),
@@ -303,6 +317,12 @@ export const foundationSchema = z.object({
   slabEdgeInsulationR: ranged(0, 30, "h·ft²·°F/Btu").default(0),
   /** Depth of the slab-edge insulation, ft. */
   slabEdgeInsulationDepthFt: ranged(0, 6, "ft").default(2),
+  /** A slab-edge F-factor from a published table, Btu/h·ft·°F; replaces the one from edge insulation. */
+  slabFFactor: ranged(0.05, 2, "Btu/h·ft·°F").optional(),
+  /** Slab floor area on grade, ft² (default: conditioned floor area ÷ stories when a perimeter is given). */
+  slabAreaFt2: ranged(0, MAX_AREA_FT2, "ft²").optional(),
+  /** What covers the slab indoors: carpet insulates it from the room, tile or bare concrete less. */
+  slabFloorCovering: choice(SLAB_FLOOR_COVERINGS, "slab floor covering").default("carpet"),
   /** Framed floor over a vented crawlspace or an unconditioned basement, ft². */
   floorAreaFt2: ranged(0, MAX_AREA_FT2, "ft²").default(0),
   floor: floorConstructionSchema.prefault({ cavityR: 19 }),
@@ -314,19 +334,21 @@ export const foundationSchema = z.object({
   foundationWallDepthBelowGradeFt: ranged(0, 12, "ft").default(7),
   /** Continuous insulation on the foundation walls, R. */
   foundationWallInsulationR: ranged(0, 40, "h·ft²·°F/Btu").default(0),
+  /** A whole foundation-wall U-factor (soil path included for the part below grade), Btu/h·ft²·°F; replaces the computed ones. */
+  foundationWallUFactor: ranged(0.01, 1.5, "Btu/h·ft²·°F").optional(),
   /** Unconditioned-basement air temperature in the heating design hour, °F (default computed). */
   basementHeatingTemperatureF: ranged(-40, 80, "°F").optional(),
 });
 export type FoundationInput = z.output<typeof foundationSchema>;
 
-export const exposedFloorSchema = z.object({
+export const exposedFloorSchema = z.strictObject({
   areaFt2: ranged(0, MAX_AREA_FT2, "ft²").default(0),
   construction: floorConstructionSchema.prefault({ cavityR: 30 }),
 });
 export type ExposedFloorInput = z.output<typeof exposedFloorSchema>;
 
 /** The attached garage as a buffer space next to the conditioned envelope. */
-export const garageSchema = z.object({
+export const garageSchema = z.strictObject({
   /** House wall shared with the garage, ft² (built like the plan's `wall`; no sun on it). */
   wallAreaFt2: ranged(0, MAX_AREA_FT2, "ft²").default(0),
   /** Door from the house into the garage, ft². */
@@ -345,11 +367,13 @@ export type GarageInput = z.output<typeof garageSchema>;
 // ---------------------------------------------------------------------------------------------
 // Air: infiltration and mechanical ventilation.
 
-export const infiltrationSchema = z.object({
+export const infiltrationSchema = z.strictObject({
   /** Blower-door air changes per hour at 50 Pa. Give this or cfm50. */
   ach50: ranged(0.1, 50, "1/h").optional(),
   /** Blower-door flow at 50 Pa, cfm. Give this or ach50. */
   cfm50: ranged(1, 100_000, "cfm").optional(),
+  /** Effective leakage area at 4 Pa, in² (HoF 2021 ch. 16 eq. 40); instead of ach50 or cfm50. */
+  effectiveLeakageAreaIn2: ranged(1, 10_000, "in²").optional(),
   /** LBL shelter class 1–5, HoF 2021 ch. 16 Table 5; default 4 ("urban buildings on larger lots", our default for a subdivision lot). */
   shelterClass: rangedInt(1, 5, "").default(4),
   /** Flow exponent of the blower-door curve (HoF 2021 ch. 16, eq. 40: "a typical value for n is about 0.65"). */
@@ -357,7 +381,7 @@ export const infiltrationSchema = z.object({
 });
 export type InfiltrationInput = z.output<typeof infiltrationSchema>;
 
-export const ventilationSchema = z.object({
+export const ventilationSchema = z.strictObject({
   kind: choice(VENTILATION_KINDS, "ventilation kind").default("exhaust"),
   /** Provided whole-house ventilation flow, cfm. Default: the ASHRAE 62.2-2016 eq. 4.1a rate. */
   cfm: ranged(0, 5000, "cfm").optional(),
@@ -371,7 +395,7 @@ export type VentilationInput = z.output<typeof ventilationSchema>;
 // ---------------------------------------------------------------------------------------------
 // Ducts and internal gains.
 
-export const ductsSchema = z.object({
+export const ductsSchema = z.strictObject({
   location: choice(DUCT_LOCATIONS, "duct location").default("vented-attic"),
   /** Duct insulation R (R-8 in attics is common code practice, from memory). */
   insulationR: ranged(0, 30, "h·ft²·°F/Btu").default(8),
@@ -404,7 +428,7 @@ export const ductsSchema = z.object({
 });
 export type DuctsInput = z.output<typeof ductsSchema>;
 
-export const internalGainRowSchema = z.object({
+export const internalGainRowSchema = z.strictObject({
   /** Room or appliance, e.g. "kitchen", "home office". */
   name: z.string().min(1, { error: "required: a name for the gain row" }).max(80),
   sensibleBtuh: ranged(0, 50_000, "Btu/h"),
@@ -412,7 +436,7 @@ export const internalGainRowSchema = z.object({
 });
 export type InternalGainRow = z.output<typeof internalGainRowSchema>;
 
-export const internalGainsSchema = z.object({
+export const internalGainsSchema = z.strictObject({
   /**
    * Explicit gain rows. When absent the engine uses HoF 2021 ch. 17 eq. 30–31 (which include the
    * occupants); when present the rows plus occupants × the per-person gains below are used.
@@ -428,7 +452,7 @@ export type InternalGainsInput = z.output<typeof internalGainsSchema>;
 // ---------------------------------------------------------------------------------------------
 // The plan model.
 
-const facadesSchema = z.object({
+const facadesSchema = z.strictObject({
   front: facadeSchema,
   left: facadeSchema,
   back: facadeSchema,
@@ -436,7 +460,7 @@ const facadesSchema = z.object({
 });
 
 export const planInputSchema = z
-  .object({
+  .strictObject({
     /** Plan model name (informational). */
     name: z.string().max(120).optional(),
     conditionedFloorAreaFt2: ranged(100, 50_000, "ft²"),
@@ -526,20 +550,21 @@ export const planInputSchema = z
         params: { range: { min: 0, max: plan.foundation.foundationWallAreaFt2, unit: "ft²" } },
       });
     }
-    // Air leakage: exactly one blower-door figure.
-    const { ach50, cfm50 } = plan.infiltration;
-    if (ach50 === undefined && cfm50 === undefined) {
+    // Air leakage: exactly one leakage figure.
+    const { ach50, cfm50, effectiveLeakageAreaIn2 } = plan.infiltration;
+    const given = [ach50, cfm50, effectiveLeakageAreaIn2].filter((v) => v !== undefined).length;
+    if (given === 0) {
       ctx.addIssue({
         code: "custom",
         path: ["infiltration", "ach50"],
-        message: "required: ach50 or cfm50 from a blower-door test (or the target)",
+        message: "required: ach50 or cfm50 from a blower-door test (or the target), or an effective leakage area",
         params: { range: { min: 0.1, max: 50, unit: "1/h" } },
       });
-    } else if (ach50 !== undefined && cfm50 !== undefined) {
+    } else if (given > 1) {
       ctx.addIssue({
         code: "custom",
-        path: ["infiltration", "cfm50"],
-        message: "give ach50 or cfm50, not both",
+        path: [ "infiltration", cfm50 !== undefined ? "cfm50" : "effectiveLeakageAreaIn2"],
+        message: "give one of ach50, cfm50 or effectiveLeakageAreaIn2, not more",
       });
     }
     // Ducts must be in a space the plan has.
@@ -592,8 +617,10 @@ export type PlanInput = z.output<typeof planInputSchema>;
 // Site and design conditions.
 
 export const siteConditionsSchema = z
-  .object({
+  .strictObject({
     name: z.string().max(120).optional(),
+    /** Where the conditions come from, or any caveat (informational). */
+    note: z.string().max(1000).optional(),
     latitudeDeg: ranged(-66, 66, "°"),
     longitudeDeg: ranged(-180, 180, "°"),
     elevationFt: ranged(-1000, 14_000, "ft"),

@@ -25,3 +25,8 @@ export const DEG = Math.PI / 180;
 export function deltaFToK(deltaF: number): number {
   return deltaF / 1.8;
 }
+
+/** 24 zeros in a plain array, one per solar hour (typed arrays cost more to allocate than they save at this size). */
+export function hours24(): number[] {
+  return [0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0];
+}

@@ -259,7 +259,7 @@ export interface LotReportSource {
   /** The engine's result for this plan at this lot's facing. */
   loads: FacingLoads;
   selection: LotSystemChoice;
-  /** The account's limits (defaults ENGINE.md's). */
+  /** The account's limits (defaults: the documented ones). */
   sizingLimits?: SizingLimitsInput;
   approval?: { reviewerName: string; credential: string; approvedOn: string } | null;
   generatedAt?: Date | string;

@@ -1,5 +1,5 @@
 /**
- * A lot's facing: the azimuth the front door faces, degrees clockwise from north (ENGINE.md,
+ * A lot's facing: the azimuth the front door faces, degrees clockwise from north (the engine's convention,
  * "Orientation"). Typed as a compass point of the 16-point rose (N, NNE, NE, … NNW) or degrees
  * ("135", "135°", "135 deg").
  */

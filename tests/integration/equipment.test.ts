@@ -40,7 +40,7 @@ describe("equipment catalog and selection", () => {
     for (const l of lots) expect(l.systemCode !== null || (typeof l.noFitReason === "string" && l.noFitReason.length > 0), `lot ${l.lotNumber}`).toBe(true);
     const fitted = lots.filter((l: { systemCode: string | null }) => l.systemCode);
     expect(fitted.length).toBeGreaterThan(lots.length / 2);
-    // the chosen system's cooling capacity is within the default 95–115 % of the load (ENGINE.md, from memory)
+    // the chosen system's cooling capacity is within the default 95–115 % of the load (from memory)
     for (const l of fitted) expect(l.coolingPctOfLoad).toBeGreaterThanOrEqual(95);
   });
 

@@ -1,7 +1,7 @@
 // Minimal typing for the psychrolib npm package (only the functions the engine uses).
 // psychrolib is imported in exactly one module, lib/load/psychrometrics.ts.
 declare module "psychrolib" {
-  interface Psychrolib {
+  export interface Psychrolib {
     IP: number;
     SI: number;
     SetUnitSystem(unitSystem: number): void;

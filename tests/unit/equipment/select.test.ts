@@ -18,7 +18,7 @@ const CATALOG = [
 const LOADS = { heatingBtuh: 40_000, coolingSensibleBtuh: 21_000, coolingLatentBtuh: 5_000, coolingTotalBtuh: 26_000 };
 
 describe("equipment selection", () => {
-  it("default limits are ENGINE.md's (from memory and common practice)", () => {
+  it("default limits are the documented defaults (from memory and common practice)", () => {
     expect(DEFAULT_SIZING_LIMITS).toEqual({
       coolingMinPct: 95,
       coolingMaxPct: 115,

@@ -108,3 +108,27 @@ describe("constructions", () => {
     expect(e.range).toMatchObject({ max: 24.5 });
   });
 });
+
+describe("unknown keys are refused by name", () => {
+  it("a misspelt plan key names itself and where it is", () => {
+    const e = errorOf(() => parsePlanInput({ ...base, atic: { kind: "vented" } }));
+    expect(e.field).toBe("(input)");
+    expect(e.message).toMatch(/unknown field\(s\): atic/);
+  });
+
+  it("a misspelt nested key names its path", () => {
+    const e = errorOf(() => parsePlanInput(withFront({ grossWallAreaFt2: 400, window: { areaFt2: 40, shgcc: 0.3 } })));
+    expect(e.field).toBe("facades.front.window");
+    expect(e.message).toMatch(/shgcc/);
+  });
+
+  it("a misspelt site key is refused", () => {
+    const e = errorOf(() => parseSiteConditions({ ...SEA_LEVEL_SITE, dailyRange: 20 }));
+    expect(e.message).toMatch(/unknown field\(s\): dailyRange/);
+  });
+
+  it("two leakage figures at once are refused", () => {
+    const e = errorOf(() => parsePlanInput({ ...base, infiltration: { ach50: 5, effectiveLeakageAreaIn2: 80 } }));
+    expect(e.field).toBe("infiltration.effectiveLeakageAreaIn2");
+  });
+});

@@ -6,14 +6,17 @@ import { SEA_LEVEL_SITE, symmetricPlan } from "./helpers";
 const at = (plan: PlanInputRaw, site = SEA_LEVEL_SITE, az = 0) => computeFacingLoads(plan, site, az);
 
 describe("model behaviour", () => {
-  it("ducts in conditioned space add nothing; ducts in a vented attic add to both loads", () => {
+  it("ducts in conditioned space add nothing; ducts in a vented attic add sensible load to both seasons", () => {
     const inside = at(symmetricPlan({ ducts: { location: "conditioned-space" } }));
     const attic = at(symmetricPlan({ ducts: { location: "vented-attic" } }));
     expect(inside.heating.byComponent.ducts).toBe(0);
     expect(inside.cooling.sensibleByComponent.ducts).toBe(0);
     expect(attic.heating.byComponent.ducts).toBeGreaterThan(0);
     expect(attic.cooling.sensibleByComponent.ducts).toBeGreaterThan(0);
-    expect(attic.cooling.latentByComponent.ducts).toBeGreaterThan(0);
+    // HoF 2021 ch. 17 Table 6 (read) is sensible only and no published duct latent gain is used:
+    // the engine adds none and says so in its notes.
+    expect(attic.cooling.latentByComponent.ducts).toBe(0);
+    expect(attic.notes.join(" ")).toMatch(/no duct latent gain/);
   });
 
   it("better duct insulation and tighter ducts lower the duct load", () => {
@@ -84,5 +87,32 @@ describe("model behaviour", () => {
     expect(crawl.heating.byComponent.slab).toBe(0);
     expect(crawl.heating.byComponent.garageWall).toBeGreaterThan(0);
     expect(crawl.heating.garageF).toBeGreaterThan(SEA_LEVEL_SITE.heatingOutdoorDbF);
+  });
+});
+
+describe("direct inputs a practitioner may have", () => {
+  it("a direct wall U-factor replaces the base assembly and scales the wall loss exactly", () => {
+    const built = at(symmetricPlan());
+    const rated = at(symmetricPlan({ wall: { baseId: "wood-2x4-16in-oc", uFactor: 0.05 } }));
+    const doubled = at(symmetricPlan({ wall: { baseId: "wood-2x4-16in-oc", uFactor: 0.1 } }));
+    // Heating wall loss is U·A·ΔT (HoF 2021 ch. 17/18 steady state): 4 facades × (400 − 40) ft² × 50 °F.
+    expect(rated.heating.byComponent.walls).toBeCloseTo(0.05 * 4 * 360 * (70 - 20), 6);
+    expect(doubled.heating.byComponent.walls).toBeCloseTo(2 * rated.heating.byComponent.walls, 6);
+    expect(rated.heating.byComponent.walls).not.toBeCloseTo(built.heating.byComponent.walls, 0);
+  });
+
+  it("an effective leakage area gives the same infiltration as the blower-door figure it came from", () => {
+    const fromAch = at(symmetricPlan());
+    const fromEla = at(symmetricPlan({ infiltration: { effectiveLeakageAreaIn2: fromAch.effectiveLeakageAreaIn2 } }));
+    expect(fromEla.heating.byComponent.infiltration).toBeCloseTo(fromAch.heating.byComponent.infiltration, 6);
+  });
+
+  it("exterior attenuation (an insect screen) lowers window solar gain", () => {
+    const side = { grossWallAreaFt2: 400, window: { areaFt2: 40, uFactor: 0.3, shgc: 0.3 } };
+    const screened = { grossWallAreaFt2: 400, window: { areaFt2: 40, uFactor: 0.3, shgc: 0.3, exteriorAttenuation: 0.64 } };
+    const open = at(symmetricPlan({ facades: { front: side, left: side, back: side, right: side } }));
+    const withScreens = at(symmetricPlan({ facades: { front: screened, left: screened, back: screened, right: screened } }));
+    expect(withScreens.cooling.sensibleByComponent.windows).toBeLessThan(open.cooling.sensibleByComponent.windows);
+    expect(withScreens.heating.totalBtuh).toBeCloseTo(open.heating.totalBtuh, 6);
   });
 });

@@ -1,4 +1,4 @@
-/** Properties the engine must hold (ENGINE.md, below the check table). */
+/** Properties the engine must hold (the method notes, lib/load/README.md). */
 import { describe, expect, it } from "vitest";
 import {
   COOLING_LATENT_COMPONENTS,

@@ -1,5 +1,5 @@
 /**
- * Every row of ENGINE.md's check table, with its source beside it (rows and tolerances in
+ * Every row of the engine's check table, with its source beside it (rows and tolerances in
  * tests/fixtures/engine/reference-checks.ts), plus the solar-altitude check against suncalc.
  */
 import SunCalc from "suncalc";
@@ -89,7 +89,7 @@ const ACTUAL: Record<string, () => number> = {
   "occupants-default": () => occupantsOf({ bedrooms: 3 }),
 };
 
-describe("reference checks (ENGINE.md table)", () => {
+describe("reference checks (outside references)", () => {
   it.each(REFERENCE_CHECKS.map((row) => [row.id, row] as const))("%s", (_id, row) => {
     const actual = ACTUAL[row.id]();
     const tol = row.tolerance.relative !== undefined ? `±${row.tolerance.relative * 100} %` : `±${row.tolerance.absolute} ${row.unit}`;

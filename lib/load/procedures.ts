@@ -1,0 +1,90 @@
+/**
+ * The engine's public entry points: one plan at one facing, or the four facings of a plan, by
+ * the procedure the caller names. Validation happens here unless the caller says the inputs are
+ * already parsed (hot loops).
+ */
+import { hourlyCoolingDay } from "./cooling-day";
+import { LoadInputError } from "./errors";
+import { parsePlanInput, parseSiteConditions, type PlanInput, type SiteConditions } from "./input";
+import { preparePlan, type PreparedPlan } from "./prepare-plan";
+import { DESIGN_ESTIMATE_CAUTION, FACING_LABELS, type FacingLoads, type PlanFacings } from "./results";
+import { prepareSite } from "./site";
+import { CM2_PER_IN2 } from "./units";
+
+export const ENGINE_VERSION = "0.2.0"; // 0.2.0: engine split; no duct latent gain without a published source; direct U-factor and leakage-area inputs
+
+export interface ComputeOptions {
+  /**
+   * Set when plan and site are already the output of parsePlanInput / parseSiteConditions
+   * (hot loops: benchmark, bulk lot recompute); validation is then skipped. Such objects are
+   * treated as immutable: the prepared plan is reused for the same object, so do not edit a
+   * validated plan in place — parse the edited plan again.
+   */
+  validated?: boolean;
+}
+
+function normalizeAzimuth(deg: number): number {
+  return ((deg % 360) + 360) % 360;
+}
+
+function validate(plan: unknown, site: unknown, options: ComputeOptions | undefined): { plan: PlanInput; site: SiteConditions } {
+  if (options?.validated) return { plan: plan as PlanInput, site: site as SiteConditions };
+  return { plan: parsePlanInput(plan), site: parseSiteConditions(site) };
+}
+
+function facingResult(p: PreparedPlan, facingAzimuthDeg: number): FacingLoads {
+  const az = normalizeAzimuth(facingAzimuthDeg);
+  return {
+    engineVersion: ENGINE_VERSION,
+    facingAzimuthDeg: az,
+    facadeAzimuthsDeg: {
+      front: az,
+      left: normalizeAzimuth(az + 90),
+      back: normalizeAzimuth(az + 180),
+      right: normalizeAzimuth(az + 270),
+    },
+    heating: p.heating,
+    cooling: hourlyCoolingDay(p, az),
+    ventilation: { requiredCfm: p.air.ventilationRequiredCfm, providedCfm: p.air.ventilationProvidedCfm, kind: p.plan.ventilation.kind },
+    effectiveLeakageAreaIn2: p.air.elaCm2 / CM2_PER_IN2,
+    notes: [...p.notes],
+    caution: DESIGN_ESTIMATE_CAUTION,
+  };
+}
+
+/**
+ * Heating and cooling loads of one plan with its front facing `facingAzimuthDeg` (degrees
+ * clockwise from north; any real number, taken modulo 360).
+ * Throws LoadInputError for bad input (unless `options.validated`).
+ */
+export function computeFacingLoads(plan: unknown, site: unknown, facingAzimuthDeg: number, options?: ComputeOptions): FacingLoads {
+  if (typeof facingAzimuthDeg !== "number" || !Number.isFinite(facingAzimuthDeg)) {
+    throw new LoadInputError("facingAzimuthDeg", `must be a finite number of degrees, got ${String(facingAzimuthDeg)}`, {
+      min: 0,
+      max: 360,
+      unit: "°",
+    });
+  }
+  const valid = validate(plan, site, options);
+  return facingResult(preparePlan(valid.plan, prepareSite(valid.site)), facingAzimuthDeg);
+}
+
+/** The four facings (front to N, E, S, W), the worst (largest cooling total) and the spread. */
+export function computePlanFacings(plan: unknown, site: unknown, options?: ComputeOptions): PlanFacings {
+  const valid = validate(plan, site, options);
+  const prepared = preparePlan(valid.plan, prepareSite(valid.site));
+  const facings = FACING_LABELS.map((label, i) => ({ ...facingResult(prepared, i * 90), label }));
+  let worst = facings[0];
+  let min = facings[0].cooling.totalBtuh;
+  for (const f of facings) {
+    if (f.cooling.totalBtuh > worst.cooling.totalBtuh) worst = f;
+    if (f.cooling.totalBtuh < min) min = f.cooling.totalBtuh;
+  }
+  return {
+    engineVersion: ENGINE_VERSION,
+    facings,
+    worst: { label: worst.label, facingAzimuthDeg: worst.facingAzimuthDeg, coolingTotalBtuh: worst.cooling.totalBtuh },
+    coolingSpreadBtuh: worst.cooling.totalBtuh - min,
+    caution: DESIGN_ESTIMATE_CAUTION,
+  };
+}
