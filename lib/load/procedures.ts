@@ -7,7 +7,7 @@ import { hourlyCoolingDay } from "./cooling-day";
 import { LoadInputError } from "./errors";
 import { parsePlanInput, parseSiteConditions, type PlanInput, type SiteConditions } from "./input";
 import { preparePlan, type PreparedPlan } from "./prepare-plan";
-import { DESIGN_ESTIMATE_CAUTION, FACING_LABELS, type FacingLoads, type PlanFacings } from "./results";
+import { DESIGN_ESTIMATE_CAUTION, FACING_LABELS, type FacingLoads, type LoadProcedure, type PlanFacings } from "./results";
 import { prepareSite } from "./site";
 import { CM2_PER_IN2 } from "./units";
 
@@ -21,6 +21,8 @@ export interface ComputeOptions {
    * validated plan in place — parse the edited plan again.
    */
   validated?: boolean;
+  /** The procedure to run (default: the handbook's residential load-factor procedure). */
+  procedure?: LoadProcedure;
 }
 
 function normalizeAzimuth(deg: number): number {
@@ -32,10 +34,19 @@ function validate(plan: unknown, site: unknown, options: ComputeOptions | undefi
   return { plan: parsePlanInput(plan), site: parseSiteConditions(site) };
 }
 
-function facingResult(p: PreparedPlan, facingAzimuthDeg: number): FacingLoads {
+function procedureOf(options: ComputeOptions | undefined): LoadProcedure {
+  const procedure = options?.procedure ?? "hourly";
+  if (procedure !== "hourly") {
+    throw new LoadInputError("procedure", `the ${procedure} procedure is not available in engine ${ENGINE_VERSION}`);
+  }
+  return procedure;
+}
+
+function facingResult(p: PreparedPlan, facingAzimuthDeg: number, procedure: LoadProcedure): FacingLoads {
   const az = normalizeAzimuth(facingAzimuthDeg);
   return {
     engineVersion: ENGINE_VERSION,
+    procedure,
     facingAzimuthDeg: az,
     facadeAzimuthsDeg: {
       front: az,
@@ -65,15 +76,17 @@ export function computeFacingLoads(plan: unknown, site: unknown, facingAzimuthDe
       unit: "°",
     });
   }
+  const procedure = procedureOf(options);
   const valid = validate(plan, site, options);
-  return facingResult(preparePlan(valid.plan, prepareSite(valid.site)), facingAzimuthDeg);
+  return facingResult(preparePlan(valid.plan, prepareSite(valid.site)), facingAzimuthDeg, procedure);
 }
 
 /** The four facings (front to N, E, S, W), the worst (largest cooling total) and the spread. */
 export function computePlanFacings(plan: unknown, site: unknown, options?: ComputeOptions): PlanFacings {
+  const procedure = procedureOf(options);
   const valid = validate(plan, site, options);
   const prepared = preparePlan(valid.plan, prepareSite(valid.site));
-  const facings = FACING_LABELS.map((label, i) => ({ ...facingResult(prepared, i * 90), label }));
+  const facings = FACING_LABELS.map((label, i) => ({ ...facingResult(prepared, i * 90, procedure), label }));
   let worst = facings[0];
   let min = facings[0].cooling.totalBtuh;
   for (const f of facings) {
@@ -82,6 +95,7 @@ export function computePlanFacings(plan: unknown, site: unknown, options?: Compu
   }
   return {
     engineVersion: ENGINE_VERSION,
+    procedure,
     facings,
     worst: { label: worst.label, facingAzimuthDeg: worst.facingAzimuthDeg, coolingTotalBtuh: worst.cooling.totalBtuh },
     coolingSpreadBtuh: worst.cooling.totalBtuh - min,

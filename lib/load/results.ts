@@ -1,5 +1,19 @@
 /** Result types of the load engine (plain data). */
 
+/**
+ * The two procedures the engine runs. residential-load-factor: the handbook's own residential
+ * load-factor procedure (HoF 2021 ch. 17); hourly: Platload's hourly design-day method with heat
+ * storage (radiant and conduction time series, HoF 2021 ch. 18). An account picks the one that
+ * sizes equipment; the other is shown beside it.
+ */
+export const LOAD_PROCEDURES = ["residential-load-factor", "hourly"] as const;
+export type LoadProcedure = (typeof LOAD_PROCEDURES)[number];
+export const DEFAULT_LOAD_PROCEDURE: LoadProcedure = "residential-load-factor";
+export const LOAD_PROCEDURE_LABELS: Record<LoadProcedure, string> = {
+  "residential-load-factor": "Handbook residential load-factor procedure (HoF 2021 ch. 17)",
+  hourly: "Hourly design day with heat storage (HoF 2021 ch. 18 time series)",
+};
+
 export const HEATING_COMPONENTS = [
   "walls",
   "windows",
@@ -41,13 +55,16 @@ export interface CoolingResult {
   sensibleBtuh: number;
   latentBtuh: number;
   totalBtuh: number;
-  /** Solar hour 1–24 of the peak total sensible load. */
-  peakHour: number;
+  /** Solar hour 1–24 of the peak total sensible load; null for a procedure that gives the peak only. */
+  peakHour: number | null;
   sensibleByComponent: ComponentLoads<CoolingSensibleComponent>;
   latentByComponent: ComponentLoads<CoolingLatentComponent>;
   /** Window solar + conduction at the peak hour by facade, Btu/h. */
   windowsByFacadeBtuh: { front: number; left: number; back: number; right: number };
-  /** Total sensible load for solar hours 1–24 (index 0 = hour 1), Btu/h. */
+  /**
+   * Total sensible load for solar hours 1–24 (index 0 = hour 1), Btu/h; empty for a procedure
+   * that gives the peak only (the residential load-factor procedure).
+   */
   hourlySensibleBtuh: number[];
   hourlyOutdoorF: number[];
   outdoorF: number;
@@ -66,6 +83,8 @@ export interface CoolingResult {
 
 export interface FacingLoads {
   engineVersion: string;
+  /** The procedure that produced these loads. */
+  procedure: LoadProcedure;
   /** Azimuth the front facade faces, degrees clockwise from north. */
   facingAzimuthDeg: number;
   /** Azimuths of the four facades for this facing. */
@@ -84,6 +103,7 @@ export type FacingLabel = (typeof FACING_LABELS)[number];
 
 export interface PlanFacings {
   engineVersion: string;
+  procedure: LoadProcedure;
   /** Front to N, E, S, W (azimuth 0, 90, 180, 270). */
   facings: Array<FacingLoads & { label: FacingLabel }>;
   worst: { label: FacingLabel; facingAzimuthDeg: number; coolingTotalBtuh: number };

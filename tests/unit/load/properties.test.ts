@@ -58,7 +58,7 @@ describe("load engine properties", () => {
       const profile = r.cooling.hourlySensibleBtuh;
       expect(profile).toHaveLength(24);
       expect(Math.max(...profile)).toBeCloseTo(r.cooling.sensibleBtuh, 6);
-      expect(profile[r.cooling.peakHour - 1]).toBeCloseTo(r.cooling.sensibleBtuh, 6);
+      expect(profile[(r.cooling.peakHour ?? 0) - 1]).toBeCloseTo(r.cooling.sensibleBtuh, 6);
     }
   });
 
