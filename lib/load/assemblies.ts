@@ -224,38 +224,35 @@ export function floorU(construction: FloorConstruction, underside: "still-air" |
 // ---------------------------------------------------------------------------------------------
 // Slabs and foundation walls.
 
+/** 1 W/(m·K) in Btu/(h·ft·°F) (NIST SP 811: 1 Btu/(h·ft·°F) = 1.730735 W/(m·K)). */
+export const BTUH_FT_F_PER_W_M_K = 1 / 1.730735;
+
 /**
- * Slab-on-grade F-factors, Btu/h·ft·°F per ft of perimeter, unheated slab with vertical edge
- * insulation: ASHRAE 90.1 Appendix A Table A6.3 (from memory; uninsulated 0.73 and R-10 to
- * 24 in 0.54). Rows by insulation depth, columns by R; linear interpolation.
- * For scale, HoF 2021 SI ch. 18 Table 24 (read) gives heating F_p by wall construction:
- * uninsulated 1.17–2.07 W/(m·K) = 0.68–1.20 Btu/h·ft·°F (3.67 with a perimeter duct), and
- * 0.85–0.92 W/(m·K) = 0.49–0.53 with R-0.95 m²·K/W (R-5.4) from the slab edge to the footer.
+ * Slab-on-grade perimeter heat loss coefficients F_p, HoF 2021 SI ch. 18 Table 24 (read in a stored
+ * copy, p. 18.39), W/(m·K), by the foundation wall under the slab edge, uninsulated or with
+ * R-0.95 m²·K/W (R-5.4 h·ft²·°F/Btu) from the slab edge to the footer. Used with eq. 40–41:
+ * q = p·F_p·Δt.
  */
-const SLAB_F_R = [0, 5, 10, 15, 20, 30] as const;
-const SLAB_F_BY_DEPTH: ReadonlyArray<{ depthFt: number; f: readonly number[] }> = [
-  { depthFt: 0, f: [0.73, 0.73, 0.73, 0.73, 0.73, 0.73] },
-  { depthFt: 1, f: [0.73, 0.6, 0.56, 0.55, 0.54, 0.53] },
-  { depthFt: 2, f: [0.73, 0.58, 0.54, 0.52, 0.51, 0.5] },
-  { depthFt: 4, f: [0.73, 0.56, 0.5, 0.47, 0.45, 0.43] },
-  { depthFt: 6, f: [0.73, 0.55, 0.48, 0.45, 0.43, 0.41] },
-];
+export const SLAB_EDGE_F_P_W_M_K = {
+  "block-8in-brick-facing": { uninsulated: 1.17, insulated: 0.86 },
+  "block-4in-brick-facing": { uninsulated: 1.45, insulated: 0.85 },
+  "metal-stud-stucco": { uninsulated: 2.07, insulated: 0.92 },
+  "poured-concrete-perimeter-duct": { uninsulated: 3.67, insulated: 1.24 },
+} as const;
+export type SlabEdgeConstruction = keyof typeof SLAB_EDGE_F_P_W_M_K;
+/** The edge insulation of the table's insulated case, h·ft²·°F/Btu (R-0.95 m²·K/W × 5.678). */
+export const SLAB_TABLE_INSULATED_R = 0.95 * 5.678;
 
-function interp(xs: readonly number[], ys: readonly number[], x: number): number {
-  if (x <= xs[0]) return ys[0];
-  for (let i = 1; i < xs.length; i++) {
-    if (x <= xs[i]) {
-      const t = (x - xs[i - 1]) / (xs[i] - xs[i - 1]);
-      return ys[i - 1] + t * (ys[i] - ys[i - 1]);
-    }
-  }
-  return ys[ys.length - 1];
-}
-
-export function slabFFactor(edgeInsulationR: number, insulationDepthFt: number): number {
-  const depths = SLAB_F_BY_DEPTH.map((row) => row.depthFt);
-  const byDepth = SLAB_F_BY_DEPTH.map((row) => interp(SLAB_F_R, row.f, edgeInsulationR));
-  return interp(depths, byDepth, edgeInsulationR === 0 ? 0 : insulationDepthFt);
+/**
+ * F-factor of a slab edge, Btu/h·ft·°F: the Table 24 value of its construction, uninsulated or
+ * insulated. Between R-0 and the table's R-5.4 our linear interpolation in R; above R-5.4 the
+ * table's insulated value is kept (it gives nothing for more insulation, so the loss is then
+ * overstated a little — conservative for heating).
+ */
+export function slabFFactor(edgeInsulationR: number, construction: SlabEdgeConstruction = "block-8in-brick-facing"): number {
+  const row = SLAB_EDGE_F_P_W_M_K[construction];
+  const t = Math.min(1, edgeInsulationR / SLAB_TABLE_INSULATED_R);
+  return (row.uninsulated + t * (row.insulated - row.uninsulated)) * BTUH_FT_F_PER_W_M_K;
 }
 
 /**

@@ -231,7 +231,7 @@ export function prepareEnvelope(plan: PlanInput, site: PreparedSite, notes: stri
   if (f.floorAreaFt2 > 0 && f.kind !== "vented-crawlspace" && f.kind !== "unconditioned-basement") {
     notes.push(`foundation.floorAreaFt2 is ignored for a ${f.kind} foundation.`);
   }
-  const fFactor = f.slabFFactor ?? slabFFactor(f.slabEdgeInsulationR, f.slabEdgeInsulationDepthFt);
+  const fFactor = f.slabFFactor ?? slabFFactor(f.slabEdgeInsulationR, f.slabEdgeConstruction);
   heating.slab = fFactor * f.slabPerimeterFt * dtHeat;
   const slabAreaFt2 =
     f.slabPerimeterFt > 0 ? (f.slabAreaFt2 ?? plan.conditionedFloorAreaFt2 / plan.stories) : 0;

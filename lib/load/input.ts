@@ -88,6 +88,14 @@ export type DuctMethod = (typeof DUCT_METHODS)[number];
 export const DUCT_HEATING_SYSTEMS = ["furnace", "heat-pump"] as const;
 export type DuctHeatingSystem = (typeof DUCT_HEATING_SYSTEMS)[number];
 
+/** Foundation walls under a slab edge, as HoF 2021 ch. 18 Table 24 lists them (keys of its F_p values in assemblies.ts). */
+export const SLAB_EDGE_CONSTRUCTIONS = [
+  "block-8in-brick-facing",
+  "block-4in-brick-facing",
+  "metal-stud-stucco",
+  "poured-concrete-perimeter-duct",
+] as const;
+
 /** What covers a slab on grade indoors. */
 export const SLAB_FLOOR_COVERINGS = ["carpet", "tile", "bare"] as const;
 export type SlabFloorCovering = (typeof SLAB_FLOOR_COVERINGS)[number];
@@ -315,8 +323,13 @@ export const foundationSchema = z.strictObject({
   slabPerimeterFt: ranged(0, 10_000, "ft").default(0),
   /** Slab-edge insulation R (vertical, at the edge). */
   slabEdgeInsulationR: ranged(0, 30, "h·ft²·°F/Btu").default(0),
-  /** Depth of the slab-edge insulation, ft. */
+  /**
+   * Depth of the slab-edge insulation, ft, as installed (shown on reports; the F-factor table
+   * assumes insulation from the slab edge to the footer).
+   */
   slabEdgeInsulationDepthFt: ranged(0, 6, "ft").default(2),
+  /** The foundation wall under the slab edge, which sets its F-factor (HoF 2021 ch. 18 Table 24). */
+  slabEdgeConstruction: choice(SLAB_EDGE_CONSTRUCTIONS, "slab edge construction").default("block-8in-brick-facing"),
   /** A slab-edge F-factor from a published table, Btu/h·ft·°F; replaces the one from edge insulation. */
   slabFFactor: ranged(0.05, 2, "Btu/h·ft·°F").optional(),
   /** Slab floor area on grade, ft² (default: conditioned floor area ÷ stories when a perimeter is given). */

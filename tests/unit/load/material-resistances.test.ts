@@ -9,7 +9,7 @@
  * rounding of our two-decimal IP constants.
  */
 import { describe, expect, it } from "vitest";
-import { belowGradeWallU, FILM_R, MATERIAL_R } from "../../../lib/load/assemblies";
+import { belowGradeWallU, FILM_R, MATERIAL_R, slabFFactor } from "../../../lib/load/assemblies";
 
 const IP_R_PER_SI_R = 5.678263;
 const ROUNDING = 0.01;
@@ -102,5 +102,21 @@ describe("below-grade wall U against HoF 2021 SI ch. 18 eq. 38 (read in a stored
     const ours = belowGradeWallU(insulationR, depthFt) * IP_R_PER_SI_R;
     const handbook = eq38(depthFt * 0.3048, 0.259 + insulationR / IP_R_PER_SI_R);
     expect(Math.abs(ours / handbook - 1)).toBeLessThanOrEqual(0.1);
+  });
+});
+
+describe("slab edge F-factors: HoF 2021 SI ch. 18 Table 24 as read (W/(m·K), converted by NIST 1.730735)", () => {
+  const rows = [
+    // construction, uninsulated F_p, F_p with R-0.95 m²·K/W from edge to footer (printed)
+    ["block-8in-brick-facing", 1.17, 0.86],
+    ["block-4in-brick-facing", 1.45, 0.85],
+    ["metal-stud-stucco", 2.07, 0.92],
+    ["poured-concrete-perimeter-duct", 3.67, 1.24],
+  ] as const;
+  it.each(rows)("%s: %f uninsulated, %f with R-5.4 (±0.1 %)", (construction, bare, insulated) => {
+    expect(slabFFactor(0, construction)).toBeCloseTo(bare / 1.730735, 4);
+    expect(slabFFactor(0.95 * 5.678, construction)).toBeCloseTo(insulated / 1.730735, 4);
+    // More insulation than the table's case keeps the insulated value (conservative), never lower.
+    expect(slabFFactor(15, construction)).toBeCloseTo(insulated / 1.730735, 4);
   });
 });
