@@ -42,7 +42,7 @@ export function SizingLimitsForm({ canEdit }: { canEdit: boolean }) {
     >
       <h2 className="mb-1 text-sm font-semibold">Sizing limits</h2>
       <p className="mb-2 text-xs text-zinc-600">
-        A system fits when its capacities fall within these limits and its sensible and latent capacities cover the loads. {query.data.custom ? "Set for this account." : "The defaults (from memory and common practice)."} Reports state the limits they used.
+        A system fits when its capacities fall within these limits and its sensible and latent capacities cover the loads. {query.data.custom ? "Set for this account." : "Approximate defaults — verify locally."} Reports state the limits they used.
       </p>
       {error ? <p className="mb-2 rounded border border-red-200 bg-red-50 px-2 py-1 text-xs text-red-800">{error.message} {error.fieldErrors.map((f) => `${f.field}: ${f.message}`).join("; ")}</p> : null}
       {notice ? <p className="mb-2 text-xs text-accent-800">{notice}</p> : null}
