@@ -80,8 +80,8 @@ export function prepareSite(site: SiteConditions): PreparedSite {
   const tauDiffuse = site.tauDiffuse ?? DEFAULT_TAU_DIFFUSE;
   if (site.tauBeam === undefined || site.tauDiffuse === undefined) {
     notes.push(
-      `Clear-sky optical depths not entered for the site: defaults τb ${tauBeam}, τd ${tauDiffuse} used ` +
-        "(enter the station's values from HoF ch. 14 for the design month).",
+      `Clear-sky optical depths not entered for the site: τb ${tauBeam}, τd ${tauDiffuse} used — approximate default, verify locally ` +
+        "(enter the station's values from the ASHRAE climatic design data for the design month).",
     );
   }
   const dayOfYear = designDayOfYear(site.designMonth);
