@@ -34,13 +34,14 @@ const COMPONENT_LABELS: Record<string, string> = {
   vaultedCeilings: "Vaulted ceilings",
   skylights: "Skylights",
   floors: "Floors",
-  slab: "Slab edge",
+  slab: "Slab",
   foundationWalls: "Foundation walls",
   garageWall: "Garage wall",
   infiltration: "Infiltration",
   ventilation: "Ventilation",
   ducts: "Ducts",
   internal: "Internal gains",
+  temperatureSwing: "Indoor swing credit",
 };
 
 export function PlanSheet({ planId, canEdit, canApprove, memberName, initialCommunityId }: { planId: number; canEdit: boolean; canApprove: boolean; memberName: string; initialCommunityId: number | null }) {

@@ -1,6 +1,7 @@
 /**
  * The facing-dependent cooling design day of the hourly method: solar on every facade, window and
- * roof, hour by hour over solar hours 1–24; the peak hour of the total sensible load governs.
+ * roof, hour by hour over solar hours 1–24, with heat storage by the radiant and conduction time
+ * series of HoF 2021 ch. 18 (storage.ts); the peak hour of the total sensible load governs.
  * This is the hot path (it runs for every lot): keep it allocation-light; imported constants are
  * copied to locals because transpiled ES-module bindings are read through getters.
  */
@@ -9,6 +10,16 @@ import { ductLoad } from "./ducts";
 import { ductRangeError } from "./duct-setup";
 import { FACADES, type Facade } from "./input";
 import type { PreparedPlan } from "./prepare-plan";
+import type { TimeSeries } from "./storage";
+import { capacityWithSwingBtuh, DESIGN_TEMPERATURE_SWING_F } from "./temperature-swing";
+import {
+  convolveDay,
+  RADIANT_FRACTION_CONDUCTION_ROOF,
+  RADIANT_FRACTION_CONDUCTION_WALLS_FLOORS,
+  RADIANT_FRACTION_CONDUCTION_WINDOW_HIGH_SHGC,
+  RADIANT_FRACTION_CONDUCTION_WINDOW_LOW_SHGC,
+  RADIANT_FRACTION_SOLAR_LIGHT_VENETIAN_BLINDS_EXAMPLE,
+} from "./time-series/radiant-time-series";
 import {
   COOLING_LATENT_COMPONENTS,
   COOLING_SENSIBLE_COMPONENTS,
@@ -28,51 +39,75 @@ const sunlitFraction = overhangSunlitFraction;
 const solAir = solAirTemperatureF;
 const atticAir = atticAirTemperatureF;
 const FACADE_LIST: readonly Facade[] = FACADES;
+const convolve = convolveDay;
+const capacityWithSwing = capacityWithSwingBtuh;
+const DESIGN_SWING_F = DESIGN_TEMPERATURE_SWING_F;
 const SENSIBLE_KEYS: readonly CoolingSensibleComponent[] = COOLING_SENSIBLE_COMPONENTS;
 const LATENT_KEYS: readonly CoolingLatentComponent[] = COOLING_LATENT_COMPONENTS;
 
-/**
- * Time lag (h) and decrement of periodic conduction by mass class (from memory; orders of
- * magnitude of HoF ch. 18 conduction time series for wood-frame and 8 in block walls).
- */
-const MASS_RESPONSE = {
-  "light-frame": { lagH: 2, decrement: 0.85 },
-  masonry: { lagH: 5, decrement: 0.5 },
-} as const;
-const VAULTED_RESPONSE = { lagH: 1, decrement: 0.9 };
-
 export const FACADE_OFFSET_DEG: Record<Facade, number> = { front: 0, left: 90, back: 180, right: 270 };
 
+/**
+ * Radiant shares of heat gains, HoF 2021 ch. 18 Table 14 (read): conduction through walls and
+ * floors 0.46, roofs 0.60, windows 0.46 (SHGC < 0.5) or 0.33; transmitted solar without interior
+ * shading 1 (beam through the solar RTS); behind interior shading 0.54, the one value read for an
+ * interior shade (the chapter's example venetian blind; its Table 14 defers to ch. 15 for others).
+ */
+const RADIANT_WALLS = RADIANT_FRACTION_CONDUCTION_WALLS_FLOORS;
+const RADIANT_ROOF = RADIANT_FRACTION_CONDUCTION_ROOF;
+const RADIANT_SHADED_SOLAR = RADIANT_FRACTION_SOLAR_LIGHT_VENETIAN_BLINDS_EXAMPLE;
+
+const row = () => new Float64Array(24);
 const SCRATCH = {
-  walls: new Float64Array(24),
-  windows: new Float64Array(24),
-  doors: new Float64Array(24),
-  ceilings: new Float64Array(24),
-  vaulted: new Float64Array(24),
-  skylights: new Float64Array(24),
-  ducts: new Float64Array(24),
-  rooms: new Float64Array(24),
-  total: new Float64Array(24),
-  te: new Float64Array(24),
-  roofIrr: new Float64Array(24),
-  atticF: new Float64Array(24),
-  windowsByFacade: [new Float64Array(24), new Float64Array(24), new Float64Array(24), new Float64Array(24)],
+  walls: row(),
+  windows: row(),
+  doors: row(),
+  ceilings: row(),
+  vaulted: row(),
+  skylights: row(),
+  floors: row(),
+  foundationWalls: row(),
+  garageWall: row(),
+  ducts: row(),
+  rooms: row(),
+  total: row(),
+  te: row(),
+  lagged: row(),
+  gain: row(),
+  roofIrr: row(),
+  atticF: row(),
+  radNonsolar: row(),
+  radSolar: row(),
+  stored: row(),
+  windowsByFacade: [row(), row(), row(), row()],
 };
-const SCRATCH_ROWS: Float64Array[] = [
-  SCRATCH.walls,
-  SCRATCH.windows,
-  SCRATCH.doors,
-  SCRATCH.ceilings,
-  SCRATCH.vaulted,
-  SCRATCH.skylights,
-  SCRATCH.ducts,
-  SCRATCH.rooms,
-  SCRATCH.total,
-  SCRATCH.te,
-  SCRATCH.roofIrr,
-  SCRATCH.atticF,
-  ...SCRATCH.windowsByFacade,
-];
+
+/** out[h] += (1 − f)·gain[h] + f·(RTS ∗ gain)[h]: the cooling load of a heat gain with radiant share f. */
+function addStored(gain: Float64Array, radiantShare: number, rts: TimeSeries, out: Float64Array): void {
+  const stored = SCRATCH.stored;
+  convolve(gain, rts.factors, rts.last, stored);
+  for (let h = 0; h < 24; h++) out[h] += (1 - radiantShare) * gain[h] + radiantShare * stored[h];
+}
+
+/** out[h] += (RTS ∗ radiant)[h]. */
+function addRadiant(radiant: Float64Array, rts: TimeSeries, out: Float64Array): void {
+  const stored = SCRATCH.stored;
+  convolve(radiant, rts.factors, rts.last, stored);
+  for (let h = 0; h < 24; h++) out[h] += stored[h];
+}
+
+/** Duct gain for a room sensible load at hour h, Btu/h (the system is taken as off with no cooling need). */
+function ductGainBtuh(p: PreparedPlan, roomLoadBtuh: number, atticF: number, h: number): number {
+  const dz = p.ducts;
+  if (roomLoadBtuh <= 0) return 0;
+  if (dz.factorCool !== null) return dz.factorCool * roomLoadBtuh; // HoF 2021 ch. 17 eq. 19 with the Table 6 cooling factor
+  if (!dz.geometry.outsideEnvelope) return 0;
+  const site = p.site;
+  const tic = site.site.indoorCoolingF;
+  const zoneF = dz.zone === "attic" ? atticF : dz.zone === "crawl" ? site.dailyMeanOutdoorF : dz.zone === "garage" ? p.envelope.garageCoolingF[h] : tic;
+  const d = ductLoad(dz.geometry, roomLoadBtuh, "cooling", zoneF, tic, p.plan.coolingSupplyDeltaF, site.sensibleFactor, 0);
+  return d.sensibleBtuh * dz.lossFractionCool;
+}
 
 export function hourlyCoolingDay(p: PreparedPlan, facingAzimuthDeg: number): CoolingResult {
   const site = p.site;
@@ -81,44 +116,83 @@ export function hourlyCoolingDay(p: PreparedPlan, facingAzimuthDeg: number): Coo
   const toArr = site.outdoorF;
   const env = p.envelope;
   const air = p.air;
+  const st = p.storage;
 
   // Scratch rows reused across calls (the function is synchronous and never re-entered).
-  const { walls, windows, doors, ceilings, vaulted, skylights, ducts, rooms, total, te, roofIrr, atticF } = SCRATCH;
+  const { walls, windows, doors, ceilings, vaulted, skylights, floors, foundationWalls, garageWall, ducts, rooms, total } = SCRATCH;
+  const { te, lagged, gain, roofIrr, atticF, radNonsolar, radSolar } = SCRATCH;
   const windowsByFacade = SCRATCH.windowsByFacade;
-  for (const row of SCRATCH_ROWS) row.fill(0);
+  walls.fill(0);
+  windows.fill(0);
+  doors.fill(0);
+  ceilings.fill(0);
+  vaulted.fill(0);
+  skylights.fill(0);
+  floors.fill(0);
+  foundationWalls.fill(0);
+  garageWall.fill(0);
+  ducts.fill(0);
+  roofIrr.fill(0);
+  gain.fill(0);
 
-  // Walls, doors, windows per facade.
+  // Walls and doors: conduction of the sol-air difference, through each wall's CTS (ch. 18 eq.
+  // 30–31); doors are thin and taken without conduction lag. Their radiant share then through the RTS.
+  const doorGain = SCRATCH.radSolar; // reused as the door heat-gain row here (cleared below)
+  doorGain.fill(0);
   for (let fi = 0; fi < env.facades.length; fi++) {
     const fc = env.facades[fi];
-    const response = MASS_RESPONSE[fc.wallMass];
     const profile: SurfaceProfile = solar.surface(facingAzimuthDeg + FACADE_OFFSET_DEG[fc.facade], 90);
     const totalWm2 = profile.totalWm2;
-    let teMean = 0;
+    for (let h = 0; h < 24; h++) te[h] = solAir(toArr[h], p.plan.wallSolarAbsorptance, totalWm2[h] * W_M2_TO_BTUH_FT2, 90);
+    const cts = st.walls[fi];
+    convolve(te, cts.factors, cts.last, lagged);
     for (let h = 0; h < 24; h++) {
-      te[h] = solAir(toArr[h], p.plan.wallSolarAbsorptance, totalWm2[h] * W_M2_TO_BTUH_FT2, 90);
-      teMean += te[h];
+      gain[h] += fc.wallUaCool * (lagged[h] - tic);
+      doorGain[h] += fc.doorUaCool * (te[h] - tic);
     }
-    teMean /= 24;
+
+    // Windows: conduction (radiant 0.46 or 0.33), transmitted beam (solar RTS without interior
+    // shade), diffuse and shaded beam (nonsolar RTS).
     const byFacade = windowsByFacade[fi];
+    byFacade.fill(0);
     const ws = fc.windows;
+    if (ws.length === 0) continue;
+    radNonsolar.fill(0);
+    lagged.fill(0); // reused as the unshaded-beam radiant row
     for (let h = 0; h < 24; h++) {
-      const lagged = te[(h - response.lagH + 24) % 24];
-      walls[h] += fc.wallUaCool * (teMean - tic + response.decrement * (lagged - teMean));
-      doors[h] += fc.doorUaCool * (te[h] - tic);
-      if (ws.length === 0) continue;
       const beamBase = profile.beamWm2[h] * W_M2_TO_BTUH_FT2 * shgcRatio(profile.incidenceDeg[h]);
       const diffuse = profile.diffuseAndReflectedWm2[h] * W_M2_TO_BTUH_FT2 * DIFFUSE_RATIO;
       const tanOmega = profile.tanProfileAngle[h];
-      let win = 0;
+      let convective = 0;
+      let nonsolarRadiant = 0;
+      let beamRadiant = 0;
       for (let wi = 0; wi < ws.length; wi++) {
         const w = ws[wi];
+        const conduction = w.uaCool * (toArr[h] - tic);
+        const conductionRadiant = w.shgc < 0.5 ? RADIANT_FRACTION_CONDUCTION_WINDOW_LOW_SHGC : RADIANT_FRACTION_CONDUCTION_WINDOW_HIGH_SHGC;
+        convective += (1 - conductionRadiant) * conduction;
+        nonsolarRadiant += conductionRadiant * conduction;
         const sunlit = sunlitFraction(w.overhangDepthFt, w.overhangHeightAboveHeadFt, w.windowHeightFt, tanOmega);
-        win += w.uaCool * (toArr[h] - tic) + w.areaFt2 * w.attenuation * w.shgc * (beamBase * sunlit + diffuse);
+        const beam = w.areaFt2 * w.attenuation * w.shgc * beamBase * sunlit;
+        const diff = w.areaFt2 * w.attenuation * w.shgc * diffuse;
+        if (w.interiorShade) {
+          convective += (1 - RADIANT_SHADED_SOLAR) * (beam + diff);
+          nonsolarRadiant += RADIANT_SHADED_SOLAR * (beam + diff);
+        } else {
+          nonsolarRadiant += diff;
+          beamRadiant += beam;
+        }
       }
-      windows[h] += win;
-      byFacade[h] += win;
+      byFacade[h] = convective;
+      radNonsolar[h] = nonsolarRadiant;
+      lagged[h] = beamRadiant;
     }
+    addRadiant(radNonsolar, st.nonsolar, byFacade);
+    addRadiant(lagged, st.solar, byFacade);
+    for (let h = 0; h < 24; h++) windows[h] += byFacade[h];
   }
+  addStored(gain, RADIANT_WALLS, st.nonsolar, walls);
+  addStored(doorGain, RADIANT_WALLS, st.nonsolar, doors);
 
   // Roof planes: a hip roof with one plane toward each facade (equal areas) — average irradiance.
   const at = env.attic;
@@ -129,66 +203,91 @@ export function hourlyCoolingDay(p: PreparedPlan, facingAzimuthDeg: number): Coo
       for (let h = 0; h < 24; h++) roofIrr[h] += prof.totalWm2[h] * W_M2_TO_BTUH_FT2 * 0.25;
     }
   }
-  for (let h = 0; h < 24; h++) {
-    if (!hasAttic) {
-      atticF[h] = toArr[h];
-      continue;
+  if (hasAttic) {
+    // Attic air from its heat balance each hour (attic.ts); an encapsulated attic's insulated deck
+    // passes the sol-air through its own CTS first. A vented attic's bare deck is taken without lag;
+    // the ceiling below it then responds as the whole roof–attic–ceiling stack (storage.ts).
+    for (let h = 0; h < 24; h++) te[h] = solAir(toArr[h], at.absorptance, roofIrr[h], env.roofTiltDeg);
+    if (at.kind === "encapsulated") {
+      convolve(te, st.encapsulatedRoof.factors, st.encapsulatedRoof.last, lagged);
+    } else {
+      for (let h = 0; h < 24; h++) lagged[h] = te[h];
     }
-    atticF[h] = atticAir({
-      roofUA: at.roofUaCool,
-      solAirF: solAir(toArr[h], at.absorptance, roofIrr[h], env.roofTiltDeg),
-      ceilingUA: at.ceilingUaCool,
-      roomF: tic,
-      ventilationConductanceBtuhF: at.ventilationConductance,
-      outdoorF: toArr[h],
-    });
-    ceilings[h] = at.ceilingUaCool * (atticF[h] - tic);
+    for (let h = 0; h < 24; h++) {
+      atticF[h] = atticAir({
+        roofUA: at.roofUaCool,
+        solAirF: lagged[h],
+        ceilingUA: at.ceilingUaCool,
+        roomF: tic,
+        ventilationConductanceBtuhF: at.ventilationConductance,
+        outdoorF: toArr[h],
+      });
+    }
+    if (at.kind === "vented") {
+      convolve(atticF, st.ventedCeiling.factors, st.ventedCeiling.last, lagged);
+    } else {
+      for (let h = 0; h < 24; h++) lagged[h] = atticF[h];
+    }
+    for (let h = 0; h < 24; h++) gain[h] = at.ceilingUaCool * (lagged[h] - tic);
+    addStored(gain, RADIANT_ROOF, st.nonsolar, ceilings);
+  } else {
+    for (let h = 0; h < 24; h++) atticF[h] = toArr[h];
   }
   if (env.vaulted.uaCool > 0) {
-    let mean = 0;
-    for (let h = 0; h < 24; h++) {
-      te[h] = solAir(toArr[h], env.vaulted.absorptance, roofIrr[h], env.roofTiltDeg);
-      mean += te[h] / 24;
-    }
-    for (let h = 0; h < 24; h++) {
-      const lagged = te[(h - VAULTED_RESPONSE.lagH + 24) % 24];
-      vaulted[h] = env.vaulted.uaCool * (mean - tic + VAULTED_RESPONSE.decrement * (lagged - mean));
-    }
+    for (let h = 0; h < 24; h++) te[h] = solAir(toArr[h], env.vaulted.absorptance, roofIrr[h], env.roofTiltDeg);
+    convolve(te, st.vaulted.factors, st.vaulted.last, lagged);
+    for (let h = 0; h < 24; h++) gain[h] = env.vaulted.uaCool * (lagged[h] - tic);
+    addStored(gain, RADIANT_ROOF, st.nonsolar, vaulted);
   }
   const sk = env.skylight;
   if (sk.areaFt2 > 0) {
     const prof = solar.surface(facingAzimuthDeg + FACADE_OFFSET_DEG[sk.facade], sk.tiltDeg);
+    radNonsolar.fill(0);
+    radSolar.fill(0);
     for (let h = 0; h < 24; h++) {
-      const beam = prof.beamWm2[h] * W_M2_TO_BTUH_FT2 * shgcRatio(prof.incidenceDeg[h]);
-      const diffuse = prof.diffuseAndReflectedWm2[h] * W_M2_TO_BTUH_FT2 * DIFFUSE_RATIO;
-      skylights[h] = sk.uaCool * (toArr[h] - tic) + sk.areaFt2 * sk.attenuation * sk.shgc * (beam + diffuse);
+      const beam = sk.areaFt2 * sk.attenuation * sk.shgc * prof.beamWm2[h] * W_M2_TO_BTUH_FT2 * shgcRatio(prof.incidenceDeg[h]);
+      const diffuse = sk.areaFt2 * sk.attenuation * sk.shgc * prof.diffuseAndReflectedWm2[h] * W_M2_TO_BTUH_FT2 * DIFFUSE_RATIO;
+      const conduction = sk.uaCool * (toArr[h] - tic);
+      skylights[h] = (1 - RADIANT_FRACTION_CONDUCTION_WINDOW_LOW_SHGC) * conduction;
+      radNonsolar[h] = RADIANT_FRACTION_CONDUCTION_WINDOW_LOW_SHGC * conduction + diffuse;
+      radSolar[h] = beam;
     }
+    addRadiant(radNonsolar, st.nonsolar, skylights);
+    addRadiant(radSolar, st.solar, skylights);
   }
 
+  // Surfaces to buffer spaces (ch. 18 eq. 32: no time series; their radiant share still through the RTS).
+  for (let h = 0; h < 24; h++) gain[h] = env.floorsCool[h];
+  addStored(gain, RADIANT_WALLS, st.nonsolar, floors);
+  for (let h = 0; h < 24; h++) gain[h] = env.foundationWallsCool[h];
+  addStored(gain, RADIANT_WALLS, st.nonsolar, foundationWalls);
+  for (let h = 0; h < 24; h++) gain[h] = env.garageWallCool[h];
+  addStored(gain, RADIANT_WALLS, st.nonsolar, garageWall);
+
   // Ducts, hour by hour, on the room load (the system is taken as off in hours with no cooling need).
-  const dz = p.ducts;
-  const supplyDeltaF = p.plan.coolingSupplyDeltaF;
+  // Internal gains and the slab credit are the same every hour: the RTS gives a constant back.
   const internal = p.internal.sensibleBtuh;
+  const slab = env.slab.coolingBtuh;
   let peak = 0;
   try {
-  for (let h = 0; h < 24; h++) {
-    rooms[h] =
-      walls[h] + windows[h] + doors[h] + ceilings[h] + vaulted[h] + skylights[h] + env.floorsCool[h] +
-      env.foundationWallsCool[h] + env.garageWallCool[h] + air.coolingInfiltrationSensibleBtuh[h] +
-      air.coolingVentilationSensibleBtuh[h] + internal;
-    if (rooms[h] > 0 && dz.factorCool !== null) {
-      ducts[h] = dz.factorCool * rooms[h]; // HoF 2021 ch. 17 eq. 19 with the Table 6 cooling factor
-    } else if (rooms[h] > 0 && dz.geometry.outsideEnvelope) {
-      const zoneF = dz.zone === "attic" ? atticF[h] : dz.zone === "crawl" ? site.dailyMeanOutdoorF : dz.zone === "garage" ? env.garageCoolingF[h] : tic;
-      const d = ductLoad(dz.geometry, rooms[h], "cooling", zoneF, tic, supplyDeltaF, site.sensibleFactor, 0);
-      ducts[h] = d.sensibleBtuh * dz.lossFractionCool;
+    for (let h = 0; h < 24; h++) {
+      rooms[h] =
+        walls[h] + windows[h] + doors[h] + ceilings[h] + vaulted[h] + skylights[h] + floors[h] + slab +
+        foundationWalls[h] + garageWall[h] + air.coolingInfiltrationSensibleBtuh[h] +
+        air.coolingVentilationSensibleBtuh[h] + internal;
+      ducts[h] = ductGainBtuh(p, rooms[h], atticF[h], h);
+      total[h] = rooms[h] + ducts[h];
+      if (total[h] > total[peak]) peak = h;
     }
-    total[h] = rooms[h] + ducts[h];
-    if (total[h] > total[peak]) peak = h;
-  }
   } catch (error) {
     throw ductRangeError(error);
   }
+  // The rooms may drift up to the design swing at the peak (temperature-swing.ts): the capacity the
+  // rooms need is below their fixed-set-point peak by the swing credit, and the ducts carry that.
+  const conductance = st.envelopeConductanceBtuhF + site.sensibleFactor * (air.coolingInfiltrationCfm[peak] + air.ventilationProvidedCfm);
+  const roomCapacity = capacityWithSwing(rooms, conductance, st.capacitanceBtuF, DESIGN_SWING_F);
+  const swingCredit = Math.min(0, roomCapacity - rooms[peak]);
+  const peakDucts = swingCredit === 0 ? ducts[peak] : ductGainBtuh(p, rooms[peak] + swingCredit, atticF[peak], peak);
 
   const sensibleByComponent: ComponentLoads<CoolingSensibleComponent> = {
     walls: walls[peak],
@@ -197,14 +296,15 @@ export function hourlyCoolingDay(p: PreparedPlan, facingAzimuthDeg: number): Coo
     ceilings: ceilings[peak],
     vaultedCeilings: vaulted[peak],
     skylights: skylights[peak],
-    floors: env.floorsCool[peak],
-    slab: 0,
-    foundationWalls: env.foundationWallsCool[peak],
-    garageWall: env.garageWallCool[peak],
+    floors: floors[peak],
+    slab,
+    foundationWalls: foundationWalls[peak],
+    garageWall: garageWall[peak],
     infiltration: air.coolingInfiltrationSensibleBtuh[peak],
     ventilation: air.coolingVentilationSensibleBtuh[peak],
-    ducts: ducts[peak],
+    ducts: peakDucts,
     internal,
+    temperatureSwing: swingCredit,
   };
   let sensibleBtuh = 0;
   for (let k = 0; k < SENSIBLE_KEYS.length; k++) sensibleBtuh += sensibleByComponent[SENSIBLE_KEYS[k]];
@@ -248,7 +348,7 @@ export function hourlyCoolingDay(p: PreparedPlan, facingAzimuthDeg: number): Coo
     outdoorHumidityRatioGr: site.outdoorHumidityRatioGr,
     indoorHumidityRatioGr: site.indoorHumidityRatioGr,
     sensibleHeatRatio: totalBtuh > 0 ? sensibleBtuh / totalBtuh : 1,
-    airflowCfm: sensibleBtuh / (site.sensibleFactor * supplyDeltaF),
+    airflowCfm: sensibleBtuh / (site.sensibleFactor * p.plan.coolingSupplyDeltaF),
     tons,
     floorAreaPerTonFt2: tons > 0 ? p.plan.conditionedFloorAreaFt2 / tons : Number.POSITIVE_INFINITY,
   };

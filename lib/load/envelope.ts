@@ -20,11 +20,15 @@ import { atticAirTemperatureF, SOL_AIR_HO_BTUH_FT2F } from "./attic";
 import { FACADES, type Facade, type PlanInput, type RoofBaseAssembly, type WallBaseAssembly, type WallConstruction } from "./input";
 import type { ComponentLoads, HeatingComponent } from "./results";
 import type { PreparedSite } from "./site";
+import { slabCoolingBtuh } from "./slab";
 import { DEG, hours24 } from "./units";
 
-/** Attached garage defaults when not entered (our own rough buffer-space assumption, from memory). */
-const GARAGE_HEATING_FRACTION_TOWARD_INDOOR = 0.3;
-const GARAGE_COOLING_ABOVE_OUTDOOR_F = 5;
+/**
+ * An attached garage, when its temperatures are not entered, is taken at the outdoor air
+ * temperature with no sun on the shared wall: the treatment of HoF 2021 ch. 17's example house
+ * (Tables 20 and 22, read: the garage wall takes the full outdoor Δt in heating and the shaded-wall
+ * cooling factors), which is conservative for heating.
+ */
 
 export interface PreparedWindow {
   areaFt2: number;
@@ -66,8 +70,8 @@ export interface PreparedEnvelope {
   vaulted: { uaCool: number; absorptance: number; baseId: RoofBaseAssembly };
   skylight: { areaFt2: number; uaCool: number; shgc: number; attenuation: number; tiltDeg: number; facade: Facade };
   roofTiltDeg: number;
-  /** Slab: exposed perimeter × F-factor (Btu/h·°F), and its floor area for the cooling credit. */
-  slab: { perimeterFt: number; fFactor: number; areaFt2: number; floorCoveringR: number };
+  /** Slab: exposed perimeter and F-factor (heating), floor area and cooling credit (Btu/h, negative). */
+  slab: { perimeterFt: number; fFactor: number; areaFt2: number; coolingBtuh: number };
   /** Hourly sensible loads that do not depend on facing, Btu/h. */
   floorsCool: number[];
   foundationWallsCool: number[];
@@ -100,12 +104,6 @@ function zeros(): ComponentLoads<HeatingComponent> {
   };
 }
 
-/**
- * Floor-covering resistance over a slab, h·ft²·°F/Btu. Carpet with pad R-2 and tile or bare
- * concrete about 0 (common practice values; the handbook's residential procedure treats the
- * covering through its own slab factor: lib/load/residential-load-factor).
- */
-export const SLAB_FLOOR_COVERING_R = { carpet: 2, tile: 0.05, bare: 0 } as const;
 
 export function prepareEnvelope(plan: PlanInput, site: PreparedSite, notes: string[]): PreparedEnvelope {
   const s = site.site;
@@ -116,11 +114,11 @@ export function prepareEnvelope(plan: PlanInput, site: PreparedSite, notes: stri
   const heating = zeros();
 
   // --- Buffer-space temperatures (heating) -------------------------------------------------
-  const garageHeatingF = plan.garage.heatingTemperatureF ?? to + GARAGE_HEATING_FRACTION_TOWARD_INDOOR * dtHeat;
+  const garageHeatingF = plan.garage.heatingTemperatureF ?? to;
   const garageCoolingF = hours24();
-  for (let h = 0; h < 24; h++) garageCoolingF[h] = plan.garage.coolingTemperatureF ?? site.outdoorF[h] + GARAGE_COOLING_ABOVE_OUTDOOR_F;
+  for (let h = 0; h < 24; h++) garageCoolingF[h] = plan.garage.coolingTemperatureF ?? site.outdoorF[h];
   if (plan.garage.wallAreaFt2 + plan.garage.floorOverAreaFt2 > 0 && plan.garage.heatingTemperatureF === undefined) {
-    notes.push(`Garage heating temperature not entered: ${garageHeatingF.toFixed(0)} °F assumed (outdoor + 30 % of the difference).`);
+    notes.push("Garage temperatures not entered: the garage is taken at the outdoor temperature, without sun (the handbook example's treatment).");
   }
 
   const f = plan.foundation;
@@ -280,7 +278,7 @@ export function prepareEnvelope(plan: PlanInput, site: PreparedSite, notes: stri
       facade: sk.facade,
     },
     roofTiltDeg,
-    slab: { perimeterFt: f.slabPerimeterFt, fFactor, areaFt2: slabAreaFt2, floorCoveringR: SLAB_FLOOR_COVERING_R[f.slabFloorCovering] },
+    slab: { perimeterFt: f.slabPerimeterFt, fFactor, areaFt2: slabAreaFt2, coolingBtuh: slabCoolingBtuh(slabAreaFt2, f.slabFloorCovering) },
     floorsCool,
     foundationWallsCool,
     garageWallCool,

@@ -10,6 +10,7 @@ import type { PlanInput } from "./input";
 import { internalGains, occupantsOf } from "./internal-gains";
 import { HEATING_COMPONENTS, type HeatingResult } from "./results";
 import type { PreparedSite } from "./site";
+import { prepareStorage, type PreparedStorage } from "./storage";
 
 export interface PreparedPlan {
   plan: PlanInput;
@@ -19,6 +20,7 @@ export interface PreparedPlan {
   air: PreparedAir;
   envelope: PreparedEnvelope;
   ducts: PreparedDucts;
+  storage: PreparedStorage;
   heating: HeatingResult;
   internal: { sensibleBtuh: number; latentBtuh: number };
   notes: string[];
@@ -50,6 +52,7 @@ export function preparePlan(plan: PlanInput, site: PreparedSite): PreparedPlan {
   const ducts = prepareDucts(plan, site, envelope, envelopeHeatBtuh, notes);
   heating.ducts = ducts.heatingBtuh;
   const gains = internalGains(plan.internalGains, plan.conditionedFloorAreaFt2, occupants);
+  const storage = prepareStorage(plan, envelope);
 
   const prepared: PreparedPlan = {
     plan,
@@ -59,6 +62,7 @@ export function preparePlan(plan: PlanInput, site: PreparedSite): PreparedPlan {
     air,
     envelope,
     ducts,
+    storage,
     heating: {
       totalBtuh: envelopeHeatBtuh + heating.ducts,
       byComponent: heating,

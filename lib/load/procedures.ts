@@ -58,7 +58,7 @@ function facingResult(p: PreparedPlan, facingAzimuthDeg: number, procedure: Load
     cooling: hourlyCoolingDay(p, az),
     ventilation: { requiredCfm: p.air.ventilationRequiredCfm, providedCfm: p.air.ventilationProvidedCfm, kind: p.plan.ventilation.kind },
     effectiveLeakageAreaIn2: p.air.elaCm2 / CM2_PER_IN2,
-    notes: [...p.notes],
+    notes: [...p.notes, p.storage.description],
     caution: DESIGN_ESTIMATE_CAUTION,
   };
 }

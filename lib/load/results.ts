@@ -31,7 +31,11 @@ export const HEATING_COMPONENTS = [
 ] as const;
 export type HeatingComponent = (typeof HEATING_COMPONENTS)[number];
 
-export const COOLING_SENSIBLE_COMPONENTS = [...HEATING_COMPONENTS, "internal"] as const;
+/**
+ * Cooling sensible components. temperatureSwing: the hourly method's credit for letting the rooms
+ * drift up to the design swing at the peak (negative or zero; lib/load/temperature-swing.ts).
+ */
+export const COOLING_SENSIBLE_COMPONENTS = [...HEATING_COMPONENTS, "internal", "temperatureSwing"] as const;
 export type CoolingSensibleComponent = (typeof COOLING_SENSIBLE_COMPONENTS)[number];
 
 export const COOLING_LATENT_COMPONENTS = ["infiltration", "ventilation", "internal", "ducts"] as const;
@@ -62,8 +66,9 @@ export interface CoolingResult {
   /** Window solar + conduction at the peak hour by facade, Btu/h. */
   windowsByFacadeBtuh: { front: number; left: number; back: number; right: number };
   /**
-   * Total sensible load for solar hours 1–24 (index 0 = hour 1), Btu/h; empty for a procedure
-   * that gives the peak only (the residential load-factor procedure).
+   * Total sensible load at the fixed set point for solar hours 1–24 (index 0 = hour 1), Btu/h,
+   * before the temperature-swing credit; empty for a procedure that gives the peak only (the
+   * residential load-factor procedure).
    */
   hourlySensibleBtuh: number[];
   hourlyOutdoorF: number[];

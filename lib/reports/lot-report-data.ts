@@ -186,13 +186,14 @@ export const HEATING_COMPONENT_LABELS: Record<CoolingSensibleComponent, string> 
   vaultedCeilings: "Vaulted ceilings",
   skylights: "Skylights",
   floors: "Framed floors",
-  slab: "Slab edge",
+  slab: "Slab",
   foundationWalls: "Foundation walls",
   garageWall: "Wall and door to the garage",
   infiltration: "Infiltration",
   ventilation: "Ventilation",
   ducts: "Ducts",
   internal: "People and appliances",
+  temperatureSwing: "Indoor swing credit",
 };
 
 const COMPASS_8 = ["N", "NE", "E", "SE", "S", "SW", "W", "NW"] as const;

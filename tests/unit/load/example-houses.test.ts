@@ -1,8 +1,10 @@
 /**
  * The invented example houses (tests/fixtures/engine/example-plans.ts) at the four facings.
- * Bounds are broad plausibility checks from common practice for new, code-level houses in a
- * warm-humid climate (not exact expected values): 600–1,400 ft² per ton, SHR 0.7–0.9, heating
- * 10–30 Btu/h per ft² at a 24 °F design.
+ * Bounds are broad plausibility checks for new, code-level houses in a warm-humid climate (not
+ * exact expected values): 600–2,000 ft² per ton (the upper end: HoF 2021 ch. 17's own example
+ * house, 195.3 m² = 2,102 ft² with 4,096 W sensible + 752 W latent = 1.38 tons, is about 1,520 ft²
+ * per ton; the lower end, common practice for the old rule of thumb), SHR 0.7–0.9 (common
+ * practice), heating 10–30 Btu/h per ft² at a 24 °F design (common practice).
  */
 import { describe, expect, it } from "vitest";
 import { computePlanFacings } from "../../../lib/load";
@@ -13,7 +15,7 @@ describe.each(EXAMPLE_PLANS.map((p) => [p.name ?? "plan", p] as const))("example
   it("gives plausible loads at every facing (common practice bounds)", () => {
     for (const f of result.facings) {
       expect(f.cooling.floorAreaPerTonFt2).toBeGreaterThan(600);
-      expect(f.cooling.floorAreaPerTonFt2).toBeLessThan(1400);
+      expect(f.cooling.floorAreaPerTonFt2).toBeLessThan(2000);
       expect(f.cooling.sensibleHeatRatio).toBeGreaterThan(0.7);
       expect(f.cooling.sensibleHeatRatio).toBeLessThan(0.9);
       const heatPerFt2 = f.heating.totalBtuh / plan.conditionedFloorAreaFt2;

@@ -54,11 +54,13 @@ describe("load engine properties", () => {
       const latSum = COOLING_LATENT_COMPONENTS.reduce((s, c) => s + r.cooling.latentByComponent[c], 0);
       expect(rel(latSum, r.cooling.latentBtuh)).toBeLessThan(1e-12);
       expect(r.cooling.totalBtuh).toBeCloseTo(r.cooling.sensibleBtuh + r.cooling.latentBtuh, 6);
-      // The governing hour is the peak of the 24-hour sensible profile, and the profile's value there is the sensible load.
+      // The governing hour is the peak of the 24-hour fixed-set-point profile; the sensible load there is
+      // lower by the temperature-swing credit (and the duct gain on it), never higher.
       const profile = r.cooling.hourlySensibleBtuh;
       expect(profile).toHaveLength(24);
-      expect(Math.max(...profile)).toBeCloseTo(r.cooling.sensibleBtuh, 6);
-      expect(profile[(r.cooling.peakHour ?? 0) - 1]).toBeCloseTo(r.cooling.sensibleBtuh, 6);
+      expect(profile[(r.cooling.peakHour ?? 0) - 1]).toBeCloseTo(Math.max(...profile), 6);
+      expect(r.cooling.sensibleByComponent.temperatureSwing).toBeLessThanOrEqual(0);
+      expect(r.cooling.sensibleBtuh).toBeLessThanOrEqual(Math.max(...profile) + 1e-6);
     }
   });
 
