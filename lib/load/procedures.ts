@@ -7,11 +7,14 @@ import { hourlyCoolingDay } from "./cooling-day";
 import { LoadInputError } from "./errors";
 import { parsePlanInput, parseSiteConditions, type PlanInput, type SiteConditions } from "./input";
 import { preparePlan, type PreparedPlan } from "./prepare-plan";
-import { DESIGN_ESTIMATE_CAUTION, FACING_LABELS, type FacingLoads, type LoadProcedure, type PlanFacings } from "./results";
+import { DEFAULT_LOAD_PROCEDURE, DESIGN_ESTIMATE_CAUTION, FACING_LABELS, LOAD_PROCEDURES, type FacingLoads, type LoadProcedure, type PlanFacings } from "./results";
 import { prepareSite } from "./site";
 import { CM2_PER_IN2 } from "./units";
+import { computeResidentialLoadFactorFacing } from "./residential-load-factor/from-plan";
+import { ENGINE_VERSION } from "./version";
 
-export const ENGINE_VERSION = "0.2.0"; // 0.2.0: engine split; no duct latent gain without a published source; direct U-factor and leakage-area inputs
+export { ENGINE_VERSION };
+
 
 export interface ComputeOptions {
   /**
@@ -35,11 +38,17 @@ function validate(plan: unknown, site: unknown, options: ComputeOptions | undefi
 }
 
 function procedureOf(options: ComputeOptions | undefined): LoadProcedure {
-  const procedure = options?.procedure ?? "hourly";
-  if (procedure !== "hourly") {
-    throw new LoadInputError("procedure", `the ${procedure} procedure is not available in engine ${ENGINE_VERSION}`);
+  const procedure = options?.procedure ?? DEFAULT_LOAD_PROCEDURE;
+  if (!LOAD_PROCEDURES.includes(procedure)) {
+    throw new LoadInputError("procedure", `unknown procedure ${JSON.stringify(procedure)}; choose one of ${LOAD_PROCEDURES.join(", ")}`);
   }
   return procedure;
+}
+
+/** The handbook's residential load-factor procedure for one facing, in the engine's result shape. */
+function loadFactorResult(plan: PlanInput, site: SiteConditions, facingAzimuthDeg: number): FacingLoads {
+  const { rlf: _rows, applicability: _findings, house: _house, ...loads } = computeResidentialLoadFactorFacing(plan, site, facingAzimuthDeg);
+  return loads;
 }
 
 function facingResult(p: PreparedPlan, facingAzimuthDeg: number, procedure: LoadProcedure): FacingLoads {
@@ -78,6 +87,7 @@ export function computeFacingLoads(plan: unknown, site: unknown, facingAzimuthDe
   }
   const procedure = procedureOf(options);
   const valid = validate(plan, site, options);
+  if (procedure === "residential-load-factor") return loadFactorResult(valid.plan, valid.site, facingAzimuthDeg);
   return facingResult(preparePlan(valid.plan, prepareSite(valid.site)), facingAzimuthDeg, procedure);
 }
 
@@ -85,8 +95,11 @@ export function computeFacingLoads(plan: unknown, site: unknown, facingAzimuthDe
 export function computePlanFacings(plan: unknown, site: unknown, options?: ComputeOptions): PlanFacings {
   const procedure = procedureOf(options);
   const valid = validate(plan, site, options);
-  const prepared = preparePlan(valid.plan, prepareSite(valid.site));
-  const facings = FACING_LABELS.map((label, i) => ({ ...facingResult(prepared, i * 90, procedure), label }));
+  const facingAt =
+    procedure === "residential-load-factor"
+      ? (az: number) => loadFactorResult(valid.plan, valid.site, az)
+      : ((prepared) => (az: number) => facingResult(prepared, az, procedure))(preparePlan(valid.plan, prepareSite(valid.site)));
+  const facings = FACING_LABELS.map((label, i) => ({ ...facingAt(i * 90), label }));
   let worst = facings[0];
   let min = facings[0].cooling.totalBtuh;
   for (const f of facings) {

@@ -18,7 +18,7 @@ import {
   slabFFactor,
   wallU,
 } from "../assemblies";
-import { ENGINE_VERSION } from "../index";
+import { ENGINE_VERSION } from "../version";
 import { LoadInputError } from "../errors";
 import { internalGains, occupantsOf } from "../internal-gains";
 import { FACADES, type DuctLocation, type Facade, type PlanInput, type SiteConditions, type WindowGroup } from "../input";
@@ -599,9 +599,8 @@ export function computeResidentialLoadFactorFacing(
 
   const notes = [
     ...r.notes,
-    "RLF method: a peak load only. No 24-hour profile is produced (cooling.hourlySensibleBtuh and hourlyOutdoorF are empty) " +
-      "and no peak hour is determined (cooling.peakHour is null); there is no attic temperature in cooling (atticF null). " +
-      "The 1.7 K temperature swing of ch. 17 Table 1 is built into the load factors, so temperatureSwing is 0.",
+    "Handbook residential load-factor procedure: a peak load only, with no 24-hour profile, peak hour or cooling attic " +
+      "temperature. The 1.7 K indoor temperature swing of HoF 2021 ch. 17 Table 1 is built into its load factors.",
     `Supply airflow from the sensible load at a ${plan.coolingSupplyDeltaF} °F supply-air temperature difference.`,
   ];
   for (const f of applicability) {

@@ -97,7 +97,7 @@ describe("between and beyond the printed columns (our interpolation)", () => {
 
 describe("duct loads in the engine (eq. 19 on the building load)", () => {
   const attic = (ducts: Record<string, unknown>, extra: Partial<PlanInputRaw> = {}) =>
-    computeFacingLoads(symmetricPlan({ ...extra, ducts: { location: "vented-attic", ...ducts } }), SEA_LEVEL_SITE, 0);
+    computeFacingLoads(symmetricPlan({ ...extra, ducts: { location: "vented-attic", ...ducts } }), SEA_LEVEL_SITE, 0, { procedure: "hourly" });
 
   it("cooling: the duct gain at the peak hour is F_dl × the rest of the sensible load (1 story 0.27, 2 stories 0.25)", () => {
     for (const [stories, f] of [
@@ -122,7 +122,7 @@ describe("duct loads in the engine (eq. 19 on the building load)", () => {
       foundation: { kind: "vented-crawlspace", floor: { baseId: "floor-joists-2x10-16in-oc", cavityR: 19 }, floorAreaFt2: 1600 },
       ducts: { location: "vented-crawlspace", insulationR: 8 },
     });
-    const r = computeFacingLoads(plan, SEA_LEVEL_SITE, 0);
+    const r = computeFacingLoads(plan, SEA_LEVEL_SITE, 0, { procedure: "hourly" });
     expect(r.cooling.sensibleByComponent.ducts).toBeCloseTo(0.05 * (r.cooling.sensibleBtuh - r.cooling.sensibleByComponent.ducts), 6);
     expect(r.heating.byComponent.ducts).toBeCloseTo(0.13 * (r.heating.totalBtuh - r.heating.byComponent.ducts), 6);
   });
@@ -130,7 +130,7 @@ describe("duct loads in the engine (eq. 19 on the building load)", () => {
   it("the result says which duct method was used", () => {
     expect(attic({}).notes.join(" ")).toMatch(/Table 6 duct loss\/gain factors/);
     expect(attic({ method: "conduction-leakage" }).notes.join(" ")).toMatch(/conduction-and-leakage model/);
-    const birch = computeFacingLoads(BIRCH_2, CEDAR_BEND_SITE, 0);
+    const birch = computeFacingLoads(BIRCH_2, CEDAR_BEND_SITE, 0, { procedure: "hourly" });
     expect(birch.notes.join(" ")).toMatch(/encapsulated-attic: the handbook duct-factor table has no such location/);
   });
 
@@ -155,7 +155,7 @@ describe("against what the trade expects (common practice)", () => {
   // Common practice: ducts in a vented attic add roughly 10–30 % to the sensible cooling load of a
   // current-code house, less in an encapsulated attic, about nothing in conditioned space.
   it("vented attic, R-8, 5 %/5 %: the one-story example adds 10–30 % to sensible cooling at every facing", () => {
-    for (const f of computePlanFacings(ASPEN_1, CEDAR_BEND_SITE).facings) {
+    for (const f of computePlanFacings(ASPEN_1, CEDAR_BEND_SITE, { procedure: "hourly" }).facings) {
       const ducts = f.cooling.sensibleByComponent.ducts;
       const share = ducts / (f.cooling.sensibleBtuh - ducts);
       expect(share).toBeGreaterThanOrEqual(0.1);
@@ -164,11 +164,11 @@ describe("against what the trade expects (common practice)", () => {
   });
 
   it("encapsulated attic adds less than a vented attic; conditioned space adds nothing", () => {
-    for (const f of computePlanFacings(BIRCH_2, CEDAR_BEND_SITE).facings) {
+    for (const f of computePlanFacings(BIRCH_2, CEDAR_BEND_SITE, { procedure: "hourly" }).facings) {
       const ducts = f.cooling.sensibleByComponent.ducts;
       expect(ducts / (f.cooling.sensibleBtuh - ducts)).toBeLessThan(0.1);
     }
-    const inside = computeFacingLoads({ ...ASPEN_1, ducts: { location: "conditioned-space" } }, CEDAR_BEND_SITE, 0);
+    const inside = computeFacingLoads({ ...ASPEN_1, ducts: { location: "conditioned-space" } }, CEDAR_BEND_SITE, 0, { procedure: "hourly" });
     expect(inside.cooling.sensibleByComponent.ducts).toBe(0);
     expect(inside.heating.byComponent.ducts).toBe(0);
   });

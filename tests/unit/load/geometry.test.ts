@@ -37,10 +37,10 @@ describe("overhang shading geometry", () => {
   });
   it("an overhang lowers the window's solar gain on a south facade", () => {
     // ASPEN_1 has 1.5 ft overhangs; at July noon at 33.5° N that shades a south window fully.
-    const shaded = computeFacingLoads(ASPEN_1, CEDAR_BEND_SITE, 180);
+    const shaded = computeFacingLoads(ASPEN_1, CEDAR_BEND_SITE, 180, { procedure: "hourly" });
     const plan = structuredClone(ASPEN_1) as typeof ASPEN_1 & { facades: { front: { window: { overhangDepthFt: number } } } };
     plan.facades.front.window.overhangDepthFt = 0;
-    const bare = computeFacingLoads(plan, CEDAR_BEND_SITE, 180);
+    const bare = computeFacingLoads(plan, CEDAR_BEND_SITE, 180, { procedure: "hourly" });
     // Solar noon (hour 12), when the sun is square to the south facade.
     expect(shaded.cooling.hourlySensibleBtuh[11]).toBeLessThan(bare.cooling.hourlySensibleBtuh[11] - 300);
     expect(shaded.heating.totalBtuh).toBe(bare.heating.totalBtuh);
@@ -62,6 +62,6 @@ describe("SHGC angular curve", () => {
 
 describe("orientation", () => {
   it("facade azimuths: front = θ, left = θ + 90, back = θ + 180, right = θ + 270", () => {
-    expect(computeFacingLoads(ASPEN_1, CEDAR_BEND_SITE, 300).facadeAzimuthsDeg).toEqual({ front: 300, left: 30, back: 120, right: 210 });
+    expect(computeFacingLoads(ASPEN_1, CEDAR_BEND_SITE, 300, { procedure: "hourly" }).facadeAzimuthsDeg).toEqual({ front: 300, left: 30, back: 120, right: 210 });
   });
 });

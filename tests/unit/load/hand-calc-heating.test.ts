@@ -88,7 +88,7 @@ describe("hand calculation: box house heating load", () => {
   });
 
   it("the engine agrees with the hand calculation, component by component (±0.5 %)", () => {
-    const result = computeFacingLoads(box, site, 0).heating;
+    const result = computeFacingLoads(box, site, 0, { procedure: "hourly" }).heating;
     const c = result.byComponent;
     const near = (actual: number, expected: number) => expect(Math.abs(actual - expected)).toBeLessThanOrEqual(0.005 * expected);
     near(c.walls, walls);
@@ -106,7 +106,7 @@ describe("hand calculation: box house heating load", () => {
     // Table 6, attic, 1 story, 5 %/5 % leakage, R-8 (R-1.4 m²·K/W), heating with a furnace: F_dl = 0.13.
     const ducts = 0.13 * total; //                               ≈ 0.13 × 23,718 ≈ 3083 Btu/h
     const attic = { ...box, ducts: { location: "vented-attic", insulationR: 8, supplyLeakagePct: 5, returnLeakagePct: 5 } };
-    const result = computeFacingLoads(attic, site, 0).heating;
+    const result = computeFacingLoads(attic, site, 0, { procedure: "hourly" }).heating;
     expect(Math.abs(result.byComponent.ducts - ducts)).toBeLessThanOrEqual(0.005 * ducts);
     expect(Math.abs(result.totalBtuh - (total + ducts))).toBeLessThanOrEqual(0.005 * (total + ducts));
   });

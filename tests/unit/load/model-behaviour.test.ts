@@ -3,7 +3,7 @@ import { describe, expect, it } from "vitest";
 import { computeFacingLoads, type PlanInputRaw } from "../../../lib/load";
 import { SEA_LEVEL_SITE, symmetricPlan } from "./helpers";
 
-const at = (plan: PlanInputRaw, site = SEA_LEVEL_SITE, az = 0) => computeFacingLoads(plan, site, az);
+const at = (plan: PlanInputRaw, site = SEA_LEVEL_SITE, az = 0) => computeFacingLoads(plan, site, az, { procedure: "hourly" });
 
 describe("model behaviour", () => {
   it("ducts in conditioned space add nothing; ducts in a vented attic add sensible load to both seasons", () => {
