@@ -204,9 +204,9 @@ export function planAssemblies(plan: PlanInput): AssemblyUse[] {
     rows.push(unused("Foundation wall", "foundation_wall_u", direct, U_FACTOR_UNIT, reason));
   }
 
-  // Slab edge: an F-factor per ft of exposed perimeter, heating only in the engine today.
+  // Slab edge: an F-factor per ft of exposed perimeter, for heating (the slab's cooling credit goes by its area and covering).
   if (f.slabPerimeterFt > 0) {
-    const edge = f.slabEdgeInsulationR > 0 ? `edge R-${f.slabEdgeInsulationR} to ${f.slabEdgeInsulationDepthFt} ft` : "uninsulated edge";
+    const edge = `${f.slabEdgeInsulationR > 0 ? `edge R-${f.slabEdgeInsulationR}` : "uninsulated edge"} over ${f.slabEdgeConstruction}`;
     rows.push({
       name: "Slab edge",
       appliesTo: `${f.slabPerimeterFt} ft of perimeter`,
@@ -214,7 +214,7 @@ export function planAssemblies(plan: PlanInput): AssemblyUse[] {
       source: f.slabFFactor !== undefined ? "direct" : "assembly",
       description: f.slabFFactor !== undefined ? "direct F-factor" : edge,
       unit: F_FACTOR_UNIT,
-      heating: f.slabFFactor ?? slabFFactor(f.slabEdgeInsulationR, f.slabEdgeInsulationDepthFt),
+      heating: f.slabFFactor ?? slabFFactor(f.slabEdgeInsulationR, f.slabEdgeConstruction),
       cooling: null,
     });
   } else if (f.slabFFactor !== undefined) {
