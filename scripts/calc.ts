@@ -10,8 +10,11 @@
  * --site (JSON of the engine's site conditions) and/or the flags (flags override the file).
  *
  * Prints, for every plan and facing (front to N, E, S, W), the heating load, cooling sensible,
- * latent and total, tons and ft² per ton, the worst facing and the spread, the engine version
- * and the caution line. --json prints the full results instead.
+ * latent and total, tons and ft² per ton, the worst facing and the spread; per plan the air
+ * leakage as given and the heating U-factor of each assembly with where it came from (entered
+ * directly or computed from the base assembly and added insulation); the engine version and the
+ * caution line. --json prints the full results instead. A JSON plan may carry a `planCode`
+ * beside the engine's fields (the engine's input is strict, so it is taken off first).
  *
  * Exit codes: 0 done; 2 bad input (every bad cell listed: row, column, reason); 1 unexpected failure.
  */
@@ -21,6 +24,7 @@ import { LoadInputError } from "../lib/load/errors";
 import { computePlanFacings, ENGINE_VERSION } from "../lib/load/index";
 import { safeParsePlanInput, safeParseSiteConditions, type PlanInput, type SiteConditions } from "../lib/load/input";
 import { formatTableErrors } from "../lib/workbook/columns";
+import { airLeakageText, planAssemblies } from "../lib/workbook/plan-assemblies";
 import { columnForEnginePath, validatePlanTable } from "../lib/workbook/plan-columns";
 import { readTableFile, TableFileError } from "../lib/workbook/table-io";
 import { readQuantity } from "../lib/workbook/units";
@@ -164,13 +168,15 @@ async function loadPlans(filePath: string): Promise<NamedPlan[]> {
     const problems: string[] = [];
     const plans: NamedPlan[] = [];
     list.forEach((item, index) => {
-      const parsed = safeParsePlanInput(item);
+      // planCode is this command's own label beside the engine's (strict) plan input.
+      const { planCode, ...planFields } = typeof item === "object" && item !== null && !Array.isArray(item) ? (item as Record<string, unknown>) : { planCode: undefined };
+      const parsed = safeParsePlanInput(typeof item === "object" && item !== null && !Array.isArray(item) ? planFields : item);
       const label = `plan ${index + 1}`;
       if (!parsed.ok) {
         for (const issue of parsed.issues) problems.push(`${label}, field ${issue.field}: ${issue.message}`);
         return;
       }
-      const code = typeof (item as { planCode?: unknown }).planCode === "string" ? String((item as { planCode: string }).planCode) : `plan-${index + 1}`;
+      const code = typeof planCode === "string" ? planCode : `plan-${index + 1}`;
       plans.push({ planCode: code, planName: parsed.value.name ?? code, input: parsed.value, source: label });
     });
     if (problems.length > 0) throw new InputProblem(`${filePath}: ${problems.length} bad field(s); nothing was calculated\n${problems.join("\n")}`);
@@ -240,6 +246,13 @@ function printTable(plans: readonly NamedPlan[], results: readonly ReturnType<ty
       `  Worst facing: front ${result.worst.label} (cooling total ${integer.format(result.worst.coolingTotalBtuh)} Btu/h); ` +
         `spread between facings ${integer.format(result.coolingSpreadBtuh)} Btu/h (${oneDecimal.format(spreadPct)} % of the worst)`,
     );
+    // Where each U-factor came from: entered directly or computed from the base assembly and added R.
+    out.push(`  Air leakage: ${airLeakageText(input)}`);
+    const assemblies = planAssemblies(input).map((a) => {
+      const from = a.source === "direct" ? a.description : `from ${a.description}`;
+      return `${a.name} ${a.heating.toFixed(3)} (${from}${a.notUsed ? `; entered but not used: ${a.notUsed}` : ""})`;
+    });
+    out.push(`  Heating U-factors used (Btu/h·ft²·°F; slab edge F-factor, Btu/h·ft·°F): ${assemblies.join("; ")}`);
     // The engine's notes on assumed defaults, once per plan.
     const assumptions = [...new Set(result.facings.flatMap((facing) => facing.notes))];
     for (const note of assumptions) out.push(`  Assumed: ${note}`);

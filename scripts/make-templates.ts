@@ -17,6 +17,9 @@ import { renderTemplatesReadme } from "../lib/workbook/templates-readme";
 
 const templatesDir = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "..", "templates");
 
+/** Every XLSX is stamped with this time, so regenerating unchanged templates changes no byte. */
+const TEMPLATE_TIMESTAMP = new Date(Date.UTC(2026, 0, 1));
+
 function toCells(rows: readonly ExampleRow[]): string[][] {
   for (const row of rows) {
     for (const key of Object.keys(row)) {
@@ -42,6 +45,7 @@ async function main(): Promise<void> {
   const templateXlsx = await writeXlsx(PLAN_HEADERS, templateRows, {
     sheetName: "Plan library",
     columnWidths: PLAN_COLUMNS.map((column) => Math.min(36, Math.max(12, column.header.length * 0.9))),
+    fixedTimestamp: TEMPLATE_TIMESTAMP,
   });
 
   await mkdir(templatesDir, { recursive: true });
@@ -52,7 +56,7 @@ async function main(): Promise<void> {
     ["example-site.json", `${JSON.stringify(EXAMPLE_SITE, null, 2)}\n`],
     ["README.md", renderTemplatesReadme()],
     // The equipment catalog's template, example and column guide (lib/workbook/equipment-columns.ts).
-    ...(await equipmentTemplateFiles()).map(({ name, content }): [string, string | Uint8Array] => [name, content]),
+    ...(await equipmentTemplateFiles({ fixedTimestamp: TEMPLATE_TIMESTAMP })).map(({ name, content }): [string, string | Uint8Array] => [name, content]),
   ];
   for (const [name, content] of files) {
     await writeFile(path.join(templatesDir, name), content);

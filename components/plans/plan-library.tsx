@@ -13,7 +13,7 @@ import type { FacingSummary } from "@/db/queries/plans";
 import { api, ApiError } from "@/lib/client/api";
 import { isFormula } from "@/lib/workbook/formula";
 import { readRowCells } from "@/lib/workbook/columns";
-import { PLAN_COLUMN_BY_KEY, PLAN_COLUMN_GROUPS, PLAN_COLUMNS, type PlanColumnDef } from "@/lib/workbook/plan-columns";
+import { AIR_LEAKAGE_KEYS, PLAN_COLUMN_BY_KEY, PLAN_COLUMN_GROUPS, PLAN_COLUMNS, withOneAirLeakageFigure, type PlanColumnDef } from "@/lib/workbook/plan-columns";
 import { parsePastedBlock, placePastedBlock } from "@/lib/workbook/table-io";
 import { PlanImportPanel } from "./plan-import-panel";
 
@@ -152,7 +152,7 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
     const entered = (c: PlanColumnDef): ColDef<LibraryPlan> => ({
       colId: c.key,
       headerName: c.header,
-      headerTooltip: `${c.meaning} Formula name: ${c.key}`,
+      headerTooltip: `${c.meaning}${(AIR_LEAKAGE_KEYS as readonly string[]).includes(c.key) ? " Entering a figure here clears the row's other air-leakage column." : ""} Formula name: ${c.key}`,
       width: c.value.type === "enum" ? 170 : c.key === "plan_name" ? 130 : 118,
       editable: canEdit,
       pinned: c.key === "plan_code" ? "left" : undefined,
@@ -168,7 +168,7 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
         if (!p.data) return false;
         const next = text(p.newValue);
         if (next === text(p.oldValue)) return false;
-        saveCells([{ planId: p.data.id, version: p.data.version, cells: { [c.key]: next } }], "edit");
+        saveCells([{ planId: p.data.id, version: p.data.version, cells: withOneAirLeakageFigure(p.data.cells, { [c.key]: next }) }], "edit");
         return false;
       },
       cellEditor: c.value.type === "enum" ? "agSelectCellEditor" : "agTextCellEditor",
@@ -321,10 +321,14 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
         setBanner({ kind: "error", text: `Nothing pasted: all ${skipped} cells fall outside the editable grid.` });
         return;
       }
-      saveCells([...byPlan.values()], "paste");
+      const pasted = [...byPlan.values()].map((change) => {
+        const plan = library.data?.plans.find((p) => p.id === change.planId);
+        return plan ? { ...change, cells: withOneAirLeakageFigure(plan.cells, change.cells) } : change;
+      });
+      saveCells(pasted, "paste");
       if (skipped > 0) setBanner({ kind: "info", text: `${skipped} pasted cell(s) fell outside the editable grid and were left out.` });
     },
-    [canEdit, saveCells],
+    [canEdit, saveCells, library.data],
   );
 
   const applyBulk = () => {
@@ -333,7 +337,7 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
       setBanner({ kind: "error", text: "Select the plan models to change first (tick their boxes)." });
       return;
     }
-    saveCells(plans.map((p) => ({ planId: p.id, version: p.version, cells: { [bulkKey]: bulkValue } })), "bulk_edit");
+    saveCells(plans.map((p) => ({ planId: p.id, version: p.version, cells: withOneAirLeakageFigure(p.cells, { [bulkKey]: bulkValue }) })), "bulk_edit");
   };
 
   if (library.isPending) return <p className="text-zinc-500">Loading the plan library…</p>;

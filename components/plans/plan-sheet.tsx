@@ -12,6 +12,7 @@ import type { PlanFacings } from "@/lib/load/results";
 import { readRowCells } from "@/lib/workbook/columns";
 import { isFormula } from "@/lib/workbook/formula";
 import { PLAN_COLUMN_BY_KEY, PLAN_COLUMN_GROUPS, PLAN_COLUMNS } from "@/lib/workbook/plan-columns";
+import { PlanAssemblies } from "./plan-assemblies";
 
 interface Sheet {
   plan: { id: number; planCode: string; name: string; version: number; updatedAt: string };
@@ -192,6 +193,7 @@ export function PlanSheet({ planId, canEdit, canApprove, memberName, initialComm
       ) : null}
 
       <InputsSection cells={s.current.cells} />
+      <PlanAssemblies cells={s.current.cells} />
 
       <div className="grid gap-4 lg:grid-cols-2">
         <section className="rounded border border-zinc-200 bg-white p-3" aria-labelledby="revisions-heading">
@@ -290,7 +292,7 @@ function InputsSection({ cells }: { cells: Record<string, string | number | bool
       <h2 id="inputs-heading" className="mb-2 text-sm font-semibold">
         Envelope and inputs
       </h2>
-      <p className="mb-2 text-xs text-zinc-500">Insulation values are the R-values added to the base assembly, as they are to be installed. Grey values are defaults.</p>
+      <p className="mb-2 text-xs text-zinc-500">Insulation values are the R-values added to the base assembly, as they are to be installed; a direct U-factor replaces both (see the assemblies below). Grey values are defaults.</p>
       <div className="grid gap-x-6 gap-y-3 md:grid-cols-2 xl:grid-cols-4">
         {PLAN_COLUMN_GROUPS.map((group) => (
           <div key={group}>

@@ -643,7 +643,7 @@ export function renderEquipmentTemplatesDoc(): string {
  * same header and example row as the CSV template.
  * @throws Error naming the row, column and reason when an example row does not validate.
  */
-export async function equipmentTemplateFiles(): Promise<{ name: string; content: string | Uint8Array }[]> {
+export async function equipmentTemplateFiles(options: { fixedTimestamp?: Date } = {}): Promise<{ name: string; content: string | Uint8Array }[]> {
   const templateCells = equipmentExampleCells([EQUIPMENT_TEMPLATE_ROW]);
   const templateCsv = writeCsv(EQUIPMENT_HEADERS, templateCells);
   const exampleCsv = writeCsv(EQUIPMENT_HEADERS, equipmentExampleCells(EXAMPLE_EQUIPMENT_ROWS));
@@ -654,6 +654,7 @@ export async function equipmentTemplateFiles(): Promise<{ name: string; content:
   const templateXlsx = await writeXlsx(EQUIPMENT_HEADERS, templateCells, {
     sheetName: "Equipment catalog",
     columnWidths: EQUIPMENT_COLUMNS.map((column) => Math.min(36, Math.max(12, column.header.length * 0.9))),
+    fixedTimestamp: options.fixedTimestamp,
   });
   return [
     { name: "equipment-catalog-template.csv", content: `${templateCsv}\r\n` },

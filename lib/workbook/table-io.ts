@@ -6,6 +6,7 @@
  * headers to a column list (plan library now; lots and equipment catalog later).
  */
 import ExcelJS from "exceljs";
+import JSZip from "jszip";
 import Papa from "papaparse";
 import type { RawTable } from "./columns";
 
@@ -150,10 +151,22 @@ export function writeCsv(headers: readonly string[], rows: readonly (readonly Ou
 export async function writeXlsx(
   headers: readonly string[],
   rows: readonly (readonly OutputCell[])[],
-  options: { sheetName?: string; columnWidths?: readonly number[] } = {},
+  options: {
+    sheetName?: string;
+    columnWidths?: readonly number[];
+    /**
+     * Stamp the workbook and every part of its zip with this time instead of now, so that the same
+     * table gives the same bytes (templates/ is regenerated and committed: no churn in git).
+     */
+    fixedTimestamp?: Date;
+  } = {},
 ): Promise<Uint8Array> {
   const workbook = new ExcelJS.Workbook();
   workbook.creator = "Platload";
+  if (options.fixedTimestamp) {
+    workbook.created = options.fixedTimestamp;
+    workbook.modified = options.fixedTimestamp;
+  }
   const sheet = workbook.addWorksheet(options.sheetName ?? "Sheet1", { views: [{ state: "frozen", ySplit: 1 }] });
   const header = sheet.addRow([...headers]);
   header.font = { bold: true };
@@ -169,7 +182,15 @@ export async function writeXlsx(
     sheet.getColumn(index + 1).width = options.columnWidths?.[index] ?? Math.min(40, Math.max(10, text.length + 2));
   });
   const buffer = await workbook.xlsx.writeBuffer();
-  return new Uint8Array(buffer as ArrayBuffer);
+  if (!options.fixedTimestamp) return new Uint8Array(buffer as ArrayBuffer);
+  // exceljs dates each zip entry with the current time; rewrite the entries with the fixed one.
+  const zip = await JSZip.loadAsync(buffer as ArrayBuffer);
+  const stamped = new JSZip();
+  const names = Object.keys(zip.files).filter((name) => !zip.files[name].dir);
+  for (const name of names) {
+    stamped.file(name, await zip.files[name].async("uint8array"), { date: options.fixedTimestamp, createFolders: false });
+  }
+  return stamped.generateAsync({ type: "uint8array", compression: "DEFLATE" });
 }
 
 /**

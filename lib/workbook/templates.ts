@@ -7,7 +7,8 @@
  * Envelopes are plausible for a current-code house in a mixed-humid climate (IECC climate
  * zone 3: R-49 ceilings, R-20 or R-13 + R-5 walls, U-0.30 / SHGC 0.25 windows, 3–5 ACH50 —
  * IECC 2021 prescriptive levels, from memory). Cells are written the way a builder types
- * them ("1,480 sf", "R-49", "0.30 U") so the examples exercise the unit reader.
+ * them ("1,480 sf", "R-49", "0.30 U") so the examples exercise the unit reader. Two plans carry
+ * a second window group (a patio door under a covered patio), one gives its air leakage in CFM50.
  */
 import type { SiteConditionsRaw } from "../load/input";
 
@@ -36,6 +37,10 @@ export const TEMPLATE_EXAMPLE_ROW: ExampleRow = {
   back_wall_ft2: "360",
   back_window_ft2: "80",
   back_overhang_depth_ft: "1.5",
+  // A second window group: a sliding door under a covered patio (taller glass, deep overhang).
+  back_window2_ft2: "40",
+  back_window2_height_ft: "6'8\"",
+  back_window2_overhang_depth_ft: "10'",
   right_wall_ft2: "342",
   right_window_ft2: "30",
   attic_kind: "vented",
@@ -110,7 +115,14 @@ export const EXAMPLE_PLAN_ROWS: readonly ExampleRow[] = [
     back_wall_ft2: "450",
     back_window_ft2: "95",
     back_overhang_depth_ft: "1.5'",
-    back_door_ft2: "20",
+    // Second group: a 12 ft sliding door under the covered patio.
+    back_window2_ft2: "54",
+    back_window2_u: "0.32 U",
+    back_window2_shgc: "0.28",
+    back_window2_height_ft: "6'8\"",
+    back_window2_overhang_depth_ft: "10'",
+    back_window2_overhang_above_head_ft: "1'4\"",
+    back_door_ft2: "0",
     right_wall_ft2: "378",
     right_window_ft2: "40",
     attic_kind: "vented",
@@ -119,7 +131,8 @@ export const EXAMPLE_PLAN_ROWS: readonly ExampleRow[] = [
     slab_perimeter_ft: "162",
     garage_wall_ft2: "198",
     garage_door_ft2: "20",
-    blower_door_ach50: "3.5",
+    // Tested as a blower-door flow rather than air changes.
+    blower_door_cfm50: "980 CFM50",
     duct_location: "vented-attic",
     duct_r: "R-8",
     duct_supply_leakage_pct: "4%",
@@ -228,6 +241,7 @@ export const EXAMPLE_PLAN_ROWS: readonly ExampleRow[] = [
     ceiling_cavity_r: "R-49",
     foundation_kind: "slab-on-grade",
     slab_perimeter_ft: "146",
+    slab_floor_covering: "tile",
     garage_wall_ft2: "240",
     garage_door_ft2: "20",
     floor_over_garage_ft2: "400",

@@ -22,10 +22,12 @@ export const QUANTITY_KINDS = [
   "lengthFt",
   "rValue",
   "uFactor",
+  "fFactor",
   "shgc",
   "ach50",
   "cfm",
   "cfm50",
+  "leakageAreaIn2",
   "temperatureF",
   "temperatureDifferenceF",
   "count",
@@ -48,10 +50,12 @@ export const QUANTITY_KIND_INFO: Record<
   lengthFt: { label: "length", unit: "ft", allowsThousands: true },
   rValue: { label: "R-value", unit: "h·ft²·°F/Btu", allowsThousands: false, minimum: 0 },
   uFactor: { label: "U-factor", unit: "Btu/h·ft²·°F", allowsThousands: false, minimum: 0 },
+  fFactor: { label: "slab-edge F-factor", unit: "Btu/h·ft·°F", allowsThousands: false, minimum: 0 },
   shgc: { label: "SHGC", unit: "0–1", allowsThousands: false, minimum: 0, maximum: 1 },
   ach50: { label: "air changes per hour at 50 Pa", unit: "ACH50", allowsThousands: false, minimum: 0 },
   cfm: { label: "airflow", unit: "cfm", allowsThousands: true, minimum: 0 },
   cfm50: { label: "blower-door airflow at 50 Pa", unit: "CFM50", allowsThousands: true, minimum: 0 },
+  leakageAreaIn2: { label: "effective leakage area", unit: "in²", allowsThousands: true, minimum: 0 },
   temperatureF: { label: "temperature", unit: "°F", allowsThousands: false },
   temperatureDifferenceF: { label: "temperature difference", unit: "°F", allowsThousands: false },
   count: { label: "count", unit: "count", allowsThousands: true, minimum: 0, integer: true },
@@ -88,10 +92,14 @@ const UNIT_TOKENS: readonly UnitToken[] = [
   { name: "in", spellings: ['"', "in", "in.", "inch", "inches", "″"], kinds: { lengthFt: 1 / 12 } },
   { name: "R", spellings: ["r", "r-value", "r value", "h·ft²·°f/btu", "h-ft2-f/btu", "hr-ft2-f/btu"], kinds: { rValue: 1 } },
   { name: "U", spellings: ["u", "u-factor", "u factor", "u-value", "btu/h·ft²·°f", "btu/hr-ft2-f", "btu/h-ft2-f"], kinds: { uFactor: 1 } },
+  // "F" alone is read as the F-factor's letter only in an F-factor column (readQuantity); elsewhere it is °F.
+  { name: "F-factor", spellings: ["f-factor", "f factor", "btu/h·ft·°f", "btu/hr-ft-f", "btu/h-ft-f", "btu/h·ft·f"], kinds: { fFactor: 1 } },
   { name: "SHGC", spellings: ["shgc"], kinds: { shgc: 1 } },
   { name: "ACH50", spellings: ["ach50", "ach 50", "ach@50", "ach @ 50", "ach@50pa", "ach50 pa"], kinds: { ach50: 1 } },
   { name: "CFM50", spellings: ["cfm50", "cfm 50", "cfm@50", "cfm @ 50", "cfm@50pa"], kinds: { cfm50: 1 } },
   { name: "cfm", spellings: ["cfm", "ft3/min", "ft³/min"], kinds: { cfm: 1 } },
+  // Square inches are read only as a leakage area; ft² is not converted into one (rejected with the reason).
+  { name: "in²", spellings: ["in2", "in^2", "in²", "sq in", "sq. in.", "sq. in", "sqin", "square inches", "square inch", "ela"], kinds: { leakageAreaIn2: 1 } },
   { name: "°F", spellings: ["°f", "f", "deg f", "degf", "º f", "ºf", "° f", "degrees f", "fahrenheit"], kinds: { temperatureF: 1, temperatureDifferenceF: 1 } },
   { name: "%", spellings: ["%", "pct", "percent"], kinds: { percent: 1, fraction: 0.01 } },
   { name: "Btu/h", spellings: ["btu/h", "btuh", "btu/hr", "btu/hour", "btu"], kinds: { btuh: 1 } },
@@ -113,7 +121,7 @@ const METRIC_SPELLINGS: readonly string[] = [
 
 // Prefix forms that read naturally before the number ("R-19", "U-0.30", "SHGC 0.25", "ACH50 3").
 // The hyphen after the letter is a separator, not a minus sign.
-const PREFIX_PATTERN = /^(rsi|shgc|ach50|ach 50|cfm50|r|u)\s*(?:-|=|:|\s)?\s*(.+)$/i;
+const PREFIX_PATTERN = /^(rsi|shgc|ach50|ach 50|cfm50|ela|f-factor|f factor|r|u)\s*(?:-|=|:|\s)?\s*(.+)$/i;
 
 /** Strict decimal number: optional sign, digits with optional comma grouping, optional fraction, optional exponent. */
 const NUMBER_PATTERN = /^([+-]?)((?:\d{1,3}(?:,\d{3})+)|\d+|)(?:\.(\d+))?(?:[eE]([+-]?\d+))?$/;
@@ -205,7 +213,7 @@ export function readQuantity(text: string, kind: QuantityKind): UnitReadResult {
   // Split into number and unit: either "<unit> <number>" (R-19, U-0.30) or "<number> <unit>".
   let numberText = raw;
   let unitText = "";
-  const prefix = PREFIX_PATTERN.exec(raw);
+  const prefix = PREFIX_PATTERN.exec(raw) ?? (kind === "fFactor" ? /^(f)\s*(?:-|=|:|\s)?\s*(.+)$/i.exec(raw) : null);
   if (prefix && /^[+-]?[\d.,]/.test(prefix[2])) {
     unitText = prefix[1];
     numberText = prefix[2].trim();
@@ -216,6 +224,8 @@ export function readQuantity(text: string, kind: QuantityKind): UnitReadResult {
     unitText = suffix[2];
   }
 
+  // In an F-factor column a bare "F" ("F-0.54", "0.54 F") is the F-factor's letter, not °F.
+  if (kind === "fFactor" && unitText.trim().toLowerCase() === "f") unitText = "F-factor";
   let factor = 1;
   if (unitText !== "") {
     const unit = findUnit(unitText);

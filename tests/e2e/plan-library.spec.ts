@@ -22,6 +22,8 @@ async function goToColumn(page: Page, key: string) {
 }
 
 test("a designer imports the template, edits with a formula, bulk-raises insulation, pastes a block; a reviewer approves", async ({ page }, testInfo) => {
+  // A long scenario on a shared machine: room for slow steps, not a measure of speed (that is npm run bench).
+  test.setTimeout(180_000);
   await signInAs(page, "designer@marrowfinch.test");
   await expect(page.getByTestId("plan-grid")).toBeVisible();
 
@@ -82,6 +84,21 @@ test("a designer imports the template, edits with a formula, bulk-raises insulat
   await expect(cell(page, ordered[0].id, "occupants")).toHaveText("6");
   await expect(cell(page, ordered[1].id, "bedrooms")).toHaveText("5");
 
+  // air leakage: typing a CFM50 figure replaces the ACH50 one in the same save; a direct wall U-factor
+  await goToColumn(page, "blower_door_cfm50");
+  await cell(page, aster.id, "blower_door_cfm50").dblclick();
+  await page.keyboard.type("1,000 CFM50");
+  await page.keyboard.press("Enter");
+  await expect(page.getByTestId("grid-notice")).toContainText("Saved 1 plan model");
+  await expect(cell(page, aster.id, "blower_door_cfm50")).toHaveText("1,000");
+  await expect(cell(page, aster.id, "blower_door_ach50")).toHaveText("");
+  await goToColumn(page, "wall_u");
+  await cell(page, aster.id, "wall_u").dblclick();
+  await page.keyboard.type("0.05 U");
+  await page.keyboard.press("Enter");
+  await expect(page.getByTestId("grid-notice")).toContainText("Saved 1 plan model");
+  await expect(cell(page, aster.id, "wall_u")).toHaveText("0.05");
+
   await page.screenshot({ path: testInfo.outputPath("plan-grid.png"), fullPage: true });
   await testInfo.attach("plan-grid", { path: testInfo.outputPath("plan-grid.png"), contentType: "image/png" });
   await signOut(page);
@@ -91,6 +108,12 @@ test("a designer imports the template, edits with a formula, bulk-raises insulat
   await page.goto(`/plans/${aster.id}`);
   await expect(page.getByTestId("facing-matrix")).toBeVisible();
   await expect(page.getByTestId("chart-profile")).toBeVisible();
+  // the sheet says which U-factors were entered and which computed, and how leakage was given
+  await expect(page.getByTestId("air-leakage-used")).toHaveText("1000 CFM50");
+  await expect(page.getByTestId("assembly-wall_u")).toHaveAttribute("data-source", "direct");
+  await expect(page.getByTestId("assembly-wall_u")).toContainText("0.050");
+  await expect(page.getByTestId("assembly-ceiling_u")).toHaveAttribute("data-source", "assembly");
+  await expect(page.getByTestId("assembly-ceiling_u")).toContainText("base assembly + added insulation");
   const form = page.getByTestId("approve-form");
   await form.getByLabel("Credential").fill("Licensed mechanical engineer, TX 00000 (demo)");
   await form.getByRole("button", { name: /Approve revision/ }).click();

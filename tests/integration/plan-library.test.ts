@@ -117,6 +117,29 @@ describe("plan library", () => {
     expect(stillA.version).toBe(a.version);
   });
 
+  it("a second air-leakage figure is refused naming both columns; a switch of figure, a direct U and a second window group are saved", async () => {
+    const list = (await callRoute(plansRoute.GET, { path: "/api/plans", cookie: designer })).json;
+    // From the end of the list: the approval test below edits the ACH50 of the third plan.
+    const p = [...list.plans].reverse().find((x: { cells: Record<string, unknown> }) => x.cells.blower_door_ach50 !== null && x.cells.blower_door_ach50 !== "");
+    expect(p).toBeDefined();
+    expect(p.id).not.toBe(list.plans[2].id);
+    const twice = await callRoute(plansRoute.PATCH, { path: "/api/plans", method: "PATCH", cookie: designer, body: { changes: [{ planId: p.id, version: p.version, cells: { blower_door_cfm50: "1,100 CFM50" } }] } });
+    expect(twice.status).toBe(400);
+    expect(twice.json.error.fieldErrors).toEqual([
+      expect.objectContaining({ field: `${p.planCode}.blower_door_ach50`, column: "Air leakage (ACH50)", message: expect.stringContaining('"Air leakage (ACH50)" and "Air leakage (CFM50)" are both filled') }),
+      expect.objectContaining({ field: `${p.planCode}.blower_door_cfm50`, column: "Air leakage (CFM50)" }),
+    ]);
+    const cells = { blower_door_cfm50: "1,100 CFM50", blower_door_ach50: "", wall_u: "0.05 U", back_window2_ft2: "30", back_window2_overhang_depth_ft: "8'" };
+    const saved = await callRoute(plansRoute.PATCH, { path: "/api/plans", method: "PATCH", cookie: designer, body: { changes: [{ planId: p.id, version: p.version, cells }] } });
+    expect(saved.status, JSON.stringify(saved.json)).toBe(200);
+    const [row] = await getDb().select({ revision: planRevisions }).from(plans).innerJoin(planRevisions, eq(planRevisions.id, plans.currentRevisionId)).where(eq(plans.id, p.id));
+    const input = row.revision.input as { infiltration: Record<string, unknown>; wall: { uFactor?: number }; facades: { back: { extraWindows: { areaFt2: number; overhangDepthFt: number }[] } } };
+    expect(input.infiltration.cfm50).toBe(1100);
+    expect(input.infiltration.ach50).toBeUndefined();
+    expect(input.wall.uFactor).toBe(0.05);
+    expect(input.facades.back.extraWindows).toEqual([expect.objectContaining({ areaFt2: 30, overhangDepthFt: 8 })]);
+  });
+
   it("a formula cell is kept as entered and its value is used", async () => {
     const list = (await callRoute(plansRoute.GET, { path: "/api/plans", cookie: designer })).json;
     const p = list.plans[0];

@@ -56,6 +56,32 @@ describe("npm run calc (scripts/calc.ts)", { timeout: 120_000 }, () => {
     expect(stderr).toContain('row 5, column "Plan code": plan code "WF-1480" is already used on row 2');
   });
 
+  it("reads the direct inputs and a second window group from a table, says which U-factors were entered, and refuses two leakage figures", () => {
+    const dir = mkdtempSync(path.join(tmpdir(), "platload-calc-"));
+    const headers = ["Plan code", "Plan name", "conditioned_area_ft2", "bedrooms", "front_wall_ft2", "left_wall_ft2", "back_wall_ft2", "right_wall_ft2", "back_window_ft2", "back_window2_ft2", "wall_u", "effective_leakage_area_in2", "slab_perimeter_ft", "slab_f_factor"];
+    const good = path.join(dir, "direct.csv");
+    writeFileSync(good, `${headers.join(",")}\r\nD-1,Direct,1600,3,360,400,360,400,60,40,0.050 U,85 in²,160,F-0.45\r\n`);
+    const result = calc(good, "--site", "templates/example-site.json");
+    expect(result.stderr).toBe("");
+    expect(result.status).toBe(0);
+    expect(result.stdout).toContain("Air leakage: 85 in² effective leakage area");
+    expect(result.stdout).toMatch(/Heating U-factors used .*Walls 0\.050 \(direct U-factor\); Ceiling under the attic 0\.\d{3} \(from attic-joists-24in-oc \+ R-38 insulation\); Slab edge 0\.450 \(direct F-factor\)/);
+    const twice = path.join(dir, "twice.csv");
+    writeFileSync(twice, `${[...headers, "blower_door_ach50"].join(",")}\r\nD-1,Direct,1600,3,360,400,360,400,60,40,0.050 U,85 in²,160,F-0.45,4\r\n`);
+    const refused = calc(twice, "--site", "templates/example-site.json");
+    expect(refused.status).toBe(2);
+    expect(refused.stdout).toBe("");
+    expect(refused.stderr).toContain('row 2, column "Air leakage (ACH50)": give one air-leakage figure per plan: "Air leakage (ACH50)" and "Air leakage (effective leakage area, in²)" are both filled');
+    // A JSON plan may carry the command's own planCode beside the engine's strict input.
+    const json = path.join(dir, "plan.json");
+    const walls = { grossWallAreaFt2: 300 };
+    writeFileSync(json, JSON.stringify({ plans: [{ planCode: "J-1", conditionedFloorAreaFt2: 1500, bedrooms: 3, facades: { front: walls, left: walls, back: walls, right: walls }, infiltration: { cfm50: 900 } }] }));
+    const fromJson = calc(json, "--site", "templates/example-site.json");
+    expect(fromJson.status).toBe(0);
+    expect(fromJson.stdout).toContain("J-1");
+    expect(fromJson.stdout).toContain("Air leakage: 900 CFM50");
+  });
+
   it("bad design conditions and bad JSON plans also exit 2 with the field and valid range", () => {
     const badSite = calc("templates/example-plans.csv", "--heating-db", "24", "--cooling-db", "99", "--cooling-wb", "75", "--daily-range", "20", "--latitude", "95", "--elevation", "600");
     expect(badSite.status).toBe(2);

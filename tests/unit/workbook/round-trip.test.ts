@@ -82,7 +82,8 @@ describe("plan row ↔ PlanInput", () => {
   });
 
   it("refuses what the flat table cannot hold, and unknown keys, with clear errors", () => {
-    const withExtra = parsePlanInput({ ...UNUSUAL_PLAN, facades: { ...UNUSUAL_PLAN.facades, front: { ...UNUSUAL_PLAN.facades.front, extraWindows: [{ areaFt2: 10 }] } } });
+    // Two window groups per facade fit in the table (group 2 columns); a third does not.
+    const withExtra = parsePlanInput({ ...UNUSUAL_PLAN, facades: { ...UNUSUAL_PLAN.facades, front: { ...UNUSUAL_PLAN.facades.front, extraWindows: [{ areaFt2: 10 }, { areaFt2: 12 }] } } });
     expect(() => planInputToRow(withExtra, "X-1")).toThrow(PlanRowError);
     expect(() => planInputToRow(withExtra, "X-1")).toThrow(/facades\.front\.extraWindows/);
     const unknown = rowToPlanInput({ plan_code: "M-3", plan_name: "x", conditioned_area_ft2: 1500, bedrooms: 3, front_wall_ft2: 300, left_wall_ft2: 300, back_wall_ft2: 300, right_wall_ft2: 300, blower_door_ach50: 5, wall_r_total: 19 });

@@ -42,6 +42,15 @@ const ACCEPTED: [string, QuantityKind, number][] = [
   ["26.6°", "degrees", 26.6],
   ["12,000 Btu/h", "btuh", 12000],
   ["0.65", "ratio", 0.65],
+  ["85 in²", "leakageAreaIn2", 85],
+  ["85 sq in", "leakageAreaIn2", 85],
+  ["1,200 in2", "leakageAreaIn2", 1200],
+  ["ELA 85", "leakageAreaIn2", 85],
+  ["0.54", "fFactor", 0.54],
+  ["F-0.54", "fFactor", 0.54],
+  ["0.54 F", "fFactor", 0.54],
+  ["0.54 F-factor", "fFactor", 0.54],
+  ["0.54 Btu/h·ft·°F", "fFactor", 0.54],
 ];
 
 // Rejected forms and a piece of the reason the user must see.
@@ -69,6 +78,13 @@ const REJECTED: [string, QuantityKind, RegExp][] = [
   ["3.5", "count", /whole number/],
   ["", "areaFt2", /blank/],
   ["2026-06-12", "pitchIn12", /is a date/],
+  // A leakage area in ft² is refused, not converted: 1 ft² typed where in² was meant is 144 times too big.
+  ["0.6 sf", "leakageAreaIn2", /ft² is a unit of area; this column takes effective leakage area \(in²\)/],
+  ["85 in²", "areaFt2", /in² is a unit of effective leakage area; this column takes area/],
+  ["85 cm2", "leakageAreaIn2", /not a unit we read|metric/],
+  ["0.54 U", "fFactor", /U is a unit of U-factor; this column takes slab-edge F-factor/],
+  ["0.54 °F", "fFactor", /°F is a unit of temperature/],
+  ["0,54", "fFactor", /comma/],
 ];
 
 describe("reading typed cells with units", () => {
