@@ -128,6 +128,8 @@ export const OTHER_ACCOUNT = {
   slug: "bramblewood",
   users: [{ email: "admin@bramblewood.test", name: "Morgan Tate", role: "admin" }] satisfies DemoUser[],
   community: { name: "Heron Flats", locality: "Gulf Coast (demo)" },
+  /** The second builder sizes by the hourly method, to show that each account picks its own procedure. */
+  loadProcedure: "hourly" as const,
   plan: { planCode: "HX-2100", name: "Harbor", input: { ...DEMO_PLANS[1].input, name: "Harbor", conditionedFloorAreaFt2: 2100 } as PlanInputRaw },
 };
 

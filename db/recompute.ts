@@ -1,9 +1,11 @@
 // Lot loads: computed from the current plan revision and the community's design conditions, and
 // written back in a few statements. No "server-only" guard: the seed and the benchmark use it too.
 import { and, eq, inArray, sql, type SQL } from "drizzle-orm";
-import { computeFacingLoads, parseSiteConditions, type FacingLoads, type PlanInput, type SiteConditions } from "@/lib/load";
+import { computeFacingLoads, LOAD_PROCEDURE_LABELS, LoadInputError, parseSiteConditions, type FacingLoads, type LoadProcedure, type PlanInput, type SiteConditions } from "@/lib/load";
+import { AppError } from "@/lib/errors";
 import { LotEquipmentSelector, type LotSelection } from "./equipment";
 import type { Database } from "./index";
+import { loadProcedureOf, procedureOfStored } from "./load-procedure";
 import { communities, lots, planRevisions, plans, type LotStatus } from "./schema";
 
 type Tx = Parameters<Parameters<Database["transaction"]>[0]>[0];
@@ -12,6 +14,8 @@ type Db = Database | Tx;
 /** What a lot keeps of its computed loads (the full result is recomputed on demand for reports). */
 export interface LotResults {
   engineVersion: string;
+  /** The procedure these loads come from (absent in results stored before procedures were named: hourly). */
+  procedure: LoadProcedure;
   revisionId: number;
   revisionNumber: number;
   computedAt: string;
@@ -26,7 +30,7 @@ export interface LotResults {
   facingRank: number;
   /** True when the last recompute changed the loads. */
   changed: boolean;
-  previous: { heatingBtuh: number; coolingTotalBtuh: number } | null;
+  previous: { heatingBtuh: number; coolingTotalBtuh: number; procedure?: LoadProcedure } | null;
 }
 
 /** The frozen copy taken when a lot's permit is submitted: inputs, results and engine version. */
@@ -50,7 +54,11 @@ export interface PermitSnapshot {
   selection: LotSelection | null;
   equipmentSystemId: number | null;
   engineVersion: string;
+  /** The procedure of the frozen loads (the account's when frozen); absent in snapshots taken before procedures were named (hourly). */
+  procedure: LoadProcedure;
 }
+
+export { procedureOfStored } from "./load-procedure";
 
 export const FROZEN_STATUSES: readonly LotStatus[] = ["permit_submitted", "permitted", "built"];
 export const isFrozen = (status: LotStatus) => FROZEN_STATUSES.includes(status);
@@ -61,6 +69,7 @@ function summarize(result: FacingLoads, cardinalTotals: number[], revision: { id
   const changed = !!previous && (Math.round(previous.coolingTotalBtuh) !== Math.round(c.totalBtuh) || Math.round(previous.heatingBtuh) !== Math.round(result.heating.totalBtuh));
   return {
     engineVersion: result.engineVersion,
+    procedure: result.procedure,
     revisionId: revision.id,
     revisionNumber: revision.number,
     computedAt: new Date().toISOString(),
@@ -73,19 +82,28 @@ function summarize(result: FacingLoads, cardinalTotals: number[], revision: { id
     airflowCfm: c.airflowCfm,
     facingRank: Math.min(4, rank),
     changed,
-    previous: previous ? { heatingBtuh: previous.heatingBtuh, coolingTotalBtuh: previous.coolingTotalBtuh } : null,
+    previous: previous ? { heatingBtuh: previous.heatingBtuh, coolingTotalBtuh: previous.coolingTotalBtuh, procedure: procedureOfStored(previous) } : null,
   };
 }
 
 /**
- * Computes lots in memory: one prepared plan per revision and one prepared site per community
- * (the engine caches both by identity), four cardinal facings per (revision, community) for the rank.
+ * Computes lots in memory by one procedure (the account's): one prepared plan per revision and
+ * one prepared site per community (the engine caches both by identity), four cardinal facings
+ * per (revision, community) for the rank.
  */
 export class LotCalculator {
   private sites = new Map<number, SiteConditions>();
   private cardinal = new Map<string, number[]>();
 
-  constructor(private readonly conditionsByCommunity: Map<number, unknown>) {}
+  constructor(
+    private readonly conditionsByCommunity: Map<number, unknown>,
+    readonly procedure: LoadProcedure,
+  ) {}
+
+  /** The calculator for an account: its chosen procedure, read once. */
+  static async forAccount(db: Db, accountId: number, conditionsByCommunity: Map<number, unknown>): Promise<LotCalculator> {
+    return new LotCalculator(conditionsByCommunity, await loadProcedureOf(db, accountId));
+  }
 
   site(communityId: number): SiteConditions {
     let site = this.sites.get(communityId);
@@ -101,11 +119,23 @@ export class LotCalculator {
     const key = `${revision.id}:${lot.communityId}`;
     let totals = this.cardinal.get(key);
     if (!totals) {
-      totals = [0, 90, 180, 270].map((deg) => computeFacingLoads(revision.input, site, deg, { validated: true }).cooling.totalBtuh);
+      totals = [0, 90, 180, 270].map((deg) => this.facing(revision.input, site, deg).cooling.totalBtuh);
       this.cardinal.set(key, totals);
     }
-    const full = computeFacingLoads(revision.input, site, lot.facingDeg, { validated: true });
+    const full = this.facing(revision.input, site, lot.facingDeg);
     return { full, summary: summarize(full, totals, revision, lot.previous) };
+  }
+
+  /** An engine refusal (a procedure the engine does not run, an input it refuses) becomes the one error shape, naming the procedure; nothing is written. */
+  private facing(input: PlanInput, site: SiteConditions, facingDeg: number): FacingLoads {
+    try {
+      return computeFacingLoads(input, site, facingDeg, { validated: true, procedure: this.procedure });
+    } catch (error) {
+      if (error instanceof LoadInputError) {
+        throw new AppError("conflict", `Lot loads cannot be computed by ${LOAD_PROCEDURE_LABELS[this.procedure]}: ${error.message}. Nothing was saved.`, error.issues.map((issue) => ({ field: issue.field, message: issue.message })));
+      }
+      throw error;
+    }
   }
 
   /** Equipment for a lot's loads from the account's catalog, at the community's heating design temperature. */
@@ -179,7 +209,7 @@ export async function recomputeLots(tx: Db, { accountId, communityId, planIds, l
   if (rows.length === 0) return { recomputed: 0, changed: 0 };
   const communityIds = [...new Set(rows.map((r) => r.communityId))];
   const conditions = await tx.select({ id: communities.id, conditions: communities.conditions }).from(communities).where(inArray(communities.id, communityIds));
-  const calculator = new LotCalculator(new Map(conditions.map((c) => [c.id, c.conditions])));
+  const calculator = await LotCalculator.forAccount(tx, accountId, new Map(conditions.map((c) => [c.id, c.conditions])));
   const selector = await LotEquipmentSelector.forAccount(tx, accountId);
   const inputs = new Map<number, PlanInput>();
   const out: Parameters<typeof writeResults>[1] = [];

@@ -17,6 +17,7 @@ import {
   varchar,
 } from "drizzle-orm/mysql-core";
 import { ROLES, type Role } from "@/lib/auth/roles";
+import { DEFAULT_LOAD_PROCEDURE, LOAD_PROCEDURES } from "@/lib/load/results";
 
 /** MariaDB rejects drizzle's serial(): an unsigned auto-increment bigint instead (SETUP.md). */
 const id = () => bigint("id", { mode: "number", unsigned: true }).autoincrement().primaryKey();
@@ -39,6 +40,8 @@ export const accounts = mysqlTable("accounts", {
   slug: varchar("slug", { length: 80 }).notNull().unique(),
   /** Equipment sizing limits chosen by the account's admin; null means the engine's defaults. */
   sizingLimits: json("sizing_limits"),
+  /** The procedure that sizes equipment and goes on the permit papers, chosen by the account's admin. */
+  loadProcedure: mysqlEnum("load_procedure", LOAD_PROCEDURES).notNull().default(DEFAULT_LOAD_PROCEDURE),
   createdAt: createdAt(),
 });
 

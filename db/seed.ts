@@ -88,7 +88,7 @@ export async function seedDatabase(db: Database): Promise<SeedSummary> {
     if (other) {
       summary.accountsKept.push(OTHER_ACCOUNT.name);
     } else {
-      const [{ id: accountId }] = await tx.insert(accounts).values({ name: OTHER_ACCOUNT.name, slug: OTHER_ACCOUNT.slug }).$returningId();
+      const [{ id: accountId }] = await tx.insert(accounts).values({ name: OTHER_ACCOUNT.name, slug: OTHER_ACCOUNT.slug, loadProcedure: OTHER_ACCOUNT.loadProcedure }).$returningId();
       await addMembers(tx, accountId, [...OTHER_ACCOUNT.users, { ...DEMO_CONSULTANT, role: "designer" }], passwordHash);
       const adminId = await ensureUser(tx, OTHER_ACCOUNT.users[0], passwordHash);
       const planId = await addPlan(tx, accountId, adminId, OTHER_ACCOUNT.plan);

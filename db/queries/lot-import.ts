@@ -10,6 +10,7 @@ import type { TableCellError } from "@/lib/workbook/columns";
 import { LOT_COLUMNS, validateLotTable } from "@/lib/workbook/lot-columns";
 import { readTableFile, TableFileError } from "@/lib/workbook/table-io";
 import { LotEquipmentSelector } from "../equipment";
+import { loadProcedureOf } from "../load-procedure";
 import { isFrozen, LotCalculator, recomputeLots, type LotResults } from "../recompute";
 
 const header = (key: string) => LOT_COLUMNS.find((c) => c.key === key)!.header;
@@ -98,7 +99,7 @@ export async function processLotImport({ db, importId, data }: { db: Database; i
 
     await progress(db, importId, "computing", 35);
     const [community] = await db.select().from(communities).where(eq(communities.id, communityId));
-    const calculator = new LotCalculator(new Map([[communityId, community.conditions]]));
+    const calculator = await LotCalculator.forAccount(db, accountId, new Map([[communityId, community.conditions]]));
     const selector = await LotEquipmentSelector.forAccount(db, accountId);
     const computed = result.lots.map((row) => {
       const plan = planByCode.get(row.planCode)!;
@@ -160,6 +161,12 @@ export async function processLotImport({ db, importId, data }: { db: Database; i
       const inFile = new Set(computed.map((c) => c.row.lotNumber.toLowerCase()));
       const others = existing.filter((l) => !inFile.has(l.lotNumber.toLowerCase())).map((l) => l.id);
       if (others.length > 0) await recomputeLots(tx, { accountId, lotIds: others });
+      // The file's lots were computed before this transaction: if an admin changed the account's
+      // procedure meanwhile, they are computed again by the one in force now.
+      if ((await loadProcedureOf(tx, accountId)) !== calculator.procedure) {
+        const fileLots = await tx.select({ id: lots.id, lotNumber: lots.lotNumber }).from(lots).where(eq(lots.communityId, communityId));
+        await recomputeLots(tx, { accountId, lotIds: fileLots.filter((l) => inFile.has(l.lotNumber.toLowerCase())).map((l) => l.id) });
+      }
       await recordAudit(tx, { accountId, userId, action: "lot_import", entityType: "community", entityId: communityId, summary: `Imported ${record.fileName} into ${community.name}: ${created} lots created, ${updated} updated`, after: { importId, created, updated } });
       await tx.update(imports).set({ state: "succeeded", createdCount: created, updatedCount: updated, errors: [], progressPct: 100, finishedAt: new Date() }).where(eq(imports.id, importId));
       return { created, updated };

@@ -4,11 +4,12 @@ import type { Database } from "@/db";
 import { communities, equipmentSystems, lots, planRevisions, plans, users, type LotStatus } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
 import { AppError, notFound } from "@/lib/errors";
-import { ENGINE_VERSION, type PlanInput } from "@/lib/load";
+import { ENGINE_VERSION, LOAD_PROCEDURE_LABELS, type PlanInput } from "@/lib/load";
+import { loadProcedureOf } from "../load-procedure";
 import type { LotSelection } from "../equipment";
-import { isFrozen, LotCalculator, recomputeLots, type LotResults, type PermitSnapshot } from "../recompute";
+import { isFrozen, LotCalculator, procedureOfStored, recomputeLots, type LotResults, type PermitSnapshot } from "../recompute";
 
-export { FROZEN_STATUSES, isFrozen, recomputeLots, type LotResults, type PermitSnapshot } from "../recompute";
+export { FROZEN_STATUSES, isFrozen, procedureOfStored, recomputeLots, type LotResults, type PermitSnapshot } from "../recompute";
 
 type Tx = Parameters<Parameters<Database["transaction"]>[0]>[0];
 
@@ -42,8 +43,11 @@ export async function listLotsForGrid({ db, accountId, communityId }: { db: Data
     .orderBy(asc(lots.lotNumber));
   const systems = await db.select({ id: equipmentSystems.id, code: equipmentSystems.systemCode }).from(equipmentSystems).where(eq(equipmentSystems.accountId, accountId));
   const codeOf = new Map(systems.map((x) => [x.id, x.code]));
+  const accountProcedure = await loadProcedureOf(db, accountId);
   return {
     community,
+    /** The account's procedure: the one live loads are computed by. */
+    accountProcedure,
     lots: rows.map(({ permitSnapshot, results, selection: liveSelection, ...r }) => {
       const live = results as LotResults | null;
       const snapshot = permitSnapshot as PermitSnapshot | null;
@@ -64,11 +68,17 @@ export async function listLotsForGrid({ db, accountId, communityId }: { db: Data
         frozen: !!snapshot,
         snapshotRevisionNumber: snapshot?.revisionNumber ?? null,
         snapshotEngineVersion: snapshot?.engineVersion ?? null,
+        /** The procedure of the loads shown: the snapshot's for a frozen lot, else the live results'. */
+        procedure: snapshot ? procedureOfStored(snapshot) : live ? procedureOfStored(live) : null,
+        liveProcedure: live ? procedureOfStored(live) : null,
         /** The current plan and conditions would give a different result than the frozen one. */
         currentDiffers:
           !!snapshot &&
           !!live &&
-          (Math.round(live.coolingTotalBtuh) !== Math.round(snapshot.summary.coolingTotalBtuh) || Math.round(live.heatingBtuh) !== Math.round(snapshot.summary.heatingBtuh) || live.revisionId !== snapshot.revisionId),
+          (Math.round(live.coolingTotalBtuh) !== Math.round(snapshot.summary.coolingTotalBtuh) ||
+            Math.round(live.heatingBtuh) !== Math.round(snapshot.summary.heatingBtuh) ||
+            live.revisionId !== snapshot.revisionId ||
+            procedureOfStored(live) !== procedureOfStored(snapshot)),
         liveLoads: snapshot ? live : null,
       };
     }),
@@ -155,7 +165,7 @@ export async function setLotStatus({ db, accountId, userId, lotId, version, stat
       entityType: "lot",
       entityId: lot.id,
       summary: freezing
-        ? `Lot ${lot.lotNumber}: ${refresh ? "new permit snapshot taken" : `status ${status.replace("_", " ")}, inputs and results frozen`} (plan ${snapshot!.planCode} rev. ${snapshot!.revisionNumber}, engine ${snapshot!.engineVersion})`
+        ? `Lot ${lot.lotNumber}: ${refresh ? "new permit snapshot taken" : `status ${status.replace("_", " ")}, inputs and results frozen`} (plan ${snapshot!.planCode} rev. ${snapshot!.revisionNumber}, engine ${snapshot!.engineVersion}, ${LOAD_PROCEDURE_LABELS[snapshot!.procedure]})`
         : `Lot ${lot.lotNumber}: status ${lot.status.replace("_", " ")} → ${status.replace("_", " ")}${lot.permitSnapshot && !snapshot ? " (permit snapshot released)" : ""}`,
       before: { status: lot.status, snapshotAt: lot.permitSnapshotAt },
       after: { status, snapshotAt: snapshot?.frozenAt ?? null },
@@ -174,7 +184,7 @@ async function takeSnapshot(tx: Tx, { accountId, userId, lot }: { accountId: num
     .leftJoin(users, eq(users.id, planRevisions.approvedByUserId))
     .where(and(eq(plans.id, lot.planId), eq(plans.accountId, accountId)));
   const input = row.revision.input as PlanInput;
-  const calculator = new LotCalculator(new Map([[row.community.id, row.community.conditions]]));
+  const calculator = await LotCalculator.forAccount(tx, accountId, new Map([[row.community.id, row.community.conditions]]));
   const { full, summary } = calculator.compute({ communityId: row.community.id, facingDeg: Number(lot.facingDeg), previous: null }, { id: row.revision.id, number: row.revision.number, input });
   return {
     frozenAt: new Date().toISOString(),
@@ -195,5 +205,6 @@ async function takeSnapshot(tx: Tx, { accountId, userId, lot }: { accountId: num
     selection: (lot.selection as LotSelection | null) ?? null,
     equipmentSystemId: lot.equipmentSystemId,
     engineVersion: ENGINE_VERSION,
+    procedure: full.procedure,
   };
 }

@@ -1,0 +1,1 @@
+ALTER TABLE `accounts` ADD `load_procedure` enum('residential-load-factor','hourly') DEFAULT 'residential-load-factor' NOT NULL;
