@@ -8,7 +8,9 @@ import type { SizingLimits } from "@/lib/equipment";
 import { notFound } from "@/lib/errors";
 import { buildEquipmentSchedule, equipmentScheduleTables, type EquipmentSchedule, type ScheduleCell, type ScheduleTable } from "@/lib/reports/equipment-schedule";
 import { writeCsv } from "@/lib/workbook/table-io";
-import type { PermitSnapshot } from "../recompute";
+import { LOAD_PROCEDURE_LABELS, LOAD_PROCEDURES, type LoadProcedure } from "@/lib/load";
+import { loadProcedureOf } from "../load-procedure";
+import { procedureOfStored, type PermitSnapshot } from "../recompute";
 
 /** Shown for a lot that has no system yet because the selection has not run (not a misfit). */
 export const NOT_SELECTED_YET = "not selected yet: the equipment selection has not run for this lot";
@@ -42,6 +44,8 @@ export interface ScheduleLotLine {
   overridden: boolean;
   /** Why the lot has no system (the selection's reason, or not selected yet). */
   reason: string | null;
+  /** The procedure of the loads the system was chosen for (a frozen lot's snapshot's); null before any loads. */
+  procedure: LoadProcedure | null;
 }
 
 export interface CommunityEquipmentSchedule {
@@ -49,6 +53,14 @@ export interface CommunityEquipmentSchedule {
   schedule: EquipmentSchedule;
   limits: SizingLimits;
   lots: ScheduleLotLine[];
+  /** The account's procedure now, and how many lots were sized by each procedure. */
+  accountProcedure: LoadProcedure;
+  procedures: { procedure: LoadProcedure; label: string; lotCount: number }[];
+}
+
+/** How many lots were sized by each procedure (only the procedures that occur). */
+function procedureCounts(lines: readonly ScheduleLotLine[]) {
+  return LOAD_PROCEDURES.map((procedure) => ({ procedure, label: LOAD_PROCEDURE_LABELS[procedure], lotCount: lines.filter((l) => l.procedure === procedure).length })).filter((p) => p.lotCount > 0);
 }
 
 /**
@@ -63,7 +75,7 @@ export async function communityEquipmentSchedule({ db, accountId, communityId }:
   const systemRows = await db.select().from(equipmentSystems).where(eq(equipmentSystems.accountId, accountId)).orderBy(asc(equipmentSystems.systemCode));
   const codeById = new Map(systemRows.map((row) => [row.id, row.systemCode]));
   const lotRows = await db
-    .select({ id: lots.id, lotNumber: lots.lotNumber, status: lots.status, plannedStart: lots.plannedStart, equipmentSystemId: lots.equipmentSystemId, equipmentOverride: lots.equipmentOverride, selection: lots.selection, permitSnapshot: lots.permitSnapshot })
+    .select({ id: lots.id, lotNumber: lots.lotNumber, status: lots.status, plannedStart: lots.plannedStart, equipmentSystemId: lots.equipmentSystemId, equipmentOverride: lots.equipmentOverride, selection: lots.selection, permitSnapshot: lots.permitSnapshot, results: lots.results })
     .from(lots)
     .where(and(eq(lots.accountId, accountId), eq(lots.communityId, communityId)))
     .orderBy(asc(lots.lotNumber));
@@ -72,14 +84,15 @@ export async function communityEquipmentSchedule({ db, accountId, communityId }:
     const { systemId, selection } = lotEquipment(lot);
     const systemCode = systemId === null ? null : (codeById.get(systemId) ?? null);
     const reason = systemCode !== null ? null : selection ? (selection.noFitReason ?? "no system fits within the sizing limits") : NOT_SELECTED_YET;
-    return { lotId: lot.id, lotNumber: lot.lotNumber, status: lot.status, plannedStart: lot.plannedStart, systemCode, overridden: lot.equipmentOverride, reason };
+    const sizedFrom = (lot.permitSnapshot as PermitSnapshot | null) ?? (lot.results as { procedure?: unknown } | null);
+    return { lotId: lot.id, lotNumber: lot.lotNumber, status: lot.status, plannedStart: lot.plannedStart, systemCode, overridden: lot.equipmentOverride, reason, procedure: sizedFrom ? procedureOfStored(sizedFrom) : null };
   });
 
   const schedule = buildEquipmentSchedule({
     systems: systemRows.map(catalogEntryFromRow),
     lots: lines.map((line) => ({ communityName: community.name, lotNumber: line.lotNumber, systemCode: line.systemCode, noFitReason: line.reason, plannedStart: line.plannedStart })),
   });
-  return { community, schedule, limits: await sizingLimitsOf(db, accountId), lots: lines };
+  return { community, schedule, limits: await sizingLimitsOf(db, accountId), lots: lines, accountProcedure: await loadProcedureOf(db, accountId), procedures: procedureCounts(lines) };
 }
 
 /** The schedule's tables, with the sizing limits used added to the notes. */
@@ -88,7 +101,11 @@ export function scheduleTablesWithLimits(result: CommunityEquipmentSchedule): Sc
   const notes = tables.find((table) => table.name === "notes");
   if (notes) {
     const limitRows: ScheduleCell[][] = (Object.keys(SIZING_LIMIT_LABELS) as (keyof SizingLimits)[]).map((key) => [`Sizing limit used: ${SIZING_LIMIT_LABELS[key]}`, result.limits[key]]);
-    notes.rows.splice(notes.rows.length - 1, 0, ["Community", result.community.name], ...limitRows, ["Generated", new Date().toISOString()]);
+    const procedureRows: ScheduleCell[][] = [
+      ["Load procedure of the account", LOAD_PROCEDURE_LABELS[result.accountProcedure]],
+      ...result.procedures.map((p): ScheduleCell[] => [`Lots sized for loads by ${p.label}`, p.lotCount]),
+    ];
+    notes.rows.splice(notes.rows.length - 1, 0, ["Community", result.community.name], ...procedureRows, ...limitRows, ["Generated", new Date().toISOString()]);
   }
   return tables;
 }
@@ -160,7 +177,8 @@ export async function accountEquipmentScheduleFile({ db, accountId, format }: { 
     systems: systemRows.map(catalogEntryFromRow),
     lots: perCommunity.flatMap((r) => r.lots.map((line) => ({ communityName: r.community.name, lotNumber: line.lotNumber, systemCode: line.systemCode, noFitReason: line.reason, plannedStart: line.plannedStart }))),
   });
-  const tables = scheduleTablesWithLimits({ community: { id: 0, name: "All communities" }, schedule, limits: await sizingLimitsOf(db, accountId), lots: perCommunity.flatMap((r) => r.lots) });
+  const allLots = perCommunity.flatMap((r) => r.lots);
+  const tables = scheduleTablesWithLimits({ community: { id: 0, name: "All communities" }, schedule, limits: await sizingLimitsOf(db, accountId), lots: allLots, accountProcedure: await loadProcedureOf(db, accountId), procedures: procedureCounts(allLots) });
   const fileName = `equipment-schedule-all-communities-${new Date().toISOString().slice(0, 10)}.${format}`;
   if (format === "csv") return { fileName, contentType: "text/csv; charset=utf-8", body: new TextEncoder().encode(writeTablesCsv(tables)) };
   return { fileName, contentType: XLSX_TYPE, body: await writeTablesXlsx(tables) };

@@ -5,13 +5,14 @@ import { catalogEntryFromRow, sizingLimitsOf, type LotSelection } from "@/db/equ
 import { accounts, communities, equipmentSystems, lots, packets, planRevisions, plans, users, type LotStatus } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
 import { AppError, notFound } from "@/lib/errors";
-import { computeFacingLoads, parseSiteConditions, type FacingLoads, type PlanInput, type SiteConditions } from "@/lib/load";
+import { computeFacingLoads, LOAD_PROCEDURE_LABELS, LoadInputError, parseSiteConditions, type FacingLoads, type LoadProcedure, type PlanInput, type SiteConditions } from "@/lib/load";
 import { sendMail } from "@/lib/mail/send";
 import { lotReportFromResults, renderLotReportsPdf, type LotReport, type LotSystemChoice } from "@/lib/reports";
 import { getObject, objectKey, putObject } from "@/lib/storage/object-store";
 import { catalogForHeatingDesign } from "@/lib/workbook/equipment-columns";
 import { writeXlsx } from "@/lib/workbook/table-io";
-import type { PermitSnapshot } from "../recompute";
+import { loadProcedureOf } from "../load-procedure";
+import { procedureOfStored, type PermitSnapshot } from "../recompute";
 import { equipmentScheduleFile, lotEquipment, NOT_SELECTED_YET, safeFilePart, XLSX_TYPE, type GeneratedFile } from "./equipment-schedule";
 import { permitScheduleRows } from "./permit-schedule";
 
@@ -55,6 +56,7 @@ export async function lotReportsFor({ db, accountId, lotIds }: { db: Database; a
 
   const [account] = await db.select({ name: accounts.name }).from(accounts).where(eq(accounts.id, accountId));
   const accountLimits = await sizingLimitsOf(db, accountId);
+  const procedure = await loadProcedureOf(db, accountId);
   const systemRows = await db.select().from(equipmentSystems).where(eq(equipmentSystems.accountId, accountId));
   const systemById = new Map(systemRows.map((row) => [row.id, row]));
   const sites = new Map<number, SiteConditions>();
@@ -75,14 +77,15 @@ export async function lotReportsFor({ db, accountId, lotIds }: { db: Database; a
     if (snapshot) {
       site = snapshot.site;
       input = snapshot.input;
-      loads = snapshot.result;
+      // A snapshot taken before procedures were named was made by the hourly method.
+      loads = { ...snapshot.result, procedure: procedureOfStored(snapshot) };
       planInfo = { code: snapshot.planCode, name: snapshot.planName, revisionNumber: snapshot.revisionNumber, status: `${snapshot.revisionStatus}, permit snapshot of ${snapshot.frozenAt.slice(0, 10)}` };
       approval = snapshot.approval;
     } else {
       site = sites.get(community.id) ?? parseSiteConditions(community.conditions);
       sites.set(community.id, site);
       input = revision!.input as PlanInput;
-      loads = computeFacingLoads(input, site, Number(lot.facingDeg), { validated: true });
+      loads = computeLotLoads(input, site, Number(lot.facingDeg), procedure, lot.lotNumber);
       planInfo = { code: plan!.planCode, name: plan!.name, revisionNumber: revision!.number, status: revision!.status };
       approval = { name: revision!.approverName, credential: revision!.approverCredential, date: revision!.approvedOn };
     }
@@ -101,6 +104,16 @@ export async function lotReportsFor({ db, accountId, lotIds }: { db: Database; a
     });
   });
   return { reports, lots: rows.map((r) => r.lot) };
+}
+
+/** A lot's loads by the account's procedure; an engine refusal is the one error shape, naming the lot and the procedure. */
+function computeLotLoads(input: PlanInput, site: SiteConditions, facingDeg: number, procedure: LoadProcedure, lotNumber: string): FacingLoads {
+  try {
+    return computeFacingLoads(input, site, facingDeg, { validated: true, procedure });
+  } catch (error) {
+    if (error instanceof LoadInputError) throw new AppError("conflict", `Lot ${lotNumber}: its loads cannot be computed by ${LOAD_PROCEDURE_LABELS[procedure]}: ${error.message}. Nothing was generated.`);
+    throw error;
+  }
 }
 
 function systemChoiceOf(lot: { systemId: number | null; overridden: boolean }, selection: LotSelection | null, systemById: Map<number, typeof equipmentSystems.$inferSelect>, site: SiteConditions): LotSystemChoice {
@@ -278,7 +291,7 @@ export function packetMessage({ accountName, senderName, communityName, kind, fi
       "",
       `Attached: ${fileName} — ${what}, ${lotCount} lot${lotCount === 1 ? "" : "s"}.`,
       "",
-      "Caution: the loads and equipment sizes in this file are design estimates from Platload's own method built on published ASHRAE equations; it is not any standard's approved procedure. Local codes and a licensed professional's review govern.",
+      "Caution: the loads and equipment sizes in this file are design estimates, by the handbook's published residential load-factor procedure as implemented in Platload or by Platload's own hourly method (the file names which); neither is a certified implementation or any standard's approved procedure. Local codes and a licensed professional's review govern.",
       "",
       "Sent from Platload.",
     ].join("\n"),

@@ -3,9 +3,10 @@ import { and, asc, eq } from "drizzle-orm";
 import type { Database } from "@/db";
 import { communities, lots, planRevisions, plans } from "@/db/schema";
 import { notFound } from "@/lib/errors";
-import { DESIGN_ESTIMATE_CAUTION, parseSiteConditions, type SiteConditions } from "@/lib/load";
+import { LOAD_PROCEDURE_LABELS, parseSiteConditions, type SiteConditions } from "@/lib/load";
+import { REPORT_CAUTION } from "@/lib/reports/lot-report-data";
 import { facingLabel } from "@/lib/workbook/facing";
-import type { LotResults, PermitSnapshot } from "../recompute";
+import { procedureOfStored, type LotResults, type PermitSnapshot } from "../recompute";
 
 export const PERMIT_SCHEDULE_HEADERS = [
   "Lot",
@@ -27,6 +28,7 @@ export const PERMIT_SCHEDULE_HEADERS = [
   "Reviewer",
   "Approved on",
   "Loads from",
+  "Load procedure",
   "Engine version",
   "Caution",
 ] as const;
@@ -35,7 +37,8 @@ const conditionsCells = (site: SiteConditions) => [site.heatingOutdoorDbF, `${si
 
 /**
  * The permit schedule of a community: one row per lot. A lot frozen for permit shows its snapshot
- * (inputs, results, engine version as submitted); the others show the current plan's results.
+ * (inputs, results, procedure and engine version as submitted); the others show the current plan's
+ * results, by the account's procedure.
  */
 export async function permitScheduleRows({ db, accountId, communityId }: { db: Database; accountId: number; communityId: number }) {
   const [community] = await db.select().from(communities).where(and(eq(communities.id, communityId), eq(communities.accountId, accountId)));
@@ -70,8 +73,9 @@ export async function permitScheduleRows({ db, accountId, communityId }: { db: D
       approval.name ? `${approval.name}, ${approval.credential ?? ""}` : "not approved",
       approval.date ?? "",
       snapshot ? `permit snapshot ${snapshot.frozenAt.slice(0, 10)}` : "current plan",
+      snapshot ? LOAD_PROCEDURE_LABELS[procedureOfStored(snapshot)] : loads ? LOAD_PROCEDURE_LABELS[procedureOfStored(loads)] : "",
       snapshot?.engineVersion ?? loads?.engineVersion ?? "",
-      DESIGN_ESTIMATE_CAUTION,
+      REPORT_CAUTION,
     ];
   });
   return { community, headers: [...PERMIT_SCHEDULE_HEADERS], rows: table };

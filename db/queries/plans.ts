@@ -4,7 +4,8 @@ import type { Database } from "@/db";
 import { auditLog, communities, planRevisions, plans, users } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
 import { AppError, notFound, type FieldError } from "@/lib/errors";
-import { computePlanFacings, parseSiteConditions, type PlanFacings, type PlanInput, type SiteConditions } from "@/lib/load";
+import { computePlanFacings, LOAD_PROCEDURE_LABELS, LOAD_PROCEDURES, parseSiteConditions, type LoadProcedure, type PlanFacings, type PlanInput, type SiteConditions } from "@/lib/load";
+import { loadProcedureOf } from "../load-procedure";
 import { recomputeLots } from "./lots";
 import { PLAN_COLUMN_BY_KEY, planInputToRow, rowToPlanInput, type PlanRowCells } from "@/lib/workbook/plan-columns";
 
@@ -40,6 +41,7 @@ export async function referenceSite({ db, accountId, communityId }: { db: Databa
 export function facingSummary(result: PlanFacings) {
   return {
     engineVersion: result.engineVersion,
+    procedure: result.procedure,
     facings: result.facings.map((f) => ({
       label: f.label,
       heatingBtuh: f.heating.totalBtuh,
@@ -57,18 +59,19 @@ export type FacingSummary = ReturnType<typeof facingSummary>;
 
 const NO_SITE = "Add a community to compute loads: the plan library uses its design conditions.";
 
-function computeFacings(input: unknown, site: SiteConditions | null): { result: PlanFacings | null; error: string | null } {
+function computeFacings(input: unknown, site: SiteConditions | null, procedure: LoadProcedure): { result: PlanFacings | null; error: string | null } {
   if (!site) return { result: null, error: NO_SITE };
   try {
-    return { result: computePlanFacings(input, site, { validated: true }), error: null };
+    return { result: computePlanFacings(input, site, { validated: true, procedure }), error: null };
   } catch (error) {
-    return { result: null, error: (error as Error).message };
+    return { result: null, error: `${LOAD_PROCEDURE_LABELS[procedure]}: ${(error as Error).message}` };
   }
 }
 
 /** The plan library: every plan's current cells, revision state and four-facing loads. */
 export async function listPlanLibrary({ db, accountId, communityId, full = false }: { db: Database; accountId: number; communityId?: number | null; full?: boolean }) {
   const reference = await referenceSite({ db, accountId, communityId });
+  const procedure = await loadProcedureOf(db, accountId);
   const rows = await db
     .select({ plan: plans, revision: planRevisions })
     .from(plans)
@@ -77,8 +80,11 @@ export async function listPlanLibrary({ db, accountId, communityId, full = false
     .orderBy(asc(plans.planCode));
   return {
     reference: { communities: reference.communities, community: reference.community },
+    /** The account's procedure: the one the computed columns use. */
+    procedure,
+    procedureLabel: LOAD_PROCEDURE_LABELS[procedure],
     plans: rows.map(({ plan, revision }) => {
-      const { result, error } = computeFacings(revision.input, reference.site);
+      const { result, error } = computeFacings(revision.input, reference.site, procedure);
       return {
         id: plan.id,
         planCode: plan.planCode,
@@ -117,7 +123,10 @@ export async function getPlanSheet({ db, accountId, planId, communityId }: { db:
     .where(and(eq(auditLog.accountId, accountId), eq(auditLog.entityType, "plan")))
     .orderBy(desc(auditLog.createdAt), desc(auditLog.id))
     .limit(500);
-  const { result, error: loadsError } = computeFacings(current.input, reference.site);
+  // Both procedures side by side; the account's is the one that sizes equipment.
+  const accountProcedure = await loadProcedureOf(db, accountId);
+  const procedures = LOAD_PROCEDURES.map((procedure) => ({ procedure, label: LOAD_PROCEDURE_LABELS[procedure], sizesEquipment: procedure === accountProcedure, ...computeFacings(current.input, reference.site, procedure) }));
+  const { result, error: loadsError } = procedures.find((p) => p.sizesEquipment)!;
   return {
     plan: { id: plan.id, planCode: plan.planCode, name: plan.name, version: plan.version, updatedAt: plan.updatedAt },
     reference: { communities: reference.communities, community: reference.community },
@@ -133,8 +142,12 @@ export async function getPlanSheet({ db, accountId, planId, communityId }: { db:
       approvedOn: revision.approvedOn,
     })),
     history: history.filter((h) => touchesPlan(h.after, planId) || touchesPlan(h.before, planId)),
+    accountProcedure,
+    /** The account's procedure's result (the one that sizes equipment). */
     result,
     loadsError,
+    /** Each procedure's four facings, or why it could not be computed. */
+    procedures,
   };
 }
 

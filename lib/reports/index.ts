@@ -5,3 +5,5 @@
 export * from "./errors";
 export * from "./equipment-schedule";
 export * from "./lot-report";
+export * from "./procedure-text";
+export * from "./procedure-compare";

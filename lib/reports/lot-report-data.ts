@@ -13,6 +13,7 @@ import {
   HEATING_COMPONENTS,
   type CoolingLatentComponent,
   type CoolingSensibleComponent,
+  LOAD_PROCEDURES,
   type FacingLoads,
 } from "../load/results";
 import { heatPumpOutputAtF, type EquipmentCatalogEntry } from "../workbook/equipment-columns";
@@ -23,8 +24,9 @@ import { ReportInputError } from "./errors";
  * The caution every page of a report carries (PRODUCT.md "Rules that matter to users").
  */
 export const REPORT_CAUTION =
-  "Results are design estimates from Platload's own hourly method, built on published ASHRAE equations; " +
-  "it is not the approved procedure of any standard or code. Local codes and a licensed professional's review govern.";
+  "Results are design estimates, by the handbook's published residential load-factor procedure as implemented in Platload or by " +
+  "Platload's own hourly method (the report names which); neither is a certified implementation, and it is not the approved procedure " +
+  "of any standard or code. Local codes and a licensed professional's review govern.";
 
 const finite = z.number().refine(Number.isFinite, { error: "must be a finite number" });
 const nonNegative = finite.refine((value) => value >= 0, { error: "must be 0 or more" });
@@ -139,9 +141,11 @@ export const lotReportSchema = z.object({
     sensibleBtuh: nonNegative,
     latentBtuh: nonNegative,
     totalBtuh: nonNegative,
-    peakHour: z.number().int().min(1).max(24),
+    /** Solar hour of the peak; null for a procedure that gives the peak only. */
+    peakHour: z.number().int().min(1).max(24).nullable(),
     byComponent: z.array(z.object({ component: z.string(), sensibleBtuh: finite, latentBtuh: finite })),
-    hourlySensibleBtuh: z.array(finite).length(24, { error: "must hold 24 hourly values (solar hours 1–24)" }),
+    /** Solar hours 1–24, or empty for a procedure that gives the peak only. */
+    hourlySensibleBtuh: z.array(finite).refine((values) => values.length === 0 || values.length === 24, { error: "must hold 24 hourly values (solar hours 1–24), or none for a procedure that gives the peak only" }),
     tons: nonNegative,
     floorAreaPerTonFt2: nonNegative,
     airflowCfm: nonNegative,
@@ -151,6 +155,8 @@ export const lotReportSchema = z.object({
   sizingLimits: sizingLimitsSchema,
   approval: z.object({ reviewerName: text("the reviewer's name"), credential: z.string(), approvedOn: text("the approval date") }).nullable(),
   engineVersion: text("the engine version"),
+  /** The procedure the loads come from (the account's, or the permit snapshot's). */
+  procedure: z.enum(LOAD_PROCEDURES, { error: `must be one of ${LOAD_PROCEDURES.join(", ")}` }),
   /** ISO date-time the report was generated. */
   generatedAt: text("the date generated"),
   /** The engine's notes on assumed defaults. */
@@ -444,6 +450,7 @@ export function lotReportFromResults(source: LotReportSource): LotReport {
     sizingLimits: limits,
     approval: source.approval ?? null,
     engineVersion: loads.engineVersion,
+    procedure: loads.procedure,
     generatedAt,
     notes: [...loads.notes],
   };

@@ -2,13 +2,14 @@
  * Per-lot heating and cooling load reports as one PDF (pdfkit, standard Helvetica fonts, no
  * font files or network): a cover page listing the lots when there are several, then one
  * section per lot starting on a new page — lot, plan and revision, facing, design conditions,
- * the envelope with the added insulation as installed, loads by component, the 24-hour
- * sensible cooling profile as a vector chart, the system with its sizing ratios and the
+ * the envelope with the added insulation as installed, the load procedure, loads by component,
+ * the 24-hour sensible cooling profile as a vector chart (when the procedure gives one), the system with its sizing ratios and the
  * limits used, the reviewer's approval, the engine version and the date. Every page's footer
  * carries the caution. The layout is Platload's own.
  */
 import PDFDocument from "pdfkit";
 import { SYSTEM_TYPE_LABELS, REPORT_CAUTION, parseLotReports, type LotReport } from "./lot-report-data";
+import { PEAK_ONLY_NOTE, peakWhen, PROCEDURE_SHORT_LABELS, PROCEDURE_STATEMENTS } from "./procedure-text";
 
 export * from "./lot-report-data";
 
@@ -235,9 +236,11 @@ function coolingProfileChart(cursor: Cursor, report: LotReport): void {
   for (let hour = 2; hour <= 24; hour += 1) doc.lineTo(xOf(hour), yOf(hourly[hour - 1]));
   doc.lineWidth(1.6).strokeColor(COLOR.cooling).stroke();
   const peak = report.cooling.peakHour;
-  doc.circle(xOf(peak), yOf(hourly[peak - 1]), 2.8).fill(COLOR.cooling);
-  const labelX = Math.min(xOf(peak) + 6, x0 + width - 150);
-  doc.font(BOLD).fontSize(7.5).fillColor(COLOR.cooling).text(pdfSafeText(`peak ${btuh(hourly[peak - 1])} Btu/h at hour ${peak}`), labelX, yOf(hourly[peak - 1]) - 12, { width: 150, lineBreak: false });
+  if (peak !== null) {
+    doc.circle(xOf(peak), yOf(hourly[peak - 1]), 2.8).fill(COLOR.cooling);
+    const labelX = Math.min(xOf(peak) + 6, x0 + width - 150);
+    doc.font(BOLD).fontSize(7.5).fillColor(COLOR.cooling).text(pdfSafeText(`peak ${btuh(hourly[peak - 1])} Btu/h at hour ${peak}`), labelX, yOf(hourly[peak - 1]) - 12, { width: 150, lineBreak: false });
+  }
   // Axis titles.
   doc.font(FONT).fontSize(7.5).fillColor(COLOR.muted).text("Solar hour of the design day (1-24)", x0, y0 + plotHeight + 16, { width, align: "center", lineBreak: false });
   doc.save();
@@ -364,6 +367,7 @@ function drawLot(cursor: Cursor, report: LotReport): void {
     cursor,
     [
       ["Reviewer's approval", a ? `Approved by ${a.reviewerName}${a.credential ? `, ${a.credential}` : ""}, on ${a.approvedOn}` : "Not approved: this plan revision has no reviewer's approval."],
+      ["Load procedure", PROCEDURE_STATEMENTS[report.procedure]],
       ["Engine version", `Platload load engine ${report.engineVersion}`],
       ["Generated", dateText(report.generatedAt)],
     ],
@@ -375,9 +379,11 @@ function drawLot(cursor: Cursor, report: LotReport): void {
   // The loads, chart, system and review make the lot's second page.
   newPage(cursor);
   sectionTitle(cursor, "Design loads");
+  write(cursor, `Procedure: ${PROCEDURE_SHORT_LABELS[report.procedure]}`, { size: 8.5, bold: true, color: COLOR.muted });
+  cursor.y += 2;
   tiles(cursor, [
     { label: "HEATING LOAD", value: btuh(h.totalBtuh), unit: `Btu/h at ${num(h.outdoorF)} °F outdoors`, tint: COLOR.heatingTint, color: COLOR.heating },
-    { label: "COOLING TOTAL", value: btuh(c.totalBtuh), unit: `Btu/h at solar hour ${c.peakHour}`, tint: COLOR.coolingTint, color: COLOR.cooling },
+    { label: "COOLING TOTAL", value: btuh(c.totalBtuh), unit: `Btu/h ${peakWhen(c.peakHour)}`, tint: COLOR.coolingTint, color: COLOR.cooling },
     { label: "SENSIBLE / LATENT", value: `${btuh(c.sensibleBtuh)} / ${btuh(c.latentBtuh)}`, unit: `Btu/h, sensible heat ratio ${num(c.sensibleHeatRatio, 2)}`, tint: COLOR.coolingTint, color: COLOR.cooling },
     { label: "TONS · FT² PER TON", value: `${num(c.tons, 2)} · ${num(c.floorAreaPerTonFt2)}`, unit: `${num(c.airflowCfm)} cfm cooling airflow`, tint: COLOR.band, color: COLOR.ink },
   ]);
@@ -396,7 +402,7 @@ function drawLot(cursor: Cursor, report: LotReport): void {
   table(
     cursor,
     [
-      { header: `Cooling at hour ${c.peakHour} (Btu/h)`, width: coolingWidth - 3 * 58 },
+      { header: c.peakHour === null ? "Cooling at the design peak (Btu/h)" : `Cooling at hour ${c.peakHour} (Btu/h)`, width: coolingWidth - 3 * 58 },
       { header: "Sensible", width: 58, align: "right" },
       { header: "Latent", width: 58, align: "right" },
       { header: "Total", width: 58, align: "right" },
@@ -406,8 +412,14 @@ function drawLot(cursor: Cursor, report: LotReport): void {
   );
   cursor.y = Math.max(cursor.y, heatingBottom) + 4;
 
-  sectionTitle(cursor, "24-hour sensible cooling profile (design day)", COLOR.cooling);
-  coolingProfileChart(cursor, report);
+  // A peak-only procedure has no profile to draw: say so instead of drawing an empty chart.
+  if (c.hourlySensibleBtuh.length === 24) {
+    sectionTitle(cursor, "24-hour sensible cooling profile (design day)", COLOR.cooling);
+    coolingProfileChart(cursor, report);
+  } else {
+    write(cursor, PEAK_ONLY_NOTE, { size: 8, color: COLOR.muted });
+    cursor.y += 4;
+  }
 
   // Equipment and sizing.
   const limits = report.sizingLimits;
@@ -478,6 +490,7 @@ function drawCover(cursor: Cursor, reports: readonly LotReport[], title: string,
       ["Lots", String(reports.length)],
       ["Generated", dateText(generatedAt)],
       ["Engine version", [...new Set(reports.map((r) => r.engineVersion))].join(", ")],
+      ["Load procedure", [...new Set(reports.map((r) => PROCEDURE_SHORT_LABELS[r.procedure]))].join("; ")],
       ["Approved plans", `${reports.filter((r) => r.approval !== null).length} of ${reports.length} lots`],
     ],
     { labelWidth: 90 },
