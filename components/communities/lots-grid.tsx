@@ -8,6 +8,8 @@ import { fmtInt, gridTheme } from "@/components/grid/grid-theme";
 import { Button } from "@/components/ui/field";
 import type { LotResults } from "@/db/recompute";
 import { api, ApiError } from "@/lib/client/api";
+import type { LoadProcedure } from "@/lib/load/results";
+import { PROCEDURE_SHORT_LABELS } from "@/lib/reports/procedure-text";
 import { facingLabel, parseFacing } from "@/lib/workbook/facing";
 import { LOT_STATUSES } from "@/lib/workbook/lot-columns";
 
@@ -29,6 +31,9 @@ export interface GridLot {
   currentDiffers: boolean;
   snapshotRevisionNumber: number | null;
   liveLoads: LotLoads | null;
+  /** The procedure of the loads shown (a frozen lot's snapshot's), and of the live results. */
+  procedure: LoadProcedure | null;
+  liveProcedure: LoadProcedure | null;
   equipmentSystemId: number | null;
   equipmentOverride: boolean;
   systemCode: string | null;
@@ -59,7 +64,7 @@ const BEST_FIT = "(best fit)";
 export function LotsGrid({ communityId, canEdit, canPermit, canOverride }: { communityId: number; canEdit: boolean; canPermit: boolean; canOverride: boolean }) {
   const queryClient = useQueryClient();
   const key = useMemo(() => ["lots", communityId], [communityId]);
-  const lotsQuery = useQuery({ queryKey: key, queryFn: () => api<{ lots: GridLot[] }>(`/api/communities/${communityId}/lots`) });
+  const lotsQuery = useQuery({ queryKey: key, queryFn: () => api<{ lots: GridLot[]; accountProcedure: LoadProcedure }>(`/api/communities/${communityId}/lots`) });
   const plansQuery = useQuery({ queryKey: ["plan-codes"], queryFn: () => api<{ plans: { id: number; planCode: string; name: string }[] }>("/api/plans/codes") });
   const systemsQuery = useQuery({ queryKey: ["equipment"], queryFn: () => api<{ systems: { id: number; cells: Record<string, string | number | null> }[] }>("/api/equipment") });
   const gridApi = useRef<GridApi<Row> | null>(null);
@@ -187,8 +192,9 @@ export function LotsGrid({ communityId, canEdit, canPermit, canOverride }: { com
         tooltipValueGetter: (p) => {
           const l = lot(p);
           if (!l?.frozen) return undefined;
+          const byOther = l.liveProcedure && l.procedure && l.liveProcedure !== l.procedure ? ` by ${PROCEDURE_SHORT_LABELS[l.liveProcedure]} (the snapshot's loads are by ${PROCEDURE_SHORT_LABELS[l.procedure]})` : "";
           return l.currentDiffers && l.liveLoads
-            ? `Frozen at permit submission. The current plan would give cooling ${fmtInt(l.liveLoads.coolingTotalBtuh)} Btu/h and heating ${fmtInt(l.liveLoads.heatingBtuh)} Btu/h; take a new snapshot to use it.`
+            ? `Frozen at permit submission. The current plan would give cooling ${fmtInt(l.liveLoads.coolingTotalBtuh)} Btu/h and heating ${fmtInt(l.liveLoads.heatingBtuh)} Btu/h${byOther}; take a new snapshot to use it.`
             : "Frozen at permit submission; later plan edits do not change it.";
         },
         cellClass: (p) => (lot(p)?.currentDiffers ? "cell-error" : ""),
@@ -199,6 +205,18 @@ export function LotsGrid({ communityId, canEdit, canPermit, canOverride }: { com
       num("coolingTotalBtuh", "Cool total (Btu/h)", "cell-cool"),
       { colId: "tons", headerName: "Tons", width: 66, editable: false, valueGetter: (p) => loads(p)?.tons ?? null, valueFormatter: (p) => (p.value === null ? "" : Number(p.value).toFixed(2)), cellClass: "num cell-computed" },
       num("floorAreaPerTonFt2", "ft²/ton", "", 76),
+      {
+        colId: "procedure",
+        headerName: "Procedure",
+        width: 150,
+        editable: false,
+        headerTooltip: "The load procedure of the loads shown: the account's, or a frozen lot's snapshot's",
+        valueGetter: (p) => {
+          const procedure = lot(p)?.procedure;
+          return procedure ? PROCEDURE_SHORT_LABELS[procedure] : "";
+        },
+        cellClass: "cell-computed",
+      },
       { colId: "rank", headerName: "Facing rank", width: 88, editable: false, headerTooltip: "1–4: where this facing's cooling falls among the plan's four facings (1 = highest)", valueGetter: (p) => loads(p)?.facingRank ?? null, cellClass: "num cell-computed" },
       {
         colId: "changed",
@@ -208,7 +226,8 @@ export function LotsGrid({ communityId, canEdit, canPermit, canOverride }: { com
         valueGetter: (p) => (loads(p)?.changed && !lot(p)?.frozen ? "changed" : ""),
         tooltipValueGetter: (p) => {
           const l = loads(p);
-          return l?.changed && l.previous ? `Last recompute changed this lot: cooling ${fmtInt(l.previous.coolingTotalBtuh)} → ${fmtInt(l.coolingTotalBtuh)} Btu/h, heating ${fmtInt(l.previous.heatingBtuh)} → ${fmtInt(l.heatingBtuh)} Btu/h.` : undefined;
+          const procedureChange = l?.previous?.procedure && l.procedure && l.previous.procedure !== l.procedure ? ` (procedure ${PROCEDURE_SHORT_LABELS[l.previous.procedure]} → ${PROCEDURE_SHORT_LABELS[l.procedure]})` : "";
+          return l?.changed && l.previous ? `Last recompute changed this lot: cooling ${fmtInt(l.previous.coolingTotalBtuh)} → ${fmtInt(l.coolingTotalBtuh)} Btu/h, heating ${fmtInt(l.previous.heatingBtuh)} → ${fmtInt(l.heatingBtuh)} Btu/h${procedureChange}.` : undefined;
         },
         cellClass: "cell-computed",
       },
@@ -335,7 +354,11 @@ export function LotsGrid({ communityId, canEdit, canPermit, canOverride }: { com
             Take a new permit snapshot of lot {frozenSelected[0].lotNumber}
           </Button>
         ) : null}
-        <span className="ml-auto text-xs text-zinc-500" data-testid="lot-count">
+        <span className="ml-auto text-xs text-zinc-600" data-testid="lots-procedure">
+          Loads by {PROCEDURE_SHORT_LABELS[lotsQuery.data.accountProcedure]}
+          {lotsQuery.data.lots.some((l) => l.frozen && l.procedure !== null && l.procedure !== lotsQuery.data.accountProcedure) ? "; frozen lots keep their snapshot's" : ""}
+        </span>
+        <span className="text-xs text-zinc-500" data-testid="lot-count">
           {lotsQuery.data.lots.length.toLocaleString()} lots
         </span>
       </div>

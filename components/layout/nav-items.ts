@@ -10,4 +10,5 @@ export const NAV_ITEMS: (NavItem & { permission: Permission })[] = [
   { href: "/imports", label: "Imports", permission: "imports.read" },
   { href: "/history", label: "History", permission: "read" },
   { href: "/team", label: "Team", permission: "read" },
+  { href: "/account", label: "Account", permission: "read" },
 ];

@@ -7,6 +7,8 @@ import Link from "next/link";
 import { useCallback, useMemo, useRef, useState } from "react";
 import { fmtInt, fmtNum, gridTheme } from "@/components/grid/grid-theme";
 import { Caution } from "@/components/ui/caution";
+import type { LoadProcedure } from "@/lib/load/results";
+import { PROCEDURE_SHORT_LABELS } from "@/lib/reports/procedure-text";
 import { TableFileLinks } from "@/components/ui/table-file-links";
 import { Button, FormError } from "@/components/ui/field";
 import type { FacingSummary } from "@/db/queries/plans";
@@ -35,6 +37,9 @@ export interface LibraryPlan {
 
 interface Library {
   reference: { communities: { id: number; name: string }[]; community: { id: number; name: string } | null };
+  /** The account's procedure: the computed columns use it. */
+  procedure: LoadProcedure;
+  procedureLabel: string;
   plans: LibraryPlan[];
 }
 
@@ -199,7 +204,7 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
         headerName: `Front to ${facing} (Btu/h)`,
         children: [
           { colId: `heat_${facing}`, headerName: "Heat", headerTooltip: `Heating load with the front facing ${facing}, Btu/h`, width: 68, pinned: "right", editable: false, filter: false, suppressHeaderMenuButton: true, valueGetter: (p) => f(p)?.heatingBtuh ?? null, valueFormatter: (p) => fmtInt(p.value), cellClass: "num cell-computed cell-heat" },
-          { colId: `cool_${facing}`, headerName: "Cool", headerTooltip: `Cooling total (sensible + latent) at the peak hour with the front facing ${facing}, Btu/h`, width: 68, pinned: "right", editable: false, filter: false, suppressHeaderMenuButton: true, valueGetter: (p) => f(p)?.coolingTotalBtuh ?? null, valueFormatter: (p) => fmtInt(p.value), cellClass: (p) => ["num", "cell-computed", "cell-cool", ...(worst(p) ? ["cell-worst"] : [])] },
+          { colId: `cool_${facing}`, headerName: "Cool", headerTooltip: `Cooling total (sensible + latent) at the design peak with the front facing ${facing}, Btu/h`, width: 68, pinned: "right", editable: false, filter: false, suppressHeaderMenuButton: true, valueGetter: (p) => f(p)?.coolingTotalBtuh ?? null, valueFormatter: (p) => fmtInt(p.value), cellClass: (p) => ["num", "cell-computed", "cell-cool", ...(worst(p) ? ["cell-worst"] : [])] },
           { colId: `tons_${facing}`, headerName: "Tons", headerTooltip: "Cooling total ÷ 12,000 Btu/h", width: 52, pinned: "right", editable: false, filter: false, suppressHeaderMenuButton: true, valueGetter: (p) => f(p)?.tons ?? null, valueFormatter: (p) => (p.value === null ? "" : Number(p.value).toFixed(2)), cellClass: "num cell-computed" },
         ],
       };
@@ -365,6 +370,9 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
             ))}
           </select>
         </div>
+        <p className="max-w-64 text-xs text-zinc-600" data-testid="library-procedure" title={data.procedureLabel}>
+          Computed columns by <span className="font-medium text-zinc-800">{PROCEDURE_SHORT_LABELS[data.procedure]}</span>, the account&apos;s procedure (open a sheet to compare both)
+        </p>
         <div>
           <label htmlFor="jump-column" className="block text-xs font-medium text-zinc-600">
             Go to column

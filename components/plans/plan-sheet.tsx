@@ -5,10 +5,12 @@ import Link from "next/link";
 import { useState } from "react";
 import { Bar, BarChart, CartesianGrid, Legend, Line, LineChart, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import { fmtInt } from "@/components/grid/grid-theme";
+import { ProcedureComparison, type ProcedureFacings } from "@/components/plans/procedure-comparison";
 import { Caution } from "@/components/ui/caution";
 import { Button, FormError, TextField } from "@/components/ui/field";
 import { api, ApiError } from "@/lib/client/api";
-import type { PlanFacings } from "@/lib/load/results";
+import type { LoadProcedure, PlanFacings } from "@/lib/load/results";
+import { PEAK_ONLY_NOTE, PROCEDURE_SHORT_LABELS } from "@/lib/reports/procedure-text";
 import { readRowCells } from "@/lib/workbook/columns";
 import { isFormula } from "@/lib/workbook/formula";
 import { PLAN_COLUMN_BY_KEY, PLAN_COLUMN_GROUPS, PLAN_COLUMNS } from "@/lib/workbook/plan-columns";
@@ -20,8 +22,11 @@ interface Sheet {
   current: { id: number; number: number; status: "draft" | "approved"; cells: Record<string, string | number | boolean | null> };
   revisions: { id: number; number: number; status: string; createdAt: string; createdBy: string | null; approverName: string | null; approverCredential: string | null; approvedOn: string | null }[];
   history: { id: number; action: string; summary: string; before: unknown; after: unknown; createdAt: string; userName: string | null }[];
+  /** The account's procedure's result: the one that sizes equipment. */
   result: PlanFacings | null;
   loadsError: string | null;
+  accountProcedure: LoadProcedure;
+  procedures: ProcedureFacings[];
 }
 
 const HEAT = "#b4441c";
@@ -56,6 +61,9 @@ export function PlanSheet({ planId, canEdit, canApprove, memberName, initialComm
   const s = sheet.data;
   const result = s.result;
   const worst = result?.facings.find((f) => f.label === result.worst.label) ?? null;
+  // The 24-hour profile comes from a procedure that gives one: the account's, else the other one's for comparison.
+  const hasProfile = (p: ProcedureFacings) => !!p.result && p.result.facings.every((f) => f.cooling.hourlySensibleBtuh.length === 24);
+  const profileSource = s.procedures.find((p) => p.sizesEquipment && hasProfile(p)) ?? s.procedures.find(hasProfile) ?? null;
 
   return (
     <div className="flex flex-col gap-5" data-testid="plan-sheet">
@@ -90,7 +98,7 @@ export function PlanSheet({ planId, canEdit, canApprove, memberName, initialComm
       {result ? (
         <section aria-labelledby="facing-heading" className="rounded border border-zinc-200 bg-white p-3">
           <h2 id="facing-heading" className="mb-2 text-sm font-semibold">
-            Loads by facing
+            Loads by facing — <span data-testid="facing-procedure">{PROCEDURE_SHORT_LABELS[result.procedure]}</span>, the procedure that sizes equipment
           </h2>
           <table className="w-full border-collapse text-sm" data-testid="facing-matrix">
             <thead className="bg-zinc-100 text-xs text-zinc-600">
@@ -121,7 +129,9 @@ export function PlanSheet({ planId, canEdit, canApprove, memberName, initialComm
                   <td className="num px-2 py-1">{f.cooling.tons.toFixed(2)}</td>
                   <td className="num px-2 py-1">{fmtInt(f.cooling.floorAreaPerTonFt2)}</td>
                   <td className="num px-2 py-1">{f.cooling.sensibleHeatRatio.toFixed(2)}</td>
-                  <td className="num px-2 py-1">{f.cooling.peakHour}:00</td>
+                  <td className="num px-2 py-1" title={f.cooling.peakHour === null ? PEAK_ONLY_NOTE : undefined}>
+                    {f.cooling.peakHour === null ? "peak only" : `${f.cooling.peakHour}:00`}
+                  </td>
                   <td className="num px-2 py-1">{fmtInt(f.cooling.airflowCfm)}</td>
                 </tr>
               ))}
@@ -132,6 +142,8 @@ export function PlanSheet({ planId, canEdit, canApprove, memberName, initialComm
           </p>
         </section>
       ) : null}
+
+      <ProcedureComparison procedures={s.procedures} componentLabels={COMPONENT_LABELS} initialFacing={result?.worst.label ?? null} />
 
       {result && worst ? (
         <div className="grid gap-4 xl:grid-cols-3">
@@ -166,18 +178,7 @@ export function PlanSheet({ planId, canEdit, canApprove, memberName, initialComm
               <Bar dataKey="Cooling sensible" fill={COOL} />
             </BarChart>
           </ChartCard>
-          <ChartCard title="24-hour cooling profile (sensible, Btu/h)" testId="chart-profile">
-            <LineChart data={Array.from({ length: 24 }, (_, h) => Object.fromEntries([["hour", h + 1], ...result.facings.map((f) => [`Front ${f.label}`, Math.round(f.cooling.hourlySensibleBtuh[h])])]))}>
-              <CartesianGrid strokeDasharray="3 3" />
-              <XAxis dataKey="hour" fontSize={11} label={{ value: "solar hour", position: "insideBottomRight", offset: -2, fontSize: 11 }} />
-              <YAxis fontSize={11} tickFormatter={(v: number) => `${Math.round(v / 1000)}k`} />
-              <Tooltip formatter={(v) => `${fmtInt(Number(v))} Btu/h`} />
-              <Legend />
-              {result.facings.map((f) => (
-                <Line key={f.label} type="monotone" dataKey={`Front ${f.label}`} stroke={FACING_COLORS[f.label]} dot={false} strokeWidth={f.label === result.worst.label ? 2.5 : 1.5} />
-              ))}
-            </LineChart>
-          </ChartCard>
+          {profileSource?.result ? <ProfileChart source={profileSource.result} sizing={profileSource.sizesEquipment} /> : null}
         </div>
       ) : null}
 
@@ -250,6 +251,25 @@ export function PlanSheet({ planId, canEdit, canApprove, memberName, initialComm
       </div>
       <Caution />
     </div>
+  );
+}
+
+/** The 24-hour sensible profile of each facing, from a procedure that gives one (named when it is not the sizing one). */
+function ProfileChart({ source, sizing }: { source: PlanFacings; sizing: boolean }) {
+  const title = `24-hour cooling profile (sensible, Btu/h) — ${PROCEDURE_SHORT_LABELS[source.procedure]}${sizing ? "" : ", for comparison: the sizing procedure gives the peak only"}`;
+  return (
+    <ChartCard title={title} testId="chart-profile">
+      <LineChart data={Array.from({ length: 24 }, (_, h) => Object.fromEntries([["hour", h + 1], ...source.facings.map((f) => [`Front ${f.label}`, Math.round(f.cooling.hourlySensibleBtuh[h])])]))}>
+        <CartesianGrid strokeDasharray="3 3" />
+        <XAxis dataKey="hour" fontSize={11} label={{ value: "solar hour", position: "insideBottomRight", offset: -2, fontSize: 11 }} />
+        <YAxis fontSize={11} tickFormatter={(v: number) => `${Math.round(v / 1000)}k`} />
+        <Tooltip formatter={(v) => `${fmtInt(Number(v))} Btu/h`} />
+        <Legend />
+        {source.facings.map((f) => (
+          <Line key={f.label} type="monotone" dataKey={`Front ${f.label}`} stroke={FACING_COLORS[f.label]} dot={false} strokeWidth={f.label === source.worst.label ? 2.5 : 1.5} />
+        ))}
+      </LineChart>
+    </ChartCard>
   );
 }
 

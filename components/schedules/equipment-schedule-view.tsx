@@ -1,4 +1,6 @@
 import { DataTable } from "@/components/ui/data-table";
+import type { LoadProcedure } from "@/lib/load/results";
+import { PROCEDURE_SHORT_LABELS } from "@/lib/reports/procedure-text";
 
 interface SystemCount {
   systemCode: string;
@@ -21,7 +23,9 @@ export interface ScheduleData {
     caution: string;
   };
   limits: { coolingMinPct: number; coolingMaxPct: number; heatPumpCoolingMaxPct: number; heatingMinPct: number; heatingMaxPct: number };
-  lots: { lotId: number; lotNumber: string; status: string; plannedStart: string | null; systemCode: string | null; overridden: boolean; reason: string | null }[];
+  lots: { lotId: number; lotNumber: string; status: string; plannedStart: string | null; systemCode: string | null; overridden: boolean; reason: string | null; procedure: LoadProcedure | null }[];
+  accountProcedure: LoadProcedure;
+  procedures: { procedure: LoadProcedure; label: string; lotCount: number }[];
 }
 
 const SYSTEM_TYPE_LABELS: Record<string, string> = {
@@ -99,6 +103,11 @@ export function EquipmentScheduleView({ data }: { data: ScheduleData }) {
         />
       </div>
 
+      <p className="text-xs text-zinc-600" data-testid="schedule-procedures">
+        Systems chosen for loads by{" "}
+        {data.procedures.length === 0 ? "no procedure yet (no lot has loads)" : data.procedures.map((p) => `${PROCEDURE_SHORT_LABELS[p.procedure]} (${int(p.lotCount)} lot${p.lotCount === 1 ? "" : "s"})`).join("; ")}. The account sizes equipment by {PROCEDURE_SHORT_LABELS[data.accountProcedure]}
+        {data.procedures.some((p) => p.procedure !== data.accountProcedure) ? "; lots frozen for permit keep the procedure of their snapshot" : ""}.
+      </p>
       <p className="text-xs text-zinc-600" data-testid="limits-used">
         Sizing limits used: cooling capacity {limits.coolingMinPct}–{limits.coolingMaxPct} % of the cooling total load (a heat pump where the heating load is the larger, up to {limits.heatPumpCoolingMaxPct} %); heating capacity at least {limits.heatingMinPct} % of the heating load, furnace
         output at most {limits.heatingMaxPct} %.

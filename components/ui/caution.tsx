@@ -1,6 +1,6 @@
 /** The caution carried by every result page and report. */
 export const CAUTION_TEXT =
-  "Loads shown here are design estimates from Platload's own method built on published ASHRAE equations. They are not any standard's approved procedure; local codes and a licensed professional's review govern equipment sizing.";
+  "Loads shown here are design estimates, by the handbook's published residential load-factor procedure as implemented in Platload or by Platload's own hourly method (each result names which). Neither is a certified implementation or any standard's approved procedure; local codes and a licensed professional's review govern equipment sizing.";
 
 export function Caution({ className = "" }: { className?: string }) {
   return (
