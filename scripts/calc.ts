@@ -3,25 +3,30 @@
  *
  *   npm run calc -- FILE [--site site.json] [--heating-db F --cooling-db F --cooling-wb F
  *                   --daily-range F --latitude DEG --elevation FT [--longitude DEG]
- *                   [--design-month N] [--indoor-heating F] [--indoor-cooling F] [--indoor-rh PCT]] [--json]
+ *                   [--design-month N] [--indoor-heating F] [--indoor-cooling F] [--indoor-rh PCT]]
+ *                   [--procedure residential-load-factor|hourly] [--json]
  *
  * FILE is a plan library (.csv or .xlsx in the layout of templates/) or JSON of the engine's
  * plan input (one plan, an array of plans, or { "plans": [...] }). Design conditions come from
  * --site (JSON of the engine's site conditions) and/or the flags (flags override the file).
  *
+ * --procedure names the load procedure (default: the handbook's residential load-factor
+ * procedure, as for a new account).
+ *
  * Prints, for every plan and facing (front to N, E, S, W), the heating load, cooling sensible,
  * latent and total, tons and ft² per ton, the worst facing and the spread; per plan the air
  * leakage as given and the heating U-factor of each assembly with where it came from (entered
- * directly or computed from the base assembly and added insulation); the engine version and the
- * caution line. --json prints the full results instead. A JSON plan may carry a `planCode`
- * beside the engine's fields (the engine's input is strict, so it is taken off first).
+ * directly or computed from the base assembly and added insulation); the procedure, the engine
+ * version and the caution line. --json prints the full results instead. A JSON plan may carry a
+ * `planCode` beside the engine's fields (the engine's input is strict, so it is taken off first).
  *
  * Exit codes: 0 done; 2 bad input (every bad cell listed: row, column, reason); 1 unexpected failure.
  */
 import { readFile } from "node:fs/promises";
 import path from "node:path";
 import { LoadInputError } from "../lib/load/errors";
-import { computePlanFacings, ENGINE_VERSION } from "../lib/load/index";
+import { computePlanFacings, DEFAULT_LOAD_PROCEDURE, ENGINE_VERSION, LOAD_PROCEDURE_LABELS, LOAD_PROCEDURES, type LoadProcedure } from "../lib/load/index";
+import { PROCEDURE_STATEMENTS } from "../lib/reports/procedure-text";
 import { safeParsePlanInput, safeParseSiteConditions, type PlanInput, type SiteConditions } from "../lib/load/input";
 import { formatTableErrors } from "../lib/workbook/columns";
 import { airLeakageText, planAssemblies } from "../lib/workbook/plan-assemblies";
@@ -30,13 +35,15 @@ import { readTableFile, TableFileError } from "../lib/workbook/table-io";
 import { readQuantity } from "../lib/workbook/units";
 
 const CAUTION =
-  "Caution: these are design estimates from Platload's own hourly method, not any standard's approved procedure. " +
+  "Caution: these are design estimates, by the handbook's published residential load-factor procedure as implemented in Platload or by " +
+  "Platload's own hourly method (named above); neither is a certified implementation or any standard's approved procedure. " +
   "Local codes and the review of a licensed professional govern equipment sizing.";
 
 const USAGE = `usage: npm run calc -- FILE [--site site.json] [--heating-db F] [--cooling-db F] [--cooling-wb F]
        [--daily-range F] [--latitude DEG] [--elevation FT] [--longitude DEG] [--design-month N]
-       [--indoor-heating F] [--indoor-cooling F] [--indoor-rh PCT] [--json]
-FILE: a plan library .csv or .xlsx (layout of templates/) or a .json plan input (one, an array, or {"plans": [...]}).`;
+       [--indoor-heating F] [--indoor-cooling F] [--indoor-rh PCT] [--procedure ${LOAD_PROCEDURES.join("|")}] [--json]
+FILE: a plan library .csv or .xlsx (layout of templates/) or a .json plan input (one, an array, or {"plans": [...]}).
+--procedure: the load procedure (default ${DEFAULT_LOAD_PROCEDURE}: ${LOAD_PROCEDURE_LABELS[DEFAULT_LOAD_PROCEDURE]}).`;
 
 /** Bad input: the message is printed as is and the exit code is 2. */
 class InputProblem extends Error {}
@@ -61,6 +68,7 @@ interface Options {
   file: string;
   sitePath?: string;
   siteFlags: Map<SiteFlag, number>;
+  procedure: LoadProcedure;
   json: boolean;
 }
 
@@ -68,6 +76,7 @@ function parseArgs(argv: readonly string[]): Options {
   let file: string | undefined;
   let sitePath: string | undefined;
   let json = false;
+  let procedure: LoadProcedure = DEFAULT_LOAD_PROCEDURE;
   const siteFlags = new Map<SiteFlag, number>();
   for (let index = 0; index < argv.length; index += 1) {
     const arg = argv[index];
@@ -88,6 +97,13 @@ function parseArgs(argv: readonly string[]): Options {
       sitePath = takeValue();
       continue;
     }
+    if (name === "--procedure") {
+      const text = takeValue();
+      const known = LOAD_PROCEDURES.find((candidate) => candidate === text);
+      if (!known) throw new InputProblem(`--procedure ${text}: not a load procedure; use ${LOAD_PROCEDURES.join(" or ")}\n${USAGE}`);
+      procedure = known;
+      continue;
+    }
     const siteFlag = SITE_FLAGS.find((candidate) => candidate.flag === name);
     if (siteFlag) {
       const text = takeValue();
@@ -101,7 +117,7 @@ function parseArgs(argv: readonly string[]): Options {
     file = arg;
   }
   if (file === undefined) throw new InputProblem(`FILE is missing\n${USAGE}`);
-  return { file, sitePath, siteFlags, json };
+  return { file, sitePath, siteFlags, procedure, json };
 }
 
 async function readJsonFile(filePath: string, what: string): Promise<unknown> {
@@ -214,8 +230,9 @@ function alignTable(header: readonly string[], rows: readonly (readonly string[]
   return [line(header), widths.map((width) => "-".repeat(width)).join("  "), ...rows.map(line)];
 }
 
-function printTable(plans: readonly NamedPlan[], results: readonly ReturnType<typeof computePlanFacings>[], site: SiteConditions, notes: readonly string[]): void {
+function printTable(plans: readonly NamedPlan[], results: readonly ReturnType<typeof computePlanFacings>[], site: SiteConditions, notes: readonly string[], procedure: LoadProcedure): void {
   const out: string[] = [];
+  out.push(`Load procedure: ${PROCEDURE_STATEMENTS[procedure]}`);
   out.push(
     `Design conditions: ${site.name ?? "(unnamed site)"}; latitude ${site.latitudeDeg}°, elevation ${integer.format(site.elevationFt)} ft; ` +
       `heating ${site.heatingOutdoorDbF} °F outdoor / ${site.indoorHeatingF} °F indoor; cooling ${site.coolingOutdoorDbF} °F dry bulb, ` +
@@ -258,7 +275,7 @@ function printTable(plans: readonly NamedPlan[], results: readonly ReturnType<ty
     for (const note of assumptions) out.push(`  Assumed: ${note}`);
     out.push("");
   });
-  out.push(`Engine version ${ENGINE_VERSION}`);
+  out.push(`Engine version ${ENGINE_VERSION}, load procedure ${procedure}`);
   out.push(CAUTION);
   console.log(out.join("\n"));
 }
@@ -283,7 +300,7 @@ async function main(): Promise<number> {
   const refused: string[] = [];
   for (const plan of plans) {
     try {
-      results.push(computePlanFacings(plan.input, site));
+      results.push(computePlanFacings(plan.input, site, { procedure: options.procedure }));
     } catch (error) {
       if (!(error instanceof LoadInputError)) throw error;
       for (const issue of error.issues) {
@@ -299,6 +316,8 @@ async function main(): Promise<number> {
   if (options.json) {
     const report = {
       engineVersion: ENGINE_VERSION,
+      procedure: options.procedure,
+      procedureLabel: LOAD_PROCEDURE_LABELS[options.procedure],
       caution: CAUTION,
       notes,
       site,
@@ -306,7 +325,7 @@ async function main(): Promise<number> {
     };
     console.log(JSON.stringify(report, null, 2));
   } else {
-    printTable(plans, results, site, notes);
+    printTable(plans, results, site, notes, options.procedure);
   }
   return 0;
 }
