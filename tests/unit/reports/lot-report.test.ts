@@ -8,8 +8,11 @@ import path from "node:path";
 import { PDFParse } from "pdf-parse";
 import { beforeAll, describe, expect, it } from "vitest";
 import { DEFAULT_SIZING_LIMITS, loadsFromFacing, selectEquipment } from "@/lib/equipment";
-import { ENGINE_VERSION, LoadInputError, computeFacingLoads, parseSiteConditions, type FacingLoads } from "@/lib/load";
+import { ENGINE_VERSION, LOAD_PROCEDURE_LABELS, LoadInputError, computeFacingLoads, parseSiteConditions, type FacingLoads, type LoadProcedure } from "@/lib/load";
 import {
+  PEAK_ONLY_NOTE,
+  PROCEDURE_SHORT_LABELS,
+  PROCEDURE_STATEMENTS,
   REPORT_CAUTION,
   ReportInputError,
   compassLabel,
@@ -23,6 +26,7 @@ import {
 import { catalogForHeatingDesign, validateEquipmentTable, type EquipmentCatalogEntry } from "@/lib/workbook/equipment-columns";
 import { validatePlanTable, type ValidPlanRow } from "@/lib/workbook/plan-columns";
 import { readCsv } from "@/lib/workbook/table-io";
+import { engineRunsLoadFactor } from "../../support/engine-procedures";
 
 const templates = path.resolve(__dirname, "../../../templates");
 const readTemplate = (name: string) => readFileSync(path.join(templates, name), "utf8");
@@ -38,10 +42,10 @@ const CATALOG: EquipmentCatalogEntry[] = catalogForHeatingDesign(catalogTable.sy
 
 const GENERATED_AT = "2026-12-01T15:30:00.000Z";
 
-function sourceFor(index: number, overrides: Partial<LotReportSource> = {}): LotReportSource {
+function sourceFor(index: number, overrides: Partial<LotReportSource> = {}, procedure: LoadProcedure = "hourly"): LotReportSource {
   const plan = PLANS[index % PLANS.length];
   const facingDeg = [0, 90, 225][index % 3];
-  const loads = computeFacingLoads(plan.input, SITE, facingDeg);
+  const loads = computeFacingLoads(plan.input, SITE, facingDeg, { procedure });
   const selection = selectEquipment({ loads: loadsFromFacing(loads), catalog: CATALOG });
   return {
     builderAccountName: "Wrenfield Homes (invented)",
@@ -153,11 +157,67 @@ describe("a 3-lot permit packet from engine output", () => {
   });
 });
 
+async function textOf(reports: LotReport[]): Promise<{ pages: string[]; all: string }> {
+  const parser = new PDFParse({ data: new Uint8Array(await renderLotReportsPdf(reports)) });
+  const result = await parser.getText();
+  await parser.destroy();
+  return { pages: result.pages.map((page) => squash(page.text)), all: squash(result.text) };
+}
+
+describe("the report states its load procedure", () => {
+  it("the hourly method: named on the lot's pages and the cover, with its peak hour and 24-hour profile", async () => {
+    const reports = [sourceFor(0), sourceFor(1)].map(lotReportFromResults);
+    for (const report of reports) expect(report.procedure).toBe("hourly");
+    const { pages, all } = await textOf(reports);
+    expect(pages[0]).toContain(`Load procedure ${PROCEDURE_SHORT_LABELS.hourly}`); // the cover
+    expect(all).toContain(squash(`Load procedure ${PROCEDURE_STATEMENTS.hourly}`));
+    expect(all.split(`Procedure: ${PROCEDURE_SHORT_LABELS.hourly}`)).toHaveLength(1 + reports.length); // above each lot's loads
+    for (const report of reports) {
+      expect(report.cooling.peakHour).not.toBeNull();
+      expect(all).toContain(`COOLING TOTAL ${report.cooling.totalBtuh.toLocaleString("en-US")} Btu/h at solar hour ${report.cooling.peakHour}`);
+      expect(all).toContain(`Cooling at hour ${report.cooling.peakHour} (Btu/h)`);
+    }
+    expect(all.split("24-hour sensible cooling profile")).toHaveLength(1 + reports.length);
+    expect(all).not.toContain(PEAK_ONLY_NOTE);
+  });
+
+  it.skipIf(!engineRunsLoadFactor)("the handbook's load-factor procedure: named as implemented here; no profile chart and no peak-hour text (skipped while the engine refuses that procedure)", async () => {
+    const report = lotReportFromResults(sourceFor(1, {}, "residential-load-factor"));
+    expect(report.procedure).toBe("residential-load-factor");
+    expect(report.cooling.peakHour).toBeNull();
+    expect(report.cooling.hourlySensibleBtuh).toEqual([]);
+    const { all } = await textOf([report]);
+    expect(all).toContain(squash(`Load procedure ${PROCEDURE_STATEMENTS["residential-load-factor"]}`));
+    expect(PROCEDURE_STATEMENTS["residential-load-factor"]).toMatch(/as implemented in Platload, not a certified or approved implementation/);
+    expect(all).toContain(`Procedure: ${PROCEDURE_SHORT_LABELS["residential-load-factor"]}`);
+    expect(all).toContain(`COOLING TOTAL ${report.cooling.totalBtuh.toLocaleString("en-US")} Btu/h at the design peak`);
+    expect(all).toContain("Cooling at the design peak (Btu/h)");
+    expect(all).toContain(squash(PEAK_ONLY_NOTE));
+    expect(all).not.toContain("24-hour sensible cooling profile");
+    expect(all).not.toMatch(/solar hour \d|at hour \d/);
+  });
+
+  it.skipIf(!engineRunsLoadFactor)("a packet of lots by both procedures lists both on the cover (skipped while the engine refuses that procedure)", async () => {
+    const reports = [lotReportFromResults(sourceFor(0)), lotReportFromResults(sourceFor(1, {}, "residential-load-factor"))];
+    const { pages } = await textOf(reports);
+    expect(pages[0]).toContain(`Load procedure ${PROCEDURE_SHORT_LABELS.hourly}; ${PROCEDURE_SHORT_LABELS["residential-load-factor"]}`);
+  });
+
+  it("a report without a known procedure, or with a profile of the wrong length, is refused by field", async () => {
+    const good = lotReportFromResults(sourceFor(0));
+    await expect(renderLotReportsPdf([{ ...good, procedure: "monthly" as LoadProcedure }])).rejects.toThrow(/reports\.0\.procedure: must be one of residential-load-factor, hourly/);
+    const { procedure: _dropped, ...withoutProcedure } = good;
+    await expect(renderLotReportsPdf([withoutProcedure as LotReport])).rejects.toThrow(/reports\.0\.procedure/);
+    await expect(renderLotReportsPdf([{ ...good, cooling: { ...good.cooling, hourlySensibleBtuh: good.cooling.hourlySensibleBtuh.slice(0, 12) } }])).rejects.toThrow(/reports\.0\.cooling\.hourlySensibleBtuh: must hold 24 hourly values/);
+    expect(LOAD_PROCEDURE_LABELS[good.procedure]).toBe(LOAD_PROCEDURE_LABELS.hourly);
+  });
+});
+
 describe("lotReportFromResults", () => {
   it("sizing ratios are capacity ÷ load, with a heat pump's output at the site's design temperature", () => {
     const hp = CATALOG.find((system) => system.id === "HP30-B10") as EquipmentCatalogEntry;
     const report = lotReportFromResults(sourceFor(1, { selection: { system: hp, overridden: true } }));
-    const loads = computeFacingLoads(PLANS[1].input, SITE, 90);
+    const loads = computeFacingLoads(PLANS[1].input, SITE, 90, { procedure: "hourly" });
     if (report.equipment.status !== "selected") throw new Error("expected a system");
     // By hand: 17,600 + (24 − 17) × (29,000 − 17,600) / 30 = 17,600 + 7 × 380 = 20,260 Btu/h at 24 °F.
     expect(report.equipment.heatingOutputBtuh).toBe(20_260);

@@ -3,6 +3,9 @@ import { mkdtempSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
+import { LOAD_PROCEDURES, type LoadProcedure } from "@/lib/load";
+import { PROCEDURE_STATEMENTS } from "@/lib/reports/procedure-text";
+import { engineRunsLoadFactor } from "../../support/engine-procedures";
 
 const root = path.resolve(__dirname, "../../..");
 
@@ -12,38 +15,82 @@ function calc(...args: string[]): { status: number | null; stdout: string; stder
 }
 
 describe("npm run calc (scripts/calc.ts)", { timeout: 120_000 }, () => {
-  it("prints every plan and facing of the example library, the worst facing, the engine version and the caution", () => {
-    const { status, stdout, stderr } = calc("templates/example-plans.csv", "--site", "templates/example-site.json");
-    expect(stderr).toBe("");
+  // The load-factor runs skip while the engine on this branch refuses that procedure.
+  const runs = (procedure: LoadProcedure) => procedure === "hourly" || engineRunsLoadFactor;
+
+  for (const procedure of LOAD_PROCEDURES) {
+    it.skipIf(!runs(procedure))(`--procedure ${procedure}: every plan and facing of the example library, the worst facing, the procedure, the engine version and the caution${runs(procedure) ? "" : " (skipped while the engine refuses that procedure)"}`, () => {
+      const { status, stdout, stderr } = calc("templates/example-plans.csv", "--site", "templates/example-site.json", "--procedure", procedure);
+      expect(stderr).toBe("");
+      expect(status).toBe(0);
+      for (const code of ["WF-1480", "WF-1860", "WF-2240", "WF-2650", "WF-3150"]) expect(stdout).toContain(code);
+      expect(stdout).toMatch(/Facing\s+Heating Btu\/h\s+Cool sens\. Btu\/h\s+Cool lat\. Btu\/h\s+Cool total Btu\/h\s+Tons\s+ft²\/ton/);
+      for (const facing of ["N", "E", "S", "W"]) {
+        // One aligned row per plan and facing: label then six numbers.
+        const rows = stdout.split("\n").filter((line) => new RegExp(`^\\s+front ${facing}(\\s+[\\d,.]+){6}\\s*$`).test(line));
+        expect(rows).toHaveLength(5);
+      }
+      expect(stdout.match(/Worst facing: front [NESW] \(cooling total [\d,]+ Btu\/h\); spread between facings [\d,]+ Btu\/h/g)).toHaveLength(5);
+      expect(stdout.split("\n")[0]).toBe(`Load procedure: ${PROCEDURE_STATEMENTS[procedure]}`);
+      expect(stdout).toMatch(new RegExp(`Engine version \\d+\\.\\d+\\.\\d+, load procedure ${procedure}\n`));
+      expect(stdout).toMatch(/design estimates.*licensed professional govern/);
+    });
+  }
+
+  it.skipIf(!engineRunsLoadFactor)("without --procedure, the handbook's residential procedure is used and named (skipped while the engine refuses that procedure)", () => {
+    const { status, stdout } = calc("templates/example-plans.csv", "--site", "templates/example-site.json");
     expect(status).toBe(0);
-    for (const code of ["WF-1480", "WF-1860", "WF-2240", "WF-2650", "WF-3150"]) expect(stdout).toContain(code);
-    expect(stdout).toMatch(/Facing\s+Heating Btu\/h\s+Cool sens\. Btu\/h\s+Cool lat\. Btu\/h\s+Cool total Btu\/h\s+Tons\s+ft²\/ton/);
-    for (const facing of ["N", "E", "S", "W"]) {
-      // One aligned row per plan and facing: label then six numbers.
-      const rows = stdout.split("\n").filter((line) => new RegExp(`^\\s+front ${facing}(\\s+[\\d,.]+){6}\\s*$`).test(line));
-      expect(rows).toHaveLength(5);
-    }
-    expect(stdout.match(/Worst facing: front [NESW] \(cooling total [\d,]+ Btu\/h\); spread between facings [\d,]+ Btu\/h/g)).toHaveLength(5);
-    expect(stdout).toMatch(/Engine version \d+\.\d+\.\d+/);
-    expect(stdout).toMatch(/design estimates.*licensed professional govern/);
+    expect(stdout.split("\n")[0]).toBe(`Load procedure: ${PROCEDURE_STATEMENTS["residential-load-factor"]}`);
+    expect(stdout).toContain("load procedure residential-load-factor");
+    const hourly = calc("templates/example-plans.csv", "--site", "templates/example-site.json", "--procedure", "hourly");
+    expect(hourly.stdout.split("\n").slice(1, -3)).not.toEqual(stdout.split("\n").slice(1, -3));
   });
 
-  it("takes design conditions as flags and prints the full results with --json", () => {
+  it("takes design conditions as flags and prints the full results with --json: the hourly method with its 24-hour profile", () => {
     const { status, stdout } = calc(
       "templates/plan-library-template.csv",
-      "--heating-db", "24", "--cooling-db", "99", "--cooling-wb", "75", "--daily-range", "20", "--latitude", "32.9", "--elevation", "600", "--json",
+      "--heating-db", "24", "--cooling-db", "99", "--cooling-wb", "75", "--daily-range", "20", "--latitude", "32.9", "--elevation", "600", "--procedure", "hourly", "--json",
     );
     expect(status).toBe(0);
-    const report = JSON.parse(stdout) as { engineVersion: string; caution: string; plans: { planCode: string; results: { facings: { label: string; heating: { totalBtuh: number }; cooling: { totalBtuh: number; hourlySensibleBtuh: number[] } }[] } }[] };
+    const report = JSON.parse(stdout) as { engineVersion: string; procedure: string; caution: string; plans: { planCode: string; results: { procedure: string; facings: { label: string; procedure: string; heating: { totalBtuh: number }; cooling: { totalBtuh: number; peakHour: number | null; hourlySensibleBtuh: number[] } }[] } }[] };
     expect(report.caution).toMatch(/licensed professional/);
+    expect(report.procedure).toBe("hourly");
     expect(report.plans.map((plan) => plan.planCode)).toEqual(["SAMPLE-1500"]);
+    expect(report.plans[0].results.procedure).toBe("hourly");
     const facings = report.plans[0].results.facings;
     expect(facings.map((facing) => facing.label)).toEqual(["N", "E", "S", "W"]);
     for (const facing of facings) {
+      expect(facing.procedure).toBe("hourly");
       expect(facing.heating.totalBtuh).toBeGreaterThan(0);
       expect(facing.cooling.totalBtuh).toBeGreaterThan(0);
       expect(facing.cooling.hourlySensibleBtuh).toHaveLength(24);
+      expect(facing.cooling.peakHour).toBeGreaterThanOrEqual(1);
     }
+  });
+
+  it.skipIf(!engineRunsLoadFactor)("--json by the load-factor procedure: the peak only, no peak hour and no profile (skipped while the engine refuses that procedure)", () => {
+    const { status, stdout } = calc("templates/example-plans.csv", "--site", "templates/example-site.json", "--procedure", "residential-load-factor", "--json");
+    expect(status).toBe(0);
+    const report = JSON.parse(stdout) as { procedure: string; plans: { results: { procedure: string; facings: { cooling: { totalBtuh: number; peakHour: number | null; hourlySensibleBtuh: number[] } }[] } }[] };
+    expect(report.procedure).toBe("residential-load-factor");
+    for (const plan of report.plans) {
+      expect(plan.results.procedure).toBe("residential-load-factor");
+      for (const facing of plan.results.facings) {
+        expect(facing.cooling.totalBtuh).toBeGreaterThan(0);
+        expect(facing.cooling.peakHour).toBeNull();
+        expect(facing.cooling.hourlySensibleBtuh).toEqual([]);
+      }
+    }
+  });
+
+  it("an unknown --procedure exits 2 naming the choices, with nothing on stdout", () => {
+    const { status, stdout, stderr } = calc("templates/example-plans.csv", "--site", "templates/example-site.json", "--procedure", "monthly");
+    expect(status).toBe(2);
+    expect(stdout).toBe("");
+    expect(stderr).toContain("--procedure monthly: not a load procedure; use residential-load-factor or hourly");
+    const missing = calc("templates/example-plans.csv", "--site", "templates/example-site.json", "--procedure");
+    expect(missing.status).toBe(2);
+    expect(missing.stderr).toContain("--procedure needs a value");
   });
 
   it("a bad plan file: every bad cell by row, column and reason, exit code 2, nothing printed on stdout", () => {
