@@ -19,7 +19,7 @@ import {
 import { ROLES, type Role } from "@/lib/auth/roles";
 import { DEFAULT_LOAD_PROCEDURE, LOAD_PROCEDURES } from "@/lib/load/results";
 
-/** MariaDB rejects drizzle's serial(): an unsigned auto-increment bigint instead (SETUP.md). */
+/** MariaDB rejects drizzle's serial(): an unsigned auto-increment bigint instead (DEVELOPERS.md, MariaDB notes). */
 const id = () => bigint("id", { mode: "number", unsigned: true }).autoincrement().primaryKey();
 const ref = (name: string) => bigint(name, { mode: "number", unsigned: true });
 const createdAt = () => datetime("created_at", { mode: "date", fsp: 3 }).notNull().$defaultFn(() => new Date());

@@ -21,7 +21,8 @@ import { LoadInputError } from "../load/errors";
 import { ReportInputError } from "./errors";
 
 /**
- * The caution every page of a report carries (PRODUCT.md "Rules that matter to users").
+ * The caution every page of a report carries: results are design estimates; local codes and a
+ * licensed professional govern; no procedure is claimed as approved or certified.
  */
 export const REPORT_CAUTION =
   "Results are design estimates, by the handbook's published residential load-factor procedure as implemented in Platload or by " +

@@ -2,7 +2,7 @@ import { expect, test } from "@playwright/test";
 import { signIn, signInAs, signOut } from "./fixtures";
 
 const NAV = ["Plans", "Communities", "Equipment", "Schedules", "Imports", "History", "Team", "Account"];
-// Every role reads every page (PRODUCT.md: a viewer "reads everything, changes nothing"); what a role
+// Every role reads every page (a viewer "reads everything, changes nothing", lib/auth/permissions.ts); what a role
 // may change is hidden on the pages and refused by the server.
 const ROLE_NAV: Record<string, string[]> = { admin: NAV, designer: NAV, reviewer: NAV, purchasing: NAV, viewer: NAV };
 

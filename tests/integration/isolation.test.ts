@@ -18,9 +18,10 @@ import * as permitScheduleRoute from "@/app/api/communities/[communityId]/permit
 import * as lotStatusRoute from "@/app/api/lots/[lotId]/status/route";
 import * as plansRoute2 from "@/app/api/plans/route";
 import * as undoRoute from "@/app/api/plans/undo/route";
-import { auditLog, users } from "@/db/schema";
+import { accounts, auditLog, users } from "@/db/schema";
 import { and, eq } from "drizzle-orm";
 import * as teamRoute from "@/app/api/team/route";
+import * as loadProcedureRoute from "@/app/api/account/load-procedure/route";
 import { createInvitation } from "@/db/queries/team";
 import { seededIds } from "../support/demo-ids";
 import { callRoute, sessionCookie } from "../support/requests";
@@ -103,6 +104,19 @@ describe("account isolation", () => {
     expect(importsList.json.imports.map((i: { id: number }) => i.id)).toEqual([ids.otherRecords.importId]);
     const team = await callRoute(teamRoute.GET, { path: "/api/team", cookie: otherAdminCookie });
     expect(team.json.members.map((m: { email: string }) => m.email)).not.toContain("admin@marrowfinch.test");
+  });
+
+  it("the account settings routes read and write the caller's own account only", async () => {
+    const own = await callRoute(loadProcedureRoute.GET, { path: "/api/account/load-procedure", cookie: otherAdminCookie });
+    expect(own.status).toBe(200);
+    const [demo] = await getDb().select({ procedure: accounts.loadProcedure }).from(accounts).where(eq(accounts.id, ids.demoAccountId));
+    const [other] = await getDb().select({ procedure: accounts.loadProcedure }).from(accounts).where(eq(accounts.id, ids.otherAccountId));
+    expect(own.json.procedure).toBe(other.procedure);
+    // Choosing the other account in the cookie does not reach it: not a member there.
+    const cookie = await sessionCookie({ userId: ids.otherAdminId, accountId: ids.demoAccountId });
+    const refused = await callRoute(loadProcedureRoute.PUT, { path: "/x", method: "PUT", cookie, body: { procedure: demo.procedure === "hourly" ? "residential-load-factor" : "hourly", from: demo.procedure } });
+    expect(refused.status).toBe(403);
+    expect((await getDb().select({ procedure: accounts.loadProcedure }).from(accounts).where(eq(accounts.id, ids.demoAccountId)))[0].procedure).toBe(demo.procedure);
   });
 
   it("choosing an account one does not belong to is refused", async () => {
