@@ -114,6 +114,11 @@ test("a designer imports the template, edits with a formula, bulk-raises insulat
   await expect(page.getByTestId("assembly-wall_u")).toContainText("0.050");
   await expect(page.getByTestId("assembly-ceiling_u")).toHaveAttribute("data-source", "assembly");
   await expect(page.getByTestId("assembly-ceiling_u")).toContainText("base assembly + added insulation");
+  // Both procedures side by side, the account's (the handbook's, by default) marked as sizing equipment.
+  await expect(page.getByTestId("facing-procedure")).toContainText("Handbook load-factor");
+  await expect(page.getByTestId("sizing-procedure")).toContainText("Handbook residential load-factor procedure");
+  await expect(page.getByTestId("compare-facings").locator("tbody tr")).toHaveCount(4);
+  await expect(page.getByTestId("compare-sensible-components")).toContainText("Total");
   const form = page.getByTestId("approve-form");
   await form.getByLabel("Credential").fill("Licensed mechanical engineer, TX 00000 (demo)");
   await form.getByRole("button", { name: /Approve revision/ }).click();
