@@ -26,7 +26,6 @@ import {
 import { catalogForHeatingDesign, validateEquipmentTable, type EquipmentCatalogEntry } from "@/lib/workbook/equipment-columns";
 import { validatePlanTable, type ValidPlanRow } from "@/lib/workbook/plan-columns";
 import { readCsv } from "@/lib/workbook/table-io";
-import { engineRunsLoadFactor } from "../../support/engine-procedures";
 
 const templates = path.resolve(__dirname, "../../../templates");
 const readTemplate = (name: string) => readFileSync(path.join(templates, name), "utf8");
@@ -181,7 +180,7 @@ describe("the report states its load procedure", () => {
     expect(all).not.toContain(PEAK_ONLY_NOTE);
   });
 
-  it.skipIf(!engineRunsLoadFactor)("the handbook's load-factor procedure: named as implemented here; no profile chart and no peak-hour text (skipped while the engine refuses that procedure)", async () => {
+  it("the handbook's load-factor procedure: named as implemented here; no profile chart and no peak-hour text", async () => {
     const report = lotReportFromResults(sourceFor(1, {}, "residential-load-factor"));
     expect(report.procedure).toBe("residential-load-factor");
     expect(report.cooling.peakHour).toBeNull();
@@ -197,7 +196,7 @@ describe("the report states its load procedure", () => {
     expect(all).not.toMatch(/solar hour \d|at hour \d/);
   });
 
-  it.skipIf(!engineRunsLoadFactor)("a packet of lots by both procedures lists both on the cover (skipped while the engine refuses that procedure)", async () => {
+  it("a packet of lots by both procedures lists both on the cover", async () => {
     const reports = [lotReportFromResults(sourceFor(0)), lotReportFromResults(sourceFor(1, {}, "residential-load-factor"))];
     const { pages } = await textOf(reports);
     expect(pages[0]).toContain(`Load procedure ${PROCEDURE_SHORT_LABELS.hourly}; ${PROCEDURE_SHORT_LABELS["residential-load-factor"]}`);

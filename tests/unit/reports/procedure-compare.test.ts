@@ -3,7 +3,6 @@ import { describe, expect, it } from "vitest";
 import { computePlanFacings } from "@/lib/load";
 import { compareProcedures, loadDifference } from "@/lib/reports/procedure-compare";
 import { ASPEN_1, CEDAR_BEND_SITE } from "../../fixtures/engine/example-plans";
-import { engineRunsLoadFactor } from "../../support/engine-procedures";
 
 describe("loadDifference", () => {
   it("is the other procedure minus the sizing one, in Btu/h and in % of the sizing one (by hand)", () => {
@@ -17,7 +16,7 @@ describe("loadDifference", () => {
 });
 
 describe("compareProcedures", () => {
-  it.skipIf(!engineRunsLoadFactor)("pairs the two procedures' facings and components, differences taken from the engine's own numbers (skipped while the engine refuses the load-factor procedure)", () => {
+  it("pairs the two procedures' facings and components, differences taken from the engine's own numbers", () => {
     const sizing = computePlanFacings(ASPEN_1, CEDAR_BEND_SITE, { procedure: "residential-load-factor" });
     const other = computePlanFacings(ASPEN_1, CEDAR_BEND_SITE, { procedure: "hourly" });
     const comparison = compareProcedures(sizing, other);

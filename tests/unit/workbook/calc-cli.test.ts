@@ -3,9 +3,8 @@ import { mkdtempSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
-import { LOAD_PROCEDURES, type LoadProcedure } from "@/lib/load";
+import { LOAD_PROCEDURES } from "@/lib/load";
 import { PROCEDURE_STATEMENTS } from "@/lib/reports/procedure-text";
-import { engineRunsLoadFactor } from "../../support/engine-procedures";
 
 const root = path.resolve(__dirname, "../../..");
 
@@ -15,11 +14,8 @@ function calc(...args: string[]): { status: number | null; stdout: string; stder
 }
 
 describe("npm run calc (scripts/calc.ts)", { timeout: 120_000 }, () => {
-  // The load-factor runs skip while the engine on this branch refuses that procedure.
-  const runs = (procedure: LoadProcedure) => procedure === "hourly" || engineRunsLoadFactor;
-
   for (const procedure of LOAD_PROCEDURES) {
-    it.skipIf(!runs(procedure))(`--procedure ${procedure}: every plan and facing of the example library, the worst facing, the procedure, the engine version and the caution${runs(procedure) ? "" : " (skipped while the engine refuses that procedure)"}`, () => {
+    it(`--procedure ${procedure}: every plan and facing of the example library, the worst facing, the procedure, the engine version and the caution`, () => {
       const { status, stdout, stderr } = calc("templates/example-plans.csv", "--site", "templates/example-site.json", "--procedure", procedure);
       expect(stderr).toBe("");
       expect(status).toBe(0);
@@ -37,7 +33,7 @@ describe("npm run calc (scripts/calc.ts)", { timeout: 120_000 }, () => {
     });
   }
 
-  it.skipIf(!engineRunsLoadFactor)("without --procedure, the handbook's residential procedure is used and named (skipped while the engine refuses that procedure)", () => {
+  it("without --procedure, the handbook's residential procedure is used and named", () => {
     const { status, stdout } = calc("templates/example-plans.csv", "--site", "templates/example-site.json");
     expect(status).toBe(0);
     expect(stdout.split("\n")[0]).toBe(`Load procedure: ${PROCEDURE_STATEMENTS["residential-load-factor"]}`);
@@ -68,7 +64,7 @@ describe("npm run calc (scripts/calc.ts)", { timeout: 120_000 }, () => {
     }
   });
 
-  it.skipIf(!engineRunsLoadFactor)("--json by the load-factor procedure: the peak only, no peak hour and no profile (skipped while the engine refuses that procedure)", () => {
+  it("--json by the load-factor procedure: the peak only, no peak hour and no profile", () => {
     const { status, stdout } = calc("templates/example-plans.csv", "--site", "templates/example-site.json", "--procedure", "residential-load-factor", "--json");
     expect(status).toBe(0);
     const report = JSON.parse(stdout) as { procedure: string; plans: { results: { procedure: string; facings: { cooling: { totalBtuh: number; peakHour: number | null; hourlySensibleBtuh: number[] } }[] } }[] };
