@@ -118,5 +118,6 @@ export interface PlanFacings {
 }
 
 export const DESIGN_ESTIMATE_CAUTION =
-  "Design estimate only, from an hourly method built on published ASHRAE equations. It is not the approved " +
-  "procedure of any standard or code. Local codes and a licensed professional's review govern equipment sizing.";
+  "Design estimate only, computed with published ASHRAE methods as implemented in Platload; it is not a certified " +
+  "or approved implementation of any standard's or code's procedure. Local codes and a licensed professional's review " +
+  "govern equipment sizing.";

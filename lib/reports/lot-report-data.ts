@@ -41,6 +41,8 @@ const constructionRowSchema = z.object({
   /** ADDED insulation as installed, R (h·ft²·°F/Btu). */
   cavityR: nonNegative,
   continuousR: nonNegative,
+  /** A whole-assembly U-factor entered directly (it replaces the base assembly and added insulation), Btu/h·ft²·°F. */
+  uFactor: nonNegative.nullable().default(null),
   areaFt2: nonNegative.nullable(),
 });
 export type ConstructionRow = z.output<typeof constructionRowSchema>;
@@ -71,13 +73,16 @@ const envelopeSchema = z.object({
   atticInsulation: constructionRowSchema.nullable(),
   vaultedCeiling: constructionRowSchema.nullable(),
   foundationKind: z.string(),
-  slabEdge: z.object({ perimeterFt: nonNegative, insulationR: nonNegative, depthFt: nonNegative }).nullable(),
-  foundationWalls: z.object({ areaFt2: nonNegative, insulationR: nonNegative }).nullable(),
+  slabEdge: z
+    .object({ perimeterFt: nonNegative, insulationR: nonNegative, depthFt: nonNegative, fFactor: nonNegative.nullable().default(null) })
+    .nullable(),
+  foundationWalls: z.object({ areaFt2: nonNegative, insulationR: nonNegative, uFactor: nonNegative.nullable().default(null) }).nullable(),
   floors: z.array(constructionRowSchema),
   windows: z.array(windowRowSchema),
   skylights: z.object({ areaFt2: nonNegative, uFactor: nonNegative, shgc: nonNegative }).nullable(),
   ach50: nonNegative.nullable(),
   cfm50: nonNegative.nullable(),
+  effectiveLeakageAreaIn2: nonNegative.nullable().default(null),
   ducts: z.object({ location: z.string(), insulationR: nonNegative, supplyLeakagePct: nonNegative, returnLeakagePct: nonNegative }),
   ventilation: z.object({ kind: z.string(), cfm: nonNegative, sensibleRecovery: nonNegative, latentRecovery: nonNegative }),
 });
@@ -279,23 +284,23 @@ const round = (value: number, places = 0) => {
 };
 
 function envelopeFrom(plan: PlanInput, loads: FacingLoads): EnvelopeSummary {
-  const walls: ConstructionRow[] = [{ where: "All facades", baseAssembly: plan.wall.baseId, cavityR: plan.wall.cavityR, continuousR: plan.wall.continuousR, areaFt2: null }];
+  const walls: ConstructionRow[] = [{ where: "All facades", baseAssembly: plan.wall.baseId, cavityR: plan.wall.cavityR, continuousR: plan.wall.continuousR, uFactor: plan.wall.uFactor ?? null, areaFt2: null }];
   for (const facade of FACADES) {
     const own = plan.facades[facade].wall;
-    if (own) walls.push({ where: `${facade[0].toUpperCase()}${facade.slice(1)} facade`, baseAssembly: own.baseId, cavityR: own.cavityR, continuousR: own.continuousR, areaFt2: plan.facades[facade].grossWallAreaFt2 });
+    if (own) walls.push({ where: `${facade[0].toUpperCase()}${facade.slice(1)} facade`, baseAssembly: own.baseId, cavityR: own.cavityR, continuousR: own.continuousR, uFactor: own.uFactor ?? null, areaFt2: plan.facades[facade].grossWallAreaFt2 });
   }
-  if (plan.garage.wallAreaFt2 > 0) walls.push({ where: "Wall to garage", baseAssembly: plan.wall.baseId, cavityR: plan.wall.cavityR, continuousR: plan.wall.continuousR, areaFt2: plan.garage.wallAreaFt2 });
+  if (plan.garage.wallAreaFt2 > 0) walls.push({ where: "Wall to garage", baseAssembly: plan.wall.baseId, cavityR: plan.wall.cavityR, continuousR: plan.wall.continuousR, uFactor: plan.wall.uFactor ?? null, areaFt2: plan.garage.wallAreaFt2 });
   if (walls.length > 1 && walls[0].where === "All facades" && walls.slice(1).some((w) => w.where.endsWith("facade"))) walls[0].where = "Facades not listed below";
 
   const ceilingAreaFt2 = plan.attic.ceilingAreaFt2 ?? plan.conditionedFloorAreaFt2 / plan.stories;
   let atticInsulation: ConstructionRow | null = null;
-  if (plan.attic.kind === "vented") atticInsulation = { where: "Ceiling under vented attic", baseAssembly: plan.attic.ceiling.baseId, cavityR: plan.attic.ceiling.cavityR, continuousR: plan.attic.ceiling.continuousR, areaFt2: round(ceilingAreaFt2) };
-  else if (plan.attic.kind === "encapsulated") atticInsulation = { where: "Roof deck of encapsulated attic", baseAssembly: plan.attic.roofDeck.baseId, cavityR: plan.attic.roofDeck.cavityR, continuousR: plan.attic.roofDeck.continuousR, areaFt2: round(ceilingAreaFt2) };
+  if (plan.attic.kind === "vented") atticInsulation = { where: "Ceiling under vented attic", baseAssembly: plan.attic.ceiling.baseId, cavityR: plan.attic.ceiling.cavityR, continuousR: plan.attic.ceiling.continuousR, uFactor: plan.attic.ceiling.uFactor ?? null, areaFt2: round(ceilingAreaFt2) };
+  else if (plan.attic.kind === "encapsulated") atticInsulation = { where: "Roof deck of encapsulated attic", baseAssembly: plan.attic.roofDeck.baseId, cavityR: plan.attic.roofDeck.cavityR, continuousR: plan.attic.roofDeck.continuousR, uFactor: plan.attic.roofDeck.uFactor ?? null, areaFt2: round(ceilingAreaFt2) };
 
   const floors: ConstructionRow[] = [];
-  if (plan.foundation.floorAreaFt2 > 0) floors.push({ where: `Floor over ${plan.foundation.kind === "vented-crawlspace" ? "crawlspace" : "basement"}`, baseAssembly: plan.foundation.floor.baseId, cavityR: plan.foundation.floor.cavityR, continuousR: plan.foundation.floor.continuousR, areaFt2: plan.foundation.floorAreaFt2 });
-  if (plan.garage.floorOverAreaFt2 > 0) floors.push({ where: "Floor over garage", baseAssembly: plan.garage.floorOver.baseId, cavityR: plan.garage.floorOver.cavityR, continuousR: plan.garage.floorOver.continuousR, areaFt2: plan.garage.floorOverAreaFt2 });
-  if (plan.floorOverOutdoors.areaFt2 > 0) floors.push({ where: "Floor over outdoors", baseAssembly: plan.floorOverOutdoors.construction.baseId, cavityR: plan.floorOverOutdoors.construction.cavityR, continuousR: plan.floorOverOutdoors.construction.continuousR, areaFt2: plan.floorOverOutdoors.areaFt2 });
+  if (plan.foundation.floorAreaFt2 > 0) floors.push({ where: `Floor over ${plan.foundation.kind === "vented-crawlspace" ? "crawlspace" : "basement"}`, baseAssembly: plan.foundation.floor.baseId, cavityR: plan.foundation.floor.cavityR, continuousR: plan.foundation.floor.continuousR, uFactor: plan.foundation.floor.uFactor ?? null, areaFt2: plan.foundation.floorAreaFt2 });
+  if (plan.garage.floorOverAreaFt2 > 0) floors.push({ where: "Floor over garage", baseAssembly: plan.garage.floorOver.baseId, cavityR: plan.garage.floorOver.cavityR, continuousR: plan.garage.floorOver.continuousR, uFactor: plan.garage.floorOver.uFactor ?? null, areaFt2: plan.garage.floorOverAreaFt2 });
+  if (plan.floorOverOutdoors.areaFt2 > 0) floors.push({ where: "Floor over outdoors", baseAssembly: plan.floorOverOutdoors.construction.baseId, cavityR: plan.floorOverOutdoors.construction.cavityR, continuousR: plan.floorOverOutdoors.construction.continuousR, uFactor: plan.floorOverOutdoors.construction.uFactor ?? null, areaFt2: plan.floorOverOutdoors.areaFt2 });
 
   const windows: WindowRow[] = FACADES.map((facade: Facade) => {
     const f = plan.facades[facade];
@@ -325,16 +330,27 @@ function envelopeFrom(plan: PlanInput, loads: FacingLoads): EnvelopeSummary {
     atticInsulation,
     vaultedCeiling:
       plan.vaultedCeiling.areaFt2 > 0
-        ? { where: "Vaulted ceiling", baseAssembly: plan.vaultedCeiling.construction.baseId, cavityR: plan.vaultedCeiling.construction.cavityR, continuousR: plan.vaultedCeiling.construction.continuousR, areaFt2: plan.vaultedCeiling.areaFt2 }
+        ? { where: "Vaulted ceiling", baseAssembly: plan.vaultedCeiling.construction.baseId, cavityR: plan.vaultedCeiling.construction.cavityR, continuousR: plan.vaultedCeiling.construction.continuousR, uFactor: plan.vaultedCeiling.construction.uFactor ?? null, areaFt2: plan.vaultedCeiling.areaFt2 }
         : null,
     foundationKind: plan.foundation.kind,
-    slabEdge: slabLike ? { perimeterFt: plan.foundation.slabPerimeterFt, insulationR: plan.foundation.slabEdgeInsulationR, depthFt: plan.foundation.slabEdgeInsulationDepthFt } : null,
-    foundationWalls: plan.foundation.foundationWallAreaFt2 > 0 ? { areaFt2: plan.foundation.foundationWallAreaFt2, insulationR: plan.foundation.foundationWallInsulationR } : null,
+    slabEdge: slabLike
+      ? {
+          perimeterFt: plan.foundation.slabPerimeterFt,
+          insulationR: plan.foundation.slabEdgeInsulationR,
+          depthFt: plan.foundation.slabEdgeInsulationDepthFt,
+          fFactor: plan.foundation.slabFFactor ?? null,
+        }
+      : null,
+    foundationWalls:
+      plan.foundation.foundationWallAreaFt2 > 0
+        ? { areaFt2: plan.foundation.foundationWallAreaFt2, insulationR: plan.foundation.foundationWallInsulationR, uFactor: plan.foundation.foundationWallUFactor ?? null }
+        : null,
     floors,
     windows,
     skylights: plan.skylights.areaFt2 > 0 ? { areaFt2: plan.skylights.areaFt2, uFactor: plan.skylights.uFactor, shgc: plan.skylights.shgc } : null,
     ach50: plan.infiltration.ach50 ?? null,
     cfm50: plan.infiltration.cfm50 ?? null,
+    effectiveLeakageAreaIn2: plan.infiltration.effectiveLeakageAreaIn2 ?? null,
     ducts: { location: plan.ducts.location, insulationR: plan.ducts.insulationR, supplyLeakagePct: plan.ducts.supplyLeakagePct, returnLeakagePct: plan.ducts.returnLeakagePct },
     ventilation: {
       kind: plan.ventilation.kind,

@@ -274,8 +274,11 @@ function lotTitle(report: LotReport): string {
   return `Lot ${report.lotNumber}, ${report.communityName}`;
 }
 
-function constructionCells(row: { where: string; baseAssembly: string; cavityR: number; continuousR: number; areaFt2: number | null }): string[] {
-  return [row.where, row.baseAssembly, rText(row.cavityR), rText(row.continuousR), row.areaFt2 === null ? "" : num(row.areaFt2)];
+function constructionCells(row: { where: string; baseAssembly: string; cavityR: number; continuousR: number; uFactor: number | null; areaFt2: number | null }): string[] {
+  const area = row.areaFt2 === null ? "" : num(row.areaFt2);
+  // A direct U-factor replaces the base assembly and added insulation: say so rather than print unused R-values.
+  if (row.uFactor !== null) return [row.where, `U-${num(row.uFactor, 3)} entered (whole assembly)`, "—", "—", area];
+  return [row.where, row.baseAssembly, rText(row.cavityR), rText(row.continuousR), area];
 }
 
 function drawLot(cursor: Cursor, report: LotReport): void {
@@ -336,9 +339,23 @@ function drawLot(cursor: Cursor, report: LotReport): void {
   table(cursor, constructionColumns, constructionRows);
   cursor.y += 4;
   const otherPairs: [string, string][] = [["Attic", e.atticKind === "vented" ? "vented (insulation on the ceiling)" : e.atticKind === "encapsulated" ? "encapsulated (insulation under the roof deck)" : "none"], ["Foundation", e.foundationKind]];
-  if (e.slabEdge) otherPairs.push(["Slab edge", `${rText(e.slabEdge.insulationR)}, ${num(e.slabEdge.depthFt, 1)} ft deep, ${num(e.slabEdge.perimeterFt)} ft of edge`]);
-  if (e.foundationWalls) otherPairs.push(["Foundation walls", `${rText(e.foundationWalls.insulationR)} continuous, ${num(e.foundationWalls.areaFt2)} ft²`]);
-  otherPairs.push(["Air leakage", e.ach50 !== null ? `${num(e.ach50, 1)} ACH50` : e.cfm50 !== null ? `${num(e.cfm50)} CFM50` : "not given"]);
+  if (e.slabEdge) {
+    const fFactor = e.slabEdge.fFactor !== null ? `, F-${num(e.slabEdge.fFactor, 2)} entered` : "";
+    otherPairs.push(["Slab edge", `${rText(e.slabEdge.insulationR)}, ${num(e.slabEdge.depthFt, 1)} ft deep, ${num(e.slabEdge.perimeterFt)} ft of edge${fFactor}`]);
+  }
+  if (e.foundationWalls) {
+    const u = e.foundationWalls.uFactor !== null ? ` (U-${num(e.foundationWalls.uFactor, 3)} entered)` : "";
+    otherPairs.push(["Foundation walls", `${rText(e.foundationWalls.insulationR)} continuous, ${num(e.foundationWalls.areaFt2)} ft²${u}`]);
+  }
+  const leakage =
+    e.ach50 !== null
+      ? `${num(e.ach50, 1)} ACH50`
+      : e.cfm50 !== null
+        ? `${num(e.cfm50)} CFM50`
+        : e.effectiveLeakageAreaIn2 !== null
+          ? `${num(e.effectiveLeakageAreaIn2)} in² effective leakage area`
+          : "not given";
+  otherPairs.push(["Air leakage", leakage]);
   otherPairs.push(["Ducts", `${e.ducts.location}, ${rText(e.ducts.insulationR)}, leakage ${num(e.ducts.supplyLeakagePct, 1)} % supply / ${num(e.ducts.returnLeakagePct, 1)} % return`]);
   const recovery = e.ventilation.kind === "balanced" && (e.ventilation.sensibleRecovery > 0 || e.ventilation.latentRecovery > 0) ? `, recovery ${num(e.ventilation.sensibleRecovery, 2)} sensible / ${num(e.ventilation.latentRecovery, 2)} latent` : "";
   otherPairs.push(["Ventilation", `${e.ventilation.kind}, ${num(e.ventilation.cfm)} cfm${recovery}`]);

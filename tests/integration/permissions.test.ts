@@ -5,7 +5,7 @@ import type { Permission } from "@/lib/auth/permissions";
 import { AppError } from "@/lib/errors";
 import { seededIds } from "../support/demo-ids";
 
-// What each role may do, written out from PRODUCT.md's role table (not read from the code):
+// What each role may do, written out from the product's role table (README and DEVELOPERS.md), not read from the code:
 // admin runs the account; designer keeps plans and lots; reviewer approves; purchasing keeps the
 // catalog; viewer reads only.
 const MAY: Record<string, Permission[]> = {

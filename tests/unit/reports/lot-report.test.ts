@@ -265,6 +265,22 @@ describe("lotReportFromResults", () => {
   });
 });
 
+describe("direct inputs on the report", () => {
+  it("a direct wall U-factor and an effective leakage area are stated as entered, not as unused R-values or 'not given'", async () => {
+    const base = PLANS[0].input;
+    const input = { ...base, wall: { ...base.wall, uFactor: 0.05 }, infiltration: { ...base.infiltration, ach50: undefined, cfm50: undefined, effectiveLeakageAreaIn2: 80 } };
+    const loads = computeFacingLoads(input, SITE, 0, { procedure: "hourly", validated: true });
+    const source = sourceFor(0, { plan: { code: PLANS[0].planCode, name: PLANS[0].planName, revisionNumber: 3, status: "draft", input }, loads });
+    const bytes = await renderLotReportsPdf([lotReportFromResults(source)]);
+    const parser = new PDFParse({ data: bytes });
+    const text = squash((await parser.getText()).text);
+    await parser.destroy();
+    expect(text).toMatch(/U-0\.050 entered \(whole assembly\)/);
+    expect(text).toMatch(/80 in² effective leakage area/);
+    expect(text).not.toMatch(/Air leakage not given/);
+  }, 60_000);
+});
+
 describe("small helpers", () => {
   it("compass labels of eight points", () => {
     expect([0, 44, 46, 90, 180, 225, 315, 359, 360, -90].map(compassLabel)).toEqual(["N", "NE", "NE", "E", "S", "SW", "NW", "N", "N", "W"]);
