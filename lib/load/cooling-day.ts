@@ -54,6 +54,8 @@ export const FACADE_OFFSET_DEG: Record<Facade, number> = { front: 0, left: 90, b
  * interior shade (the chapter's example venetian blind; its Table 14 defers to ch. 15 for others).
  */
 const RADIANT_WALLS = RADIANT_FRACTION_CONDUCTION_WALLS_FLOORS;
+const RADIANT_WINDOW_LOW_SHGC = RADIANT_FRACTION_CONDUCTION_WINDOW_LOW_SHGC;
+const RADIANT_WINDOW_HIGH_SHGC = RADIANT_FRACTION_CONDUCTION_WINDOW_HIGH_SHGC;
 const RADIANT_ROOF = RADIANT_FRACTION_CONDUCTION_ROOF;
 const RADIANT_SHADED_SOLAR = RADIANT_FRACTION_SOLAR_LIGHT_VENETIAN_BLINDS_EXAMPLE;
 
@@ -79,21 +81,51 @@ const SCRATCH = {
   radNonsolar: row(),
   radSolar: row(),
   stored: row(),
+  storedSolar: row(),
+  sumRadNonsolar: row(),
+  sumRadSolar: row(),
   windowsByFacade: [row(), row(), row(), row()],
+  // Radiant parts of each component's heat gain, convolved with the RTS only in total (the sums are
+  // linear) and, for the component breakdown, at the peak hour alone.
+  radWalls: row(),
+  radDoors: row(),
+  radWindows: [row(), row(), row(), row()],
+  radWindowsSolar: [row(), row(), row(), row()],
+  radCeilings: row(),
+  radVaulted: row(),
+  radSkylights: row(),
+  radSkylightsSolar: row(),
+  radFloors: row(),
+  radFoundationWalls: row(),
+  radGarageWall: row(),
 };
+const RADIANT_ROWS: Float64Array[] = [
+  SCRATCH.radWalls,
+  SCRATCH.radDoors,
+  ...SCRATCH.radWindows,
+  SCRATCH.radCeilings,
+  SCRATCH.radVaulted,
+  SCRATCH.radSkylights,
+  SCRATCH.radFloors,
+  SCRATCH.radFoundationWalls,
+  SCRATCH.radGarageWall,
+];
+const SOLAR_RADIANT_ROWS: Float64Array[] = [...SCRATCH.radWindowsSolar, SCRATCH.radSkylightsSolar];
 
-/** out[h] += (1 − f)·gain[h] + f·(RTS ∗ gain)[h]: the cooling load of a heat gain with radiant share f. */
-function addStored(gain: Float64Array, radiantShare: number, rts: TimeSeries, out: Float64Array): void {
-  const stored = SCRATCH.stored;
-  convolve(gain, rts.factors, rts.last, stored);
-  for (let h = 0; h < 24; h++) out[h] += (1 - radiantShare) * gain[h] + radiantShare * stored[h];
+/** A heat gain with radiant share f: its convective part into `out`, its radiant part into `radiant` (for the RTS). */
+function addStored(gain: Float64Array, radiantShare: number, out: Float64Array, radiant: Float64Array): void {
+  for (let h = 0; h < 24; h++) {
+    out[h] += (1 - radiantShare) * gain[h];
+    radiant[h] += radiantShare * gain[h];
+  }
 }
 
-/** out[h] += (RTS ∗ radiant)[h]. */
-function addRadiant(radiant: Float64Array, rts: TimeSeries, out: Float64Array): void {
-  const stored = SCRATCH.stored;
-  convolve(radiant, rts.factors, rts.last, stored);
-  for (let h = 0; h < 24; h++) out[h] += stored[h];
+/** The RTS's cooling load at one hour of a radiant gain row: Σ_j r_j · q_r(h − j). */
+function storedAt(radiant: Float64Array, rts: TimeSeries, h: number): number {
+  let sum = 0;
+  const f = rts.factors;
+  for (let j = 0; j <= rts.last; j++) sum += f[j] * radiant[(h - j + 24) % 24];
+  return sum;
 }
 
 /** Duct gain for a room sensible load at hour h, Btu/h (the system is taken as off with no cooling need). */
@@ -134,6 +166,8 @@ export function hourlyCoolingDay(p: PreparedPlan, facingAzimuthDeg: number): Coo
   ducts.fill(0);
   roofIrr.fill(0);
   gain.fill(0);
+  for (const r of RADIANT_ROWS) r.fill(0);
+  for (const r of SOLAR_RADIANT_ROWS) r.fill(0);
 
   // Walls and doors: conduction of the sol-air difference, through each wall's CTS (ch. 18 eq.
   // 30–31); doors are thin and taken without conduction lag. Their radiant share then through the RTS.
@@ -157,8 +191,8 @@ export function hourlyCoolingDay(p: PreparedPlan, facingAzimuthDeg: number): Coo
     byFacade.fill(0);
     const ws = fc.windows;
     if (ws.length === 0) continue;
-    radNonsolar.fill(0);
-    lagged.fill(0); // reused as the unshaded-beam radiant row
+    const radN = SCRATCH.radWindows[fi];
+    const radS = SCRATCH.radWindowsSolar[fi];
     for (let h = 0; h < 24; h++) {
       const beamBase = profile.beamWm2[h] * W_M2_TO_BTUH_FT2 * shgcRatio(profile.incidenceDeg[h]);
       const diffuse = profile.diffuseAndReflectedWm2[h] * W_M2_TO_BTUH_FT2 * DIFFUSE_RATIO;
@@ -169,7 +203,7 @@ export function hourlyCoolingDay(p: PreparedPlan, facingAzimuthDeg: number): Coo
       for (let wi = 0; wi < ws.length; wi++) {
         const w = ws[wi];
         const conduction = w.uaCool * (toArr[h] - tic);
-        const conductionRadiant = w.shgc < 0.5 ? RADIANT_FRACTION_CONDUCTION_WINDOW_LOW_SHGC : RADIANT_FRACTION_CONDUCTION_WINDOW_HIGH_SHGC;
+        const conductionRadiant = w.shgc < 0.5 ? RADIANT_WINDOW_LOW_SHGC : RADIANT_WINDOW_HIGH_SHGC;
         convective += (1 - conductionRadiant) * conduction;
         nonsolarRadiant += conductionRadiant * conduction;
         const sunlit = sunlitFraction(w.overhangDepthFt, w.overhangHeightAboveHeadFt, w.windowHeightFt, tanOmega);
@@ -184,15 +218,13 @@ export function hourlyCoolingDay(p: PreparedPlan, facingAzimuthDeg: number): Coo
         }
       }
       byFacade[h] = convective;
-      radNonsolar[h] = nonsolarRadiant;
-      lagged[h] = beamRadiant;
+      radN[h] = nonsolarRadiant;
+      radS[h] = beamRadiant;
     }
-    addRadiant(radNonsolar, st.nonsolar, byFacade);
-    addRadiant(lagged, st.solar, byFacade);
     for (let h = 0; h < 24; h++) windows[h] += byFacade[h];
   }
-  addStored(gain, RADIANT_WALLS, st.nonsolar, walls);
-  addStored(doorGain, RADIANT_WALLS, st.nonsolar, doors);
+  addStored(gain, RADIANT_WALLS, walls, SCRATCH.radWalls);
+  addStored(doorGain, RADIANT_WALLS, doors, SCRATCH.radDoors);
 
   // Roof planes: a hip roof with one plane toward each facade (equal areas) — average irradiance.
   const at = env.attic;
@@ -229,7 +261,7 @@ export function hourlyCoolingDay(p: PreparedPlan, facingAzimuthDeg: number): Coo
       for (let h = 0; h < 24; h++) lagged[h] = atticF[h];
     }
     for (let h = 0; h < 24; h++) gain[h] = at.ceilingUaCool * (lagged[h] - tic);
-    addStored(gain, RADIANT_ROOF, st.nonsolar, ceilings);
+    addStored(gain, RADIANT_ROOF, ceilings, SCRATCH.radCeilings);
   } else {
     for (let h = 0; h < 24; h++) atticF[h] = toArr[h];
   }
@@ -237,32 +269,39 @@ export function hourlyCoolingDay(p: PreparedPlan, facingAzimuthDeg: number): Coo
     for (let h = 0; h < 24; h++) te[h] = solAir(toArr[h], env.vaulted.absorptance, roofIrr[h], env.roofTiltDeg);
     convolve(te, st.vaulted.factors, st.vaulted.last, lagged);
     for (let h = 0; h < 24; h++) gain[h] = env.vaulted.uaCool * (lagged[h] - tic);
-    addStored(gain, RADIANT_ROOF, st.nonsolar, vaulted);
+    addStored(gain, RADIANT_ROOF, vaulted, SCRATCH.radVaulted);
   }
   const sk = env.skylight;
   if (sk.areaFt2 > 0) {
     const prof = solar.surface(facingAzimuthDeg + FACADE_OFFSET_DEG[sk.facade], sk.tiltDeg);
-    radNonsolar.fill(0);
-    radSolar.fill(0);
+    const radN = SCRATCH.radSkylights;
+    const radS = SCRATCH.radSkylightsSolar;
     for (let h = 0; h < 24; h++) {
       const beam = sk.areaFt2 * sk.attenuation * sk.shgc * prof.beamWm2[h] * W_M2_TO_BTUH_FT2 * shgcRatio(prof.incidenceDeg[h]);
       const diffuse = sk.areaFt2 * sk.attenuation * sk.shgc * prof.diffuseAndReflectedWm2[h] * W_M2_TO_BTUH_FT2 * DIFFUSE_RATIO;
       const conduction = sk.uaCool * (toArr[h] - tic);
-      skylights[h] = (1 - RADIANT_FRACTION_CONDUCTION_WINDOW_LOW_SHGC) * conduction;
-      radNonsolar[h] = RADIANT_FRACTION_CONDUCTION_WINDOW_LOW_SHGC * conduction + diffuse;
-      radSolar[h] = beam;
+      skylights[h] = (1 - RADIANT_WINDOW_LOW_SHGC) * conduction;
+      radN[h] = RADIANT_WINDOW_LOW_SHGC * conduction + diffuse;
+      radS[h] = beam;
     }
-    addRadiant(radNonsolar, st.nonsolar, skylights);
-    addRadiant(radSolar, st.solar, skylights);
   }
 
   // Surfaces to buffer spaces (ch. 18 eq. 32: no time series; their radiant share still through the RTS).
   for (let h = 0; h < 24; h++) gain[h] = env.floorsCool[h];
-  addStored(gain, RADIANT_WALLS, st.nonsolar, floors);
+  addStored(gain, RADIANT_WALLS, floors, SCRATCH.radFloors);
   for (let h = 0; h < 24; h++) gain[h] = env.foundationWallsCool[h];
-  addStored(gain, RADIANT_WALLS, st.nonsolar, foundationWalls);
+  addStored(gain, RADIANT_WALLS, foundationWalls, SCRATCH.radFoundationWalls);
   for (let h = 0; h < 24; h++) gain[h] = env.garageWallCool[h];
-  addStored(gain, RADIANT_WALLS, st.nonsolar, garageWall);
+  addStored(gain, RADIANT_WALLS, garageWall, SCRATCH.radGarageWall);
+
+  // All radiant gains through the RTS at once (convolution is linear).
+  const { sumRadNonsolar, sumRadSolar, stored, storedSolar } = SCRATCH;
+  sumRadNonsolar.fill(0);
+  sumRadSolar.fill(0);
+  for (const r of RADIANT_ROWS) for (let h = 0; h < 24; h++) sumRadNonsolar[h] += r[h];
+  for (const r of SOLAR_RADIANT_ROWS) for (let h = 0; h < 24; h++) sumRadSolar[h] += r[h];
+  convolve(sumRadNonsolar, st.nonsolar.factors, st.nonsolar.last, stored);
+  convolve(sumRadSolar, st.solar.factors, st.solar.last, storedSolar);
 
   // Ducts, hour by hour, on the room load (the system is taken as off in hours with no cooling need).
   // Internal gains and the slab credit are the same every hour: the RTS gives a constant back.
@@ -273,7 +312,7 @@ export function hourlyCoolingDay(p: PreparedPlan, facingAzimuthDeg: number): Coo
     for (let h = 0; h < 24; h++) {
       rooms[h] =
         walls[h] + windows[h] + doors[h] + ceilings[h] + vaulted[h] + skylights[h] + floors[h] + slab +
-        foundationWalls[h] + garageWall[h] + air.coolingInfiltrationSensibleBtuh[h] +
+        foundationWalls[h] + garageWall[h] + stored[h] + storedSolar[h] + air.coolingInfiltrationSensibleBtuh[h] +
         air.coolingVentilationSensibleBtuh[h] + internal;
       ducts[h] = ductGainBtuh(p, rooms[h], atticF[h], h);
       total[h] = rooms[h] + ducts[h];
@@ -289,17 +328,25 @@ export function hourlyCoolingDay(p: PreparedPlan, facingAzimuthDeg: number): Coo
   const swingCredit = Math.min(0, roomCapacity - rooms[peak]);
   const peakDucts = swingCredit === 0 ? ducts[peak] : ductGainBtuh(p, rooms[peak] + swingCredit, atticF[peak], peak);
 
+  // Each component at the peak: its convective part plus its radiant parts through the RTS at that hour.
+  const ns = st.nonsolar;
+  const so = st.solar;
+  const windowsAtPeak = [0, 0, 0, 0];
+  for (let fi = 0; fi < 4; fi++) {
+    windowsAtPeak[fi] =
+      windowsByFacade[fi][peak] + storedAt(SCRATCH.radWindows[fi], ns, peak) + storedAt(SCRATCH.radWindowsSolar[fi], so, peak);
+  }
   const sensibleByComponent: ComponentLoads<CoolingSensibleComponent> = {
-    walls: walls[peak],
-    windows: windows[peak],
-    doors: doors[peak],
-    ceilings: ceilings[peak],
-    vaultedCeilings: vaulted[peak],
-    skylights: skylights[peak],
-    floors: floors[peak],
+    walls: walls[peak] + storedAt(SCRATCH.radWalls, ns, peak),
+    windows: windowsAtPeak[0] + windowsAtPeak[1] + windowsAtPeak[2] + windowsAtPeak[3],
+    doors: doors[peak] + storedAt(SCRATCH.radDoors, ns, peak),
+    ceilings: ceilings[peak] + storedAt(SCRATCH.radCeilings, ns, peak),
+    vaultedCeilings: vaulted[peak] + storedAt(SCRATCH.radVaulted, ns, peak),
+    skylights: skylights[peak] + storedAt(SCRATCH.radSkylights, ns, peak) + storedAt(SCRATCH.radSkylightsSolar, so, peak),
+    floors: floors[peak] + storedAt(SCRATCH.radFloors, ns, peak),
     slab,
-    foundationWalls: foundationWalls[peak],
-    garageWall: garageWall[peak],
+    foundationWalls: foundationWalls[peak] + storedAt(SCRATCH.radFoundationWalls, ns, peak),
+    garageWall: garageWall[peak] + storedAt(SCRATCH.radGarageWall, ns, peak),
     infiltration: air.coolingInfiltrationSensibleBtuh[peak],
     ventilation: air.coolingVentilationSensibleBtuh[peak],
     ducts: peakDucts,
@@ -334,10 +381,10 @@ export function hourlyCoolingDay(p: PreparedPlan, facingAzimuthDeg: number): Coo
     sensibleByComponent,
     latentByComponent,
     windowsByFacadeBtuh: {
-      front: windowsByFacade[0][peak],
-      left: windowsByFacade[1][peak],
-      back: windowsByFacade[2][peak],
-      right: windowsByFacade[3][peak],
+      front: windowsAtPeak[0],
+      left: windowsAtPeak[1],
+      back: windowsAtPeak[2],
+      right: windowsAtPeak[3],
     },
     hourlySensibleBtuh,
     hourlyOutdoorF: toArr.slice(),

@@ -67,7 +67,7 @@ export function capacityWithSwingBtuh(load: ArrayLike<number>, conductanceBtuhF:
   const decay = Math.exp(-conductanceBtuhF / capacitanceBtuF);
   let lo = 0;
   let hi = peak;
-  for (let i = 0; i < 40 && hi - lo > 0.25; i++) {
+  for (let i = 0; i < 40 && hi - lo > 1; i++) {
     const mid = 0.5 * (lo + hi);
     if (maxExcursionF(load, mid, conductanceBtuhF, decay) <= swingF) hi = mid;
     else lo = mid;
