@@ -31,6 +31,25 @@ describe.each(LOAD_PROCEDURES.map((procedure) => [procedure] as const))("load en
     expect(result.coolingSpreadBtuh).toBeLessThan(1e-6 * totals[0]);
   });
 
+  it("glass on the front only: heating the same at every facing; cooling highest with the front west and lowest with it north", () => {
+    // Physics (32° N, July): west glass takes the afternoon sun when the outdoor air is near its daily
+    // peak; east glass gets as much sun but in the cool morning (and, in the hourly method, stored heat
+    // from it has mostly left by the afternoon peak); south glass sees a high summer sun at steep
+    // incidence; north glass sees mostly diffuse sky. So front-west > front-east and front-north is lowest.
+    const opaque = { grossWallAreaFt2: 400 };
+    const plan = symmetricPlan({
+      facades: { front: { grossWallAreaFt2: 400, window: { areaFt2: 80, uFactor: 0.3, shgc: 0.3 } }, left: opaque, back: opaque, right: opaque },
+    });
+    const result = computePlanFacings(plan, SEA_LEVEL_SITE, opts);
+    const byLabel = Object.fromEntries(result.facings.map((f) => [f.label, f]));
+    const heating = result.facings.map((f) => f.heating.totalBtuh);
+    for (const h of heating) expect(rel(h, heating[0])).toBeLessThan(1e-9);
+    const cooling = (label: string) => byLabel[label].cooling.totalBtuh;
+    expect(cooling("W")).toBeGreaterThan(cooling("E"));
+    expect(Math.min(cooling("E"), cooling("S"), cooling("W"))).toBeGreaterThan(cooling("N"));
+    expect(result.worst.label).toBe("W");
+  });
+
   it("turning a lot by 360° is no change", () => {
     for (const az of [0, 45, 123.4]) {
       const a = computeFacingLoads(BIRCH_2, CEDAR_BEND_SITE, az, opts);
