@@ -3,6 +3,7 @@ import { getServerSession } from "next-auth";
 import { cookies } from "next/headers";
 import { redirect } from "next/navigation";
 import { getDb } from "@/db";
+import { parseId } from "@/lib/http/ids";
 import { authorizeMember, listMembershipsOfUser, type Member } from "./member";
 import { authOptions } from "./options";
 import { permissionsOf, type Permission } from "./permissions";
@@ -25,7 +26,7 @@ export async function getPageContext(): Promise<PageContext> {
   const db = getDb();
   const memberships = await listMembershipsOfUser({ db, userId });
   if (memberships.length === 0) redirect("/accounts");
-  const raw = Number((await cookies()).get(ACCOUNT_COOKIE)?.value);
+  const raw = parseId((await cookies()).get(ACCOUNT_COOKIE)?.value);
   const chosen = memberships.find((m) => m.accountId === raw) ?? (memberships.length === 1 ? memberships[0] : null);
   if (!chosen) redirect("/accounts");
   const member = await authorizeMember({ db, userId, accountId: chosen.accountId, permission: "read" });

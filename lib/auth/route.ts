@@ -4,6 +4,7 @@ import { NextResponse, type NextRequest } from "next/server";
 import { z } from "zod";
 import { getDb, type Database } from "@/db";
 import { AppError, type FieldError } from "@/lib/errors";
+import { parseId } from "@/lib/http/ids";
 import { authorizeMember, type Member } from "./member";
 import type { Permission } from "./permissions";
 
@@ -34,9 +35,7 @@ export async function sessionUserId(request: NextRequest): Promise<number | null
 }
 
 export function chosenAccountId(request: NextRequest): number | null {
-  const raw = request.cookies.get(ACCOUNT_COOKIE)?.value;
-  const id = raw ? Number(raw) : NaN;
-  return Number.isSafeInteger(id) && id > 0 ? id : null;
+  return parseId(request.cookies.get(ACCOUNT_COOKIE)?.value);
 }
 
 /**
@@ -90,9 +89,9 @@ export async function parseJsonBody<T extends z.ZodType>(request: Request, schem
   return parsed.data;
 }
 
-/** A record id from the URL; anything but a positive integer is simply not found. */
+/** A record id from the URL (lib/ids.ts: digits only); anything else is simply not found. */
 export function idParam(value: string, what: string): number {
-  const id = Number(value);
-  if (!Number.isSafeInteger(id) || id <= 0) throw new AppError("not_found", `${what} was not found in this account.`);
+  const id = parseId(value);
+  if (id === null) throw new AppError("not_found", `${what} was not found in this account.`);
   return id;
 }

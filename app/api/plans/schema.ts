@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { idQueryParam } from "@/lib/http/ids";
 
 const cellValue = z.union([z.string().max(500), z.number(), z.boolean(), z.null()]);
 
@@ -16,7 +17,7 @@ export const planEditSchema = z.object({
     .max(2000),
 });
 
-export const libraryQuerySchema = z.object({ communityId: z.coerce.number().int().positive().optional() });
+export const libraryQuerySchema = z.object({ communityId: idQueryParam.optional() });
 
 export const copyPlanSchema = z.object({
   fromPlanId: z.number().int().positive(),
