@@ -271,13 +271,21 @@ export async function writePlanRevision(
     .where(eq(plans.id, w.plan.id));
 }
 
+/** History actions whose entries hold the cells before and after the change. */
+const UNDOABLE_PLAN_ACTIONS = new Set(["plan_edit", "plan_bulk_edit", "plan_paste", "plan_undo"]);
+
 /**
  * Undoes a plan edit from the history: the cells it changed go back to their values before it,
  * provided nobody changed those cells since (else nothing is written and the conflict is named).
  */
 export async function undoPlanEdit({ db, accountId, userId, entryId }: { db: Database; accountId: number; userId: number; entryId: number }) {
   const [entry] = await db.select().from(auditLog).where(and(eq(auditLog.id, entryId), eq(auditLog.accountId, accountId), eq(auditLog.entityType, "plan")));
-  if (!entry || !Array.isArray(entry.before) || !Array.isArray(entry.after)) throw notFound("That change");
+  if (!entry) throw notFound("That change");
+  // Only cell edits keep the cells before and after; an approval, an import or a copy does not,
+  // and an approved revision is never changed (an edit starts a new draft instead).
+  if (!UNDOABLE_PLAN_ACTIONS.has(entry.action) || !Array.isArray(entry.before) || !Array.isArray(entry.after)) {
+    throw new AppError("conflict", `That history entry (${entry.summary}) is not a cell edit; only cell edits can be undone. Nothing was changed.`, [{ field: "entryId", message: "Not a cell edit" }]);
+  }
   const before = entry.before as EditEntry[];
   const after = entry.after as EditEntry[];
   const current = await db
