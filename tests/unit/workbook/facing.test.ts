@@ -95,3 +95,27 @@ describe("reading a facing", () => {
     expect(facingLabel(137.5)).toBe("137.5°");
   });
 });
+
+describe("facings in a lots file", () => {
+  it("a row with a negative or broken facing is an error naming the row and the Facing column; good rows read as written", async () => {
+    const { readCsv } = await import("@/lib/workbook/table-io");
+    const { LOT_HEADERS, validateLotTable } = await import("@/lib/workbook/lot-columns");
+    const rows = [
+      ["L-1", "1 Larch Loop", "AS-1450", "NE", "", "planned", ""],
+      ["L-2", "2 Larch Loop", "AS-1450", "-45", "", "planned", ""],
+      ["L-3", "3 Larch Loop", "AS-1450", "1-80", "", "planned", ""],
+      ["L-4", "4 Larch Loop", "AS-1450", "315", "", "planned", ""],
+    ];
+    const table = readCsv([LOT_HEADERS.join(","), ...rows.map((r) => r.join(","))].join("\n"));
+    const result = validateLotTable(table, { planCodes: new Set(["AS-1450"]) });
+    expect(result.ok).toBe(false);
+    if (result.ok) return;
+    expect(result.errors.map((e) => [e.row, e.column])).toEqual([
+      [3, "Facing"],
+      [4, "Facing"],
+    ]);
+    expect(result.errors[0].reason).toContain("315");
+    const good = validateLotTable(readCsv([LOT_HEADERS.join(","), rows[0].join(","), rows[3].join(",")].join("\n")), { planCodes: new Set(["AS-1450"]) });
+    expect(good.ok && good.lots.map((l) => l.facingDeg)).toEqual([45, 315]);
+  });
+});
