@@ -39,37 +39,118 @@ export function chosenAccountId(request: NextRequest): number | null {
 }
 
 /**
+ * How a route handler is guarded, tagged on the handler itself so the route-coverage test can read
+ * it from every route.ts: "member" (apiRoute: session, account and permission), "session"
+ * (signed in, before an account is chosen), "public" (no session: invitation links), "next-auth"
+ * (next-auth's own handler: its CSRF token guards its writes).
+ */
+export type RouteGuard = { kind: "member"; permission: Permission } | { kind: "session" } | { kind: "public" } | { kind: "next-auth" };
+
+const ROUTE_GUARD = Symbol.for("platload.routeGuard");
+
+type NextHandler<P> = (request: NextRequest, context: { params: Promise<P> }) => Promise<Response>;
+
+export function routeGuardOf(handler: unknown): RouteGuard | undefined {
+  return typeof handler === "function" ? (handler as unknown as { [ROUTE_GUARD]?: RouteGuard })[ROUTE_GUARD] : undefined;
+}
+
+const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);
+
+/** The app's own origin: NEXTAUTH_URL (the address browsers use), else the address the request was sent to. */
+export function appOrigin(request: NextRequest): string {
+  const configured = process.env.NEXTAUTH_URL;
+  return configured ? new URL(configured).origin : request.nextUrl.origin;
+}
+
+/**
+ * A write must come from the app's own pages. Browsers send Origin with every POST, PUT, PATCH and
+ * DELETE, so a page on another origin (another local port included) is refused whatever its
+ * cookies. A request without Origin is not from a page of another site (a browser that hides it
+ * still says so in Sec-Fetch-Site), so scripts and tests that call the API directly still work.
+ */
+export function checkOrigin(request: NextRequest): void {
+  if (SAFE_METHODS.has(request.method)) return;
+  const expected = appOrigin(request);
+  const origin = request.headers.get("origin");
+  if (origin === null) {
+    const site = request.headers.get("sec-fetch-site");
+    if (site === null || site === "same-origin" || site === "none") return;
+    throw new AppError("forbidden", `A change must come from Platload's own pages (${expected}); this one came from another site (${site}). Nothing was changed.`);
+  }
+  if (origin !== expected) {
+    throw new AppError("forbidden", `A change must come from Platload's own pages (${expected}); this one came from ${origin}. Nothing was changed.`);
+  }
+}
+
+/** API answers hold account data: never kept by the browser or a shared cache. */
+function noStore(response: Response): Response {
+  try {
+    response.headers.set("cache-control", "no-store");
+    return response;
+  } catch {
+    // Response.redirect() and fetched responses have read-only headers: copy them.
+    const copy = new Response(response.body, response);
+    copy.headers.set("cache-control", "no-store");
+    return copy;
+  }
+}
+
+/** The edge every route shares: the Origin check, the one error shape, JSON answers, no caching. */
+function guarded<P>(guard: RouteGuard, run: (request: NextRequest, params: P) => Promise<unknown>): NextHandler<P> {
+  const handler: NextHandler<P> = async (request, context) => {
+    try {
+      checkOrigin(request);
+      const result = await run(request, await context.params);
+      return noStore(result instanceof Response ? result : NextResponse.json(result));
+    } catch (error) {
+      return noStore(errorResponse(error));
+    }
+  };
+  return Object.assign(handler, { [ROUTE_GUARD]: guard });
+}
+
+/**
  * Every API route handler goes through here: session, account and role are checked once, errors
  * become the one error shape, and a handler's return value becomes JSON.
  */
 export function apiRoute<P = Record<string, never>>(options: { permission: Permission }, handler: Handler<P>) {
-  return async (request: NextRequest, context: { params: Promise<P> }): Promise<Response> => {
-    try {
-      const db = getDb();
-      const member = await authorizeMember({
-        db,
-        userId: await sessionUserId(request),
-        accountId: chosenAccountId(request),
-        permission: options.permission,
-      });
-      const result = await handler({ request, params: await context.params, member, db });
-      return result instanceof Response ? result : NextResponse.json(result);
-    } catch (error) {
-      return errorResponse(error);
-    }
-  };
+  return guarded<P>({ kind: "member", permission: options.permission }, async (request, params) => {
+    const db = getDb();
+    const member = await authorizeMember({
+      db,
+      userId: await sessionUserId(request),
+      accountId: chosenAccountId(request),
+      permission: options.permission,
+    });
+    return handler({ request, params, member, db });
+  });
 }
 
-/** A route anyone may call (sign-up by invitation): same error handling, no session. */
+/** A route for a signed-in person before an account is chosen (the account picker). */
+export function sessionRoute<P = Record<string, never>>(handler: (ctx: { request: NextRequest; params: P; db: Database; userId: number }) => Promise<unknown>) {
+  return guarded<P>({ kind: "session" }, async (request, params) => {
+    const userId = await sessionUserId(request);
+    if (!userId) throw new AppError("unauthenticated", "Sign in to continue.");
+    return handler({ request, params, db: getDb(), userId });
+  });
+}
+
+/** A route anyone may call (sign-up by invitation): same edge, no session. */
 export function publicRoute<P = Record<string, never>>(handler: (ctx: { request: NextRequest; params: P; db: Database }) => Promise<unknown>) {
-  return async (request: NextRequest, context: { params: Promise<P> }): Promise<Response> => {
+  return guarded<P>({ kind: "public" }, (request, params) => handler({ request, params, db: getDb() }));
+}
+
+/** next-auth's own handler behind the same edge (Origin check, no caching); its CSRF token guards sign-in. */
+export function nextAuthRoute(handler: (request: NextRequest, context: { params: Promise<{ nextauth: string[] }> }) => Promise<Response>) {
+  const wrapped: NextHandler<{ nextauth: string[] }> = async (request, context) => {
     try {
-      const result = await handler({ request, params: await context.params, db: getDb() });
-      return result instanceof Response ? result : NextResponse.json(result);
+      checkOrigin(request);
+      return noStore(await handler(request, context));
     } catch (error) {
-      return errorResponse(error);
+      return noStore(errorResponse(error));
     }
   };
+  return Object.assign(wrapped, { [ROUTE_GUARD]: { kind: "next-auth" } as RouteGuard });
 }
 
 export function zodFieldErrors(error: z.ZodError): FieldError[] {
