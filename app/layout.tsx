@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import localFont from "next/font/local";
+import { connection } from "next/server";
 import { Providers } from "@/components/layout/providers";
 import "./globals.css";
 
@@ -15,7 +16,9 @@ export const metadata: Metadata = {
   description: "Heating and cooling loads for every plan model, facing and lot.",
 };
 
-export default function RootLayout({ children }: { children: React.ReactNode }) {
+export default async function RootLayout({ children }: { children: React.ReactNode }) {
+  // Every page renders per request, so Next can put this request's CSP nonce (proxy.ts) on its scripts.
+  await connection();
   return (
     <html lang="en" className={inter.variable}>
       <body className="min-h-screen font-sans text-sm">
