@@ -23,7 +23,8 @@ export S3_ENDPOINT="http://127.0.0.1:$(bash scripts/s3.sh port demo)"
 
 npx tsx scripts/migrate.ts
 npx tsx db/seed.ts
-npx next build
+# A demo build: it contains the development mailbox (lib/mail/mailbox.ts); `npm run build` does not.
+PLATLOAD_DEMO_BUILD=1 npx next build
 
 stop_all() { bash scripts/s3.sh stop demo || true; bash scripts/mail.sh stop demo || true; bash scripts/db.sh stop demo || true; }
 trap stop_all EXIT

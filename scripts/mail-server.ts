@@ -21,9 +21,12 @@ const server = new SMTPServer({
         const receivedAt = new Date();
         const id = `${receivedAt.getTime()}-${process.pid}-${sequence++}`;
         const to = session.envelope.rcptTo.map((r) => r.address);
+        const account = mail.headers.get("x-platload-account");
         const message = {
           id,
           receivedAt: receivedAt.toISOString(),
+          // The sending account (lib/mail/send.ts): the mailbox shows a message to that account's admins only.
+          accountId: typeof account === "string" ? account : null,
           from: session.envelope.mailFrom ? session.envelope.mailFrom.address : "",
           to,
           subject: mail.subject ?? "",

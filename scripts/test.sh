@@ -23,7 +23,8 @@ echo "== unit and integration tests (Vitest)"
 npx vitest run --config tests/vitest.config.mts
 echo "== build"
 export NEXTAUTH_SECRET="platload-e2e-secret"
-npx next build >.data/e2e-build.log 2>&1 || { cat .data/e2e-build.log; exit 1; }
+# A test build: it contains the development mailbox (lib/mail/mailbox.ts); `npm run build` does not.
+PLATLOAD_DEMO_BUILD=1 npx next build >.data/e2e-build.log 2>&1 || { cat .data/e2e-build.log; exit 1; }
 echo "== end-to-end tests (Playwright, Chromium)"
 npx tsx tests/e2e/prepare-database.ts
 npx playwright test --config tests/playwright.config.ts

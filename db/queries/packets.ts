@@ -316,7 +316,7 @@ export async function sendCommunityFile({ db, accountId, userId, senderName, acc
     lotCount: file.lotCount,
     sentTo: to,
     summary: `Sent ${PACKET_KIND_LABELS[what].toLowerCase()} of ${community.name} (${file.lotCount} lots) to ${to.join(", ")}`,
-    deliver: () => sendMail({ to, subject: message.subject, text: message.text, attachments: [{ filename: file.fileName, content: Buffer.from(file.body), contentType: file.contentType }] }),
+    deliver: () => sendMail({ accountId, to, subject: message.subject, text: message.text, attachments: [{ filename: file.fileName, content: Buffer.from(file.body), contentType: file.contentType }] }),
   });
   return { packetId, fileName: file.fileName, lotCount: file.lotCount, sentTo: to };
 }

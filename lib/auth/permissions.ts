@@ -17,6 +17,8 @@ export const PERMISSIONS = {
   "equipment.override": ["admin", "purchasing"],
   "schedules.export": ["admin", "designer", "reviewer", "purchasing"],
   "imports.read": ["admin", "designer", "reviewer", "purchasing", "viewer"],
+  /** The development mailbox (demo and test runs only, lib/mail/mailbox.ts): invitation links are in it. */
+  "mailbox.read": ["admin"],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof PERMISSIONS;

@@ -3,6 +3,8 @@ import nodemailer, { type Transporter } from "nodemailer";
 import { env } from "@/lib/env";
 
 export interface OutgoingMail {
+  /** The account the message is sent for: the development mailbox shows it to that account's admins only. */
+  accountId: number;
   to: string[];
   subject: string;
   text: string;
@@ -26,6 +28,9 @@ function transport(): Transporter {
   return globalForMail.platloadMail;
 }
 
-export async function sendMail(mail: OutgoingMail): Promise<void> {
-  await transport().sendMail({ from: env().MAIL_FROM, ...mail });
+/** The header that names the sending account (read back by the local fake SMTP server, scripts/mail-server.ts). */
+export const ACCOUNT_HEADER = "X-Platload-Account";
+
+export async function sendMail({ accountId, ...mail }: OutgoingMail): Promise<void> {
+  await transport().sendMail({ from: env().MAIL_FROM, ...mail, headers: { [ACCOUNT_HEADER]: String(accountId) } });
 }

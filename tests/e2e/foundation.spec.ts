@@ -40,14 +40,15 @@ test("an admin invites a member, the mail arrives, the link sets a password and 
   await form.getByLabel("Role").selectOption("viewer");
   await form.getByRole("button", { name: "Send invitation" }).click();
   await expect(page.getByTestId("invitations-list")).toContainText(email);
-  await signOut(page);
 
+  // the development mailbox shows the account's admin the mail the account sent
   await page.goto("/dev/mailbox");
   const message = page.getByTestId("mail-message").filter({ hasText: email }).first();
   await expect(message.getByTestId("mail-subject")).toContainText("invited you to Marrow & Finch Homes");
   const body = await message.getByTestId("mail-body").innerText();
   const link = /http\S+\/invitation\/\S+/.exec(body)?.[0];
   expect(link).toBeTruthy();
+  await signOut(page);
 
   await page.goto(link!);
   await page.getByLabel("Password (at least 10 characters)").fill("sam-super-pass");

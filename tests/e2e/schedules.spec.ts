@@ -4,7 +4,7 @@ import ExcelJS from "exceljs";
 import { PDFParse } from "pdf-parse";
 import { expect, test } from "@playwright/test";
 import { TEST_MAILBOX_DIR } from "../support/test-env";
-import { signInAs } from "./fixtures";
+import { signInAs, signOut } from "./fixtures";
 
 interface ApiLot {
   id: number;
@@ -71,7 +71,9 @@ test("purchasing sees every lot's system counted, exports the equipment schedule
   await page.screenshot({ path: testInfo.outputPath("schedules.png"), fullPage: true });
   await testInfo.attach("schedules", { path: testInfo.outputPath("schedules.png"), contentType: "image/png" });
 
-  // the message is in the development mailbox, with the PDF attached
+  // the message is in the development mailbox (an admin's page), with the PDF attached
+  await signOut(page);
+  await signInAs(page, "admin@marrowfinch.test");
   await page.goto("/dev/mailbox");
   const message = page.getByTestId("mail-message").filter({ hasText: to }).first();
   await expect(message.getByTestId("mail-subject")).toContainText("Cedar Hollow");

@@ -8,6 +8,6 @@ export const POST = apiRoute({ permission: "team.manage" }, async ({ db, member,
   const body = await parseJsonBody(request, inviteSchema);
   const { token, invitationId, accountName } = await createInvitation({ db, accountId: member.accountId, invitedByUserId: member.userId, ...body });
   const origin = process.env.NEXTAUTH_URL ?? request.nextUrl.origin;
-  await sendMail(invitationMessage({ to: body.email, name: body.name, role: body.role, accountName, inviterName: member.name, link: `${origin}/invitation/${token}` }));
+  await sendMail(invitationMessage({ accountId: member.accountId, to: body.email, name: body.name, role: body.role, accountName, inviterName: member.name, link: `${origin}/invitation/${token}` }));
   return { invitationId };
 });

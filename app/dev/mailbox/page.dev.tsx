@@ -1,18 +1,34 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
+import { getPageContext } from "@/lib/auth/page";
 import { listMailbox, mailboxEnabled } from "@/lib/mail/mailbox";
 
 export const metadata: Metadata = { title: "Development mailbox" };
 export const dynamic = "force-dynamic";
 
-/** Messages caught by the local fake SMTP server; only where PLATLOAD_MAILBOX_DIR is set (never production). */
+/**
+ * Messages caught by the local fake SMTP server, for a signed-in admin: the mail their account sent.
+ * When it exists at all is lib/mail/mailbox.ts's rule; this file ends in .dev.tsx, so a production
+ * build does not contain the page.
+ */
 export default async function MailboxPage() {
   if (!mailboxEnabled()) notFound();
-  const messages = await listMailbox();
+  const { member, permissions } = await getPageContext();
+  if (!permissions.includes("mailbox.read")) {
+    return (
+      <main className="mx-auto max-w-4xl px-4 py-6" data-testid="mailbox-refused">
+        <h1 className="mb-1 text-lg font-semibold">Development mailbox</h1>
+        <p className="text-zinc-600">Only an admin of {member.accountName} can read the account&apos;s development mailbox.</p>
+      </main>
+    );
+  }
+  const messages = await listMailbox({ accountId: member.accountId });
   return (
     <main className="mx-auto max-w-4xl px-4 py-6">
       <h1 className="mb-1 text-lg font-semibold">Development mailbox</h1>
-      <p className="mb-4 text-zinc-600">Every message Platload sent through the local fake SMTP server, newest first. Nothing here left this machine.</p>
+      <p className="mb-4 text-zinc-600">
+        Every message Platload sent for {member.accountName} through the local fake SMTP server, newest first. Nothing here left this machine.
+      </p>
       {messages.length === 0 ? <p className="text-zinc-500">No messages yet.</p> : null}
       <ul className="space-y-3" data-testid="mailbox">
         {messages.map((m) => (
