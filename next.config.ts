@@ -17,7 +17,7 @@ export function pageExtensionsFor(phase: string, demoBuild: string | undefined):
 export default function nextConfig(phase: string): NextConfig {
   return {
     // Packages with Node-only internals stay outside the server bundle.
-    serverExternalPackages: ["exceljs", "mysql2", "nodemailer", "mailparser", "bcryptjs", "psychrolib", "pdfkit"],
+    serverExternalPackages: ["exceljs", "mysql2", "nodemailer", "mailparser", "bcryptjs", "psychrolib", "pdfkit", "rate-limiter-flexible"],
     poweredByHeader: false,
     typedRoutes: false,
     pageExtensions: pageExtensionsFor(phase, process.env.PLATLOAD_DEMO_BUILD),

@@ -20,6 +20,12 @@ export function getDb(): Database {
   return globalForDb.platloadDb;
 }
 
+/** The app's connection pool itself (the sign-in limiter's store shares it). */
+export function getPool(): mysql.Pool {
+  getDb();
+  return globalForDb.platloadPool!;
+}
+
 export function databaseFor(pool: mysql.Pool): Database {
   return drizzle(pool, { schema, mode: "default" });
 }

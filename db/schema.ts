@@ -85,18 +85,18 @@ export const invitations = mysqlTable(
   (t) => [index("invitations_account").on(t.accountId)],
 );
 
-/** Every sign-in attempt, so failed attempts can be rate-limited across app instances. */
-export const signInAttempts = mysqlTable(
-  "sign_in_attempts",
-  {
-    id: id(),
-    email: varchar("email", { length: 254 }).notNull(),
-    clientAddress: varchar("client_address", { length: 64 }).notNull(),
-    succeeded: boolean("succeeded").notNull(),
-    createdAt: createdAt(),
-  },
-  (t) => [index("sign_in_attempts_email_time").on(t.email, t.createdAt), index("sign_in_attempts_addr_time").on(t.clientAddress, t.createdAt)],
-);
+/**
+ * Counters of the sign-in limits (lib/auth/rate-limit.ts), kept by rate-limiter-flexible's MySQL
+ * store so every app instance shares them. The library writes `INSERT … VALUES (key, points,
+ * expire)`: the three columns, in this order, are its layout. Keys are hashes, never an e-mail or
+ * an address.
+ */
+export const rateLimits = mysqlTable("rate_limits", {
+  key: varchar("key", { length: 255 }).primaryKey(),
+  points: int("points").notNull().default(0),
+  /** Milliseconds since 1970 when the counter resets; null never. */
+  expire: bigint("expire", { mode: "number", unsigned: true }),
+});
 
 export const plans = mysqlTable(
   "plans",

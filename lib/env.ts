@@ -9,8 +9,13 @@ const envSchema = z.object({
   SMTP_PASSWORD: z.string().optional(),
   SMTP_SECURE: z.enum(["true", "false"]).default("false"),
   MAIL_FROM: z.string().default("Platload <no-reply@platload.test>"),
-  /** Folder of the local fake SMTP server's messages; when set, the development mailbox page is on. */
+  /** Folder of the local fake SMTP server's messages: the development mailbox (lib/mail/mailbox.ts says when it is on). */
   PLATLOAD_MAILBOX_DIR: z.string().optional(),
+  /**
+   * Reverse proxies in front of the app that append to X-Forwarded-For (lib/http/client-address.ts).
+   * 0: the client's address is the socket's and X-Forwarded-For is ignored.
+   */
+  PLATLOAD_TRUSTED_PROXIES: z.coerce.number().int("PLATLOAD_TRUSTED_PROXIES must be a whole number").min(0).max(10).default(0),
   NEXTAUTH_URL: z.string().url().optional(),
   /** Object storage (S3 API): a local fake in development and tests, a real bucket in production. */
   S3_ENDPOINT: z.string().url().optional(),

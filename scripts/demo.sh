@@ -43,4 +43,5 @@ Demo sign-ins (password for all: platload-demo-1):
 Press Ctrl-C to stop.
 
 MSG
-npx next start -H 127.0.0.1 -p "$PORT"
+# Platload's own server (scripts/serve.ts): it reads the client address for the sign-in limits.
+npx tsx scripts/serve.ts -H 127.0.0.1 -p "$PORT"

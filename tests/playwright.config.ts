@@ -23,7 +23,8 @@ export default defineConfig({
     },
   },
   webServer: {
-    command: `npx next start -H 127.0.0.1 -p ${TEST_APP_PORT}`,
+    // Platload's own server, as in production (it reads the client address for the sign-in limits).
+    command: `npx tsx scripts/serve.ts -H 127.0.0.1 -p ${TEST_APP_PORT}`,
     url: `${baseURL}/sign-in`,
     cwd: "..",
     reuseExistingServer: false,

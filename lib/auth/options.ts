@@ -5,21 +5,39 @@ import CredentialsProvider from "next-auth/providers/credentials";
 import { z } from "zod";
 import { getDb } from "@/db";
 import { users } from "@/db/schema";
-import { verifyPassword } from "./password";
-import { isSignInBlocked, recordSignInAttempt, SIGN_IN_WINDOW_MINUTES } from "./rate-limit";
+import { stampedClientAddress } from "@/lib/http/client-address";
+import { checkSignInPassword } from "./password";
+import { refusalMessage, signInLimiter } from "./rate-limit";
 
 const credentialsSchema = z.object({ email: z.string().trim().toLowerCase().email(), password: z.string().min(1) });
 
 export const SIGN_IN_MESSAGES = {
   invalid: "That e-mail and password do not match an account.",
-  blocked: `Too many failed sign-ins. Wait ${SIGN_IN_WINDOW_MINUTES} minutes and try again.`,
 } as const;
 
-function clientAddressOf(headers: Record<string, unknown> | undefined): string {
-  const forwarded = headers?.["x-forwarded-for"];
-  if (typeof forwarded === "string" && forwarded) return forwarded.split(",")[0].trim().slice(0, 64);
-  const real = headers?.["x-real-ip"];
-  return typeof real === "string" && real ? real.slice(0, 64) : "local";
+/**
+ * Checks a sign-in: the limits first (lib/auth/rate-limit.ts), then the password (one bcrypt
+ * compare whether or not the e-mail has a sign-in). `headers` are the request's, as next-auth
+ * hands them over; only the client address the edge stamped is read from them.
+ */
+export async function authorizeSignIn(raw: unknown, headers: Record<string, unknown> | undefined) {
+  const parsed = credentialsSchema.safeParse(raw);
+  if (!parsed.success) throw new Error(SIGN_IN_MESSAGES.invalid);
+  const { email, password } = parsed.data;
+  const db = getDb();
+  // The address the edge read from the socket (lib/http/client-address.ts), never a header the client set.
+  const clientAddress = stampedClientAddress(headers);
+  const limiter = signInLimiter();
+  const check = await limiter.check({ email, clientAddress });
+  if (check.refused) throw new Error(refusalMessage(check));
+  const [user] = await db.select().from(users).where(eq(users.email, email));
+  const ok = await checkSignInPassword(password, user?.passwordHash);
+  if (!ok || !user) {
+    await limiter.recordFailure({ email, clientAddress });
+    throw new Error(SIGN_IN_MESSAGES.invalid);
+  }
+  await limiter.recordSuccess({ email, clientAddress });
+  return { id: String(user.id), email: user.email, name: user.name };
 }
 
 export const authOptions: NextAuthOptions = {
@@ -29,19 +47,7 @@ export const authOptions: NextAuthOptions = {
     CredentialsProvider({
       name: "Platload",
       credentials: { email: { label: "E-mail", type: "email" }, password: { label: "Password", type: "password" } },
-      async authorize(raw, req) {
-        const parsed = credentialsSchema.safeParse(raw);
-        if (!parsed.success) throw new Error(SIGN_IN_MESSAGES.invalid);
-        const { email, password } = parsed.data;
-        const db = getDb();
-        const clientAddress = clientAddressOf(req?.headers as Record<string, unknown> | undefined);
-        if (await isSignInBlocked({ db, email, clientAddress })) throw new Error(SIGN_IN_MESSAGES.blocked);
-        const [user] = await db.select().from(users).where(eq(users.email, email));
-        const ok = !!user?.passwordHash && (await verifyPassword(password, user.passwordHash));
-        await recordSignInAttempt({ db, email, clientAddress, succeeded: ok });
-        if (!ok || !user) throw new Error(SIGN_IN_MESSAGES.invalid);
-        return { id: String(user.id), email: user.email, name: user.name };
-      },
+      authorize: (raw, req) => authorizeSignIn(raw, req?.headers as Record<string, unknown> | undefined),
     }),
   ],
   callbacks: {

@@ -1,0 +1,8 @@
+CREATE TABLE `rate_limits` (
+	`key` varchar(255) NOT NULL,
+	`points` int NOT NULL DEFAULT 0,
+	`expire` bigint unsigned,
+	CONSTRAINT `rate_limits_key` PRIMARY KEY(`key`)
+);
+--> statement-breakpoint
+DROP TABLE `sign_in_attempts`;
