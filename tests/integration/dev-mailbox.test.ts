@@ -65,14 +65,14 @@ describe("the development mailbox", () => {
   });
 
   it("is on only with a mailbox folder and an app address on loopback", () => {
-    expect(mailboxAllowed({ mailboxDir: "/tmp/mailbox", appUrl: "http://127.0.0.1:3710" })).toBe(true);
-    expect(mailboxAllowed({ mailboxDir: "/tmp/mailbox", appUrl: "http://localhost:3710" })).toBe(true);
-    expect(mailboxAllowed({ mailboxDir: "/tmp/mailbox", appUrl: "http://[::1]:3710" })).toBe(true);
+    expect(mailboxAllowed({ mailboxDir: "mail-folder", appUrl: "http://127.0.0.1:3710" })).toBe(true);
+    expect(mailboxAllowed({ mailboxDir: "mail-folder", appUrl: "http://localhost:3710" })).toBe(true);
+    expect(mailboxAllowed({ mailboxDir: "mail-folder", appUrl: "http://[::1]:3710" })).toBe(true);
     expect(mailboxAllowed({ mailboxDir: undefined, appUrl: "http://127.0.0.1:3710" })).toBe(false);
-    expect(mailboxAllowed({ mailboxDir: "/tmp/mailbox", appUrl: undefined })).toBe(false);
-    expect(mailboxAllowed({ mailboxDir: "/tmp/mailbox", appUrl: "https://platload.example.com" })).toBe(false);
-    expect(mailboxAllowed({ mailboxDir: "/tmp/mailbox", appUrl: "http://10.0.0.5:3710" })).toBe(false);
-    expect(mailboxAllowed({ mailboxDir: "/tmp/mailbox", appUrl: "http://127.0.0.1.example.com" })).toBe(false);
+    expect(mailboxAllowed({ mailboxDir: "mail-folder", appUrl: undefined })).toBe(false);
+    expect(mailboxAllowed({ mailboxDir: "mail-folder", appUrl: "https://platload.example.com" })).toBe(false);
+    expect(mailboxAllowed({ mailboxDir: "mail-folder", appUrl: "http://10.0.0.5:3710" })).toBe(false);
+    expect(mailboxAllowed({ mailboxDir: "mail-folder", appUrl: "http://127.0.0.1.example.com" })).toBe(false);
   });
 
   it("is not a route of a production build, whatever the environment; only of next dev and the demo and test builds", () => {
