@@ -6,7 +6,6 @@
  * headers to a column list (plan library now; lots and equipment catalog later).
  */
 import ExcelJS from "exceljs";
-import JSZip from "jszip";
 import Papa from "papaparse";
 import type { RawTable } from "./columns";
 
@@ -184,6 +183,10 @@ export async function writeXlsx(
   const buffer = await workbook.xlsx.writeBuffer();
   if (!options.fixedTimestamp) return new Uint8Array(buffer as ArrayBuffer);
   // exceljs dates each zip entry with the current time; rewrite the entries with the fixed one.
+  // jszip is loaded here, not at the top: grids in the browser import this module for pasting,
+  // and jszip's browser build brings a polyfill that probes for eval, which the pages' content
+  // security policy refuses (lib/http/security-headers.ts).
+  const { default: JSZip } = await import("jszip");
   const zip = await JSZip.loadAsync(buffer as ArrayBuffer);
   const stamped = new JSZip();
   const names = Object.keys(zip.files).filter((name) => !zip.files[name].dir);

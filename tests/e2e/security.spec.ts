@@ -21,7 +21,7 @@ async function watchPolicy(page: Page): Promise<string[]> {
   return refused;
 }
 
-test("the pages work under their content security policy: sign-in, plan grid, plan sheet charts, lots grid", async ({ page }) => {
+test("the pages work under their content security policy: sign-in, plan grid, plan sheet charts, lots grid, equipment catalog", async ({ page }) => {
   const refused = await watchPolicy(page);
   const signInPage = await page.goto("/sign-in");
   const policy = signInPage!.headers()["content-security-policy"];
@@ -42,6 +42,8 @@ test("the pages work under their content security policy: sign-in, plan grid, pl
   const communities = ((await (await page.request.get("/api/communities")).json()) as { communities: { id: number; name: string }[] }).communities;
   await page.goto(`/communities/${communities.find((c) => c.name === "Cedar Hollow")!.id}`);
   await expect(page.getByTestId("lots-grid").locator(".ag-row").first()).toBeVisible();
+  await page.goto("/equipment");
+  await expect(page.locator(".ag-row").first()).toBeVisible();
   expect(refused).toEqual([]);
 });
 
