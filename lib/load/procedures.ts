@@ -11,6 +11,7 @@ import { DEFAULT_LOAD_PROCEDURE, DESIGN_ESTIMATE_CAUTION, FACING_LABELS, LOAD_PR
 import { prepareSite } from "./site";
 import { CM2_PER_IN2 } from "./units";
 import { computeResidentialLoadFactorFacing } from "./residential-load-factor/from-plan";
+import { facadeAzimuthsDeg, normalizeAzimuth } from "./facing";
 import { ENGINE_VERSION } from "./version";
 
 export { ENGINE_VERSION };
@@ -28,9 +29,6 @@ export interface ComputeOptions {
   procedure?: LoadProcedure;
 }
 
-function normalizeAzimuth(deg: number): number {
-  return ((deg % 360) + 360) % 360;
-}
 
 function validate(plan: unknown, site: unknown, options: ComputeOptions | undefined): { plan: PlanInput; site: SiteConditions } {
   if (options?.validated) return { plan: plan as PlanInput, site: site as SiteConditions };
@@ -57,12 +55,7 @@ function facingResult(p: PreparedPlan, facingAzimuthDeg: number, procedure: Load
     engineVersion: ENGINE_VERSION,
     procedure,
     facingAzimuthDeg: az,
-    facadeAzimuthsDeg: {
-      front: az,
-      left: normalizeAzimuth(az + 90),
-      back: normalizeAzimuth(az + 180),
-      right: normalizeAzimuth(az + 270),
-    },
+    facadeAzimuthsDeg: facadeAzimuthsDeg(az),
     heating: p.heating,
     cooling: hourlyCoolingDay(p, az),
     ventilation: { requiredCfm: p.air.ventilationRequiredCfm, providedCfm: p.air.ventilationProvidedCfm, kind: p.plan.ventilation.kind },

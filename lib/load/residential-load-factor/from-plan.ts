@@ -18,6 +18,7 @@ import {
   slabFFactor,
   wallU,
 } from "../assemblies";
+import { facadeAzimuthsDeg, normalizeAzimuth } from "../facing";
 import { ENGINE_VERSION } from "../version";
 import { LoadInputError } from "../errors";
 import { internalGains, occupantsOf } from "../internal-gains";
@@ -68,10 +69,6 @@ export interface RlfFromPlanOptions {
 
 const FACADE_OFFSET_DEG: Record<Facade, number> = { front: 0, left: 90, back: 180, right: 270 };
 
-function normalizeAzimuth(deg: number): number {
-  const a = deg % 360;
-  return a < 0 ? a + 360 : a;
-}
 
 /** Ground temperature for below-grade heating losses: the engine's rough estimate, the mean of the design dry bulbs (from memory). */
 function groundHeatingF(site: SiteConditions): number {
@@ -613,12 +610,7 @@ export function computeResidentialLoadFactorFacing(
     engineVersion: ENGINE_VERSION,
     procedure: "residential-load-factor",
     facingAzimuthDeg: az,
-    facadeAzimuthsDeg: {
-      front: az,
-      left: normalizeAzimuth(az + 90),
-      back: normalizeAzimuth(az + 180),
-      right: normalizeAzimuth(az + 270),
-    },
+    facadeAzimuthsDeg: facadeAzimuthsDeg(az),
     heating,
     cooling,
     ventilation: { requiredCfm: r.air.requiredVentilationCfm, providedCfm: base.providedVentilationCfm, kind: plan.ventilation.kind },
