@@ -2,8 +2,8 @@ import "server-only";
 import { eq } from "drizzle-orm";
 import { planRevisions, plans } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
-import { checkPlanImport, type ValidPlanImport } from "@/lib/imports/kinds";
-import { PLAN_COLUMNS } from "@/lib/workbook/plan-columns";
+import { checkPlanImport } from "@/lib/imports/kinds";
+import { PLAN_COLUMNS, type ValidPlanRow } from "@/lib/workbook/plan-columns";
 import type { ImportSteps } from "./imports";
 import { recomputeLots } from "./lots";
 import { revisionCells, writePlanRevision, type PlanCells } from "./plans";
@@ -14,11 +14,11 @@ import { revisionCells, writePlanRevision, type PlanCells } from "./plans";
  * there (so an edit made while the file was checked is seen, never overwritten unseen). A row
  * equal to the plan as it is changes nothing.
  */
-export const planImportSteps: ImportSteps<undefined, ValidPlanImport, ValidPlanImport> = {
+export const planImportSteps: ImportSteps<undefined, ValidPlanRow[], ValidPlanRow[]> = {
   loadContext: async () => undefined,
   check: (table) => checkPlanImport(table),
   compute: async (checked) => checked,
-  async save(tx, record, { plans: rows, entered }) {
+  async save(tx, record, rows) {
     const { accountId, userId } = record;
     const existing = await tx.select({ plan: plans, revision: planRevisions }).from(plans).innerJoin(planRevisions, eq(planRevisions.id, plans.currentRevisionId)).where(eq(plans.accountId, accountId)).for("update");
     const byCode = new Map(existing.map((e) => [e.plan.planCode.toLowerCase(), e]));
@@ -27,7 +27,7 @@ export const planImportSteps: ImportSteps<undefined, ValidPlanImport, ValidPlanI
     const after: { planId: number; planCode: string; cells: PlanCells }[] = [];
     for (const row of rows) {
       const cells: PlanCells = {};
-      for (const column of PLAN_COLUMNS) cells[column.key] = entered.get(row.rowNumber)?.[column.key] ?? "";
+      for (const column of PLAN_COLUMNS) cells[column.key] = row.entered[column.key] ?? "";
       const found = byCode.get(row.planCode.toLowerCase());
       if (found) {
         const old = revisionCells(found.revision, found.plan.planCode, found.plan.name);

@@ -2,22 +2,16 @@
  * The pure check of each importer: a table in, the rows to write or every problem out. The lots
  * check also takes what it must know of the account (its plan codes, the community's lots).
  */
-import { readTable, type RawTable, type TableCellError } from "@/lib/workbook/columns";
+import type { RawTable, TableCellError } from "@/lib/workbook/columns";
 import { EQUIPMENT_COLUMNS, validateEquipmentTable, type EquipmentCatalogEntry } from "@/lib/workbook/equipment-columns";
 import { LOT_COLUMNS, validateLotTable, type LotStatusValue, type ValidLotRow } from "@/lib/workbook/lot-columns";
 import { PLAN_COLUMNS, validatePlanTable, type ValidPlanRow } from "@/lib/workbook/plan-columns";
 import { readImportFile, sortProblems, withSheetHint, type ImportKind, type StageResult } from "./pipeline";
 
-export interface ValidPlanImport {
-  plans: ValidPlanRow[];
-  /** The cells as entered (formulas kept), by row number, to keep with each revision. */
-  entered: Map<number, Record<string, string>>;
-}
-
-export function checkPlanImport(table: RawTable): StageResult<ValidPlanImport> {
+/** The plan rows to write, each with its cells as entered (formulas kept) to keep with its revision. */
+export function checkPlanImport(table: RawTable): StageResult<ValidPlanRow[]> {
   const result = validatePlanTable(table);
-  if (!result.ok) return { ok: false, errors: withSheetHint(table, PLAN_COLUMNS, result.errors) };
-  return { ok: true, value: { plans: result.plans, entered: new Map(readTable(table, PLAN_COLUMNS).rows.map((r) => [r.rowNumber, r.entered])) } };
+  return result.ok ? { ok: true, value: result.plans } : { ok: false, errors: withSheetHint(table, PLAN_COLUMNS, result.errors) };
 }
 
 export function checkCatalogImport(table: RawTable): StageResult<EquipmentCatalogEntry[]> {

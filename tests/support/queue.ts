@@ -50,11 +50,15 @@ export function startWorkerProcess(env: Record<string, string>, { label = "worke
   });
 }
 
-/** Stops a worker process the tests started and waits for it to be gone. */
+/** Stops a worker process the tests started and waits for it to be gone (killed after 8 s). */
 export async function stopWorkerProcess(child: ChildProcess, signal: NodeJS.Signals = "SIGTERM"): Promise<void> {
   if (child.exitCode !== null || child.signalCode !== null) return;
   await new Promise<void>((resolve) => {
-    child.once("exit", () => resolve());
+    const timer = setTimeout(() => child.kill("SIGKILL"), 8000);
+    child.once("exit", () => {
+      clearTimeout(timer);
+      resolve();
+    });
     child.kill(signal);
   });
 }
