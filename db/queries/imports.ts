@@ -82,26 +82,29 @@ async function setProgress(db: Database, importId: number, state: ImportState, p
 
 /**
  * Marks an import failed with its problems (the first 200 and the count), unless it has finished
- * already, then deletes the file: a file that failed is not kept. Safe to run twice.
+ * already. A file that failed is not kept: it is deleted first, so the row never shows "failed"
+ * with its file still stored (a delete that fails leaves the key for the sweep). Safe to run twice.
  */
 export async function failImport(db: Database, importId: number, problems: readonly TableCellError[]): Promise<void> {
   const { errors, errorCount } = capProblems(problems);
-  const record = await db.transaction(async (tx) => {
-    const [row] = await tx.select().from(imports).where(eq(imports.id, importId)).for("update");
-    if (!row || FINAL.includes(row.state)) return null;
-    await tx.update(imports).set({ state: "failed", errors, errorCount, progressPct: 100, finishedAt: new Date() }).where(eq(imports.id, importId));
-    return row;
+  const [current] = await db.select({ state: imports.state, fileKey: imports.fileKey }).from(imports).where(eq(imports.id, importId));
+  if (!current || FINAL.includes(current.state)) return;
+  const deleted = current.fileKey ? await deleteQuietly(importId, current.fileKey) : true;
+  await db.transaction(async (tx) => {
+    const [row] = await tx.select({ state: imports.state }).from(imports).where(eq(imports.id, importId)).for("update");
+    if (!row || FINAL.includes(row.state)) return;
+    await tx.update(imports).set({ state: "failed", errors, errorCount, progressPct: 100, finishedAt: new Date(), ...(deleted ? { fileKey: null } : {}) }).where(eq(imports.id, importId));
   });
-  if (record?.fileKey) await forgetFile(db, importId, record.fileKey);
 }
 
-async function forgetFile(db: Database, importId: number, fileKey: string) {
+async function deleteQuietly(importId: number, fileKey: string): Promise<boolean> {
   try {
     await deleteObject(fileKey);
-    await db.update(imports).set({ fileKey: null }).where(and(eq(imports.id, importId), eq(imports.state, "failed")));
+    return true;
   } catch (error) {
-    // Left for the sweep (sweepImports), which deletes the files of failed imports.
+    // Left for the sweep (sweepFailedImportFiles), which deletes the files of failed imports.
     console.error(`could not delete the file of failed import ${importId}:`, (error as Error).message);
+    return false;
   }
 }
 
@@ -177,6 +180,11 @@ export async function unfinishedImports(db: Database, before: Date) {
 /** Deletes the files failed imports still hold (a delete that failed when the import failed). */
 export async function sweepFailedImportFiles(db: Database): Promise<number> {
   const rows = await db.select({ id: imports.id, fileKey: imports.fileKey }).from(imports).where(and(eq(imports.state, "failed"), isNotNull(imports.fileKey)));
-  for (const row of rows) await forgetFile(db, row.id, row.fileKey!);
-  return rows.length;
+  let deleted = 0;
+  for (const row of rows) {
+    if (!(await deleteQuietly(row.id, row.fileKey!))) continue;
+    await db.update(imports).set({ fileKey: null }).where(eq(imports.id, row.id));
+    deleted++;
+  }
+  return deleted;
 }

@@ -68,7 +68,10 @@ export async function lotReportsFor({ db, accountId, lotIds }: { db: Database; a
     throw new AppError("conflict", `Lot${noPlan.length > 1 ? "s" : ""} ${noPlan.join(", ")} ha${noPlan.length > 1 ? "ve" : "s"} no plan model, so no load report can be made. Nothing was generated; choose a plan for ${noPlan.length > 1 ? "them" : "it"} or leave ${noPlan.length > 1 ? "them" : "it"} out.`);
   }
 
-  const reports = rows.map(({ lot, plan, revision, community }) => {
+  const reports: LotReport[] = [];
+  for (const [index, { lot, plan, revision, community }] of rows.entries()) {
+    // Computing many lots is long work for a job worker: let it renew its claim between lots.
+    if (index % 25 === 24) await new Promise((resolve) => setImmediate(resolve));
     const snapshot = lot.permitSnapshot as PermitSnapshot | null;
     let site: SiteConditions;
     let input: PlanInput;
@@ -91,7 +94,7 @@ export async function lotReportsFor({ db, accountId, lotIds }: { db: Database; a
       approval = { name: revision!.approverName, credential: revision!.approverCredential, date: revision!.approvedOn };
     }
     const { systemId, selection } = lotEquipment(lot);
-    return lotReportFromResults({
+    reports.push(lotReportFromResults({
       builderAccountName: account?.name ?? "Builder",
       communityName: community.name,
       lot: { lotNumber: lot.lotNumber, address: lot.address || null },
@@ -102,8 +105,8 @@ export async function lotReportsFor({ db, accountId, lotIds }: { db: Database; a
       sizingLimits: selection?.limitsUsed ?? accountLimits,
       approval: approval.name && approval.date ? { reviewerName: approval.name, credential: approval.credential ?? "", approvedOn: approval.date } : null,
       generatedAt,
-    });
-  });
+    }));
+  }
   return { reports, lots: rows.map((r) => r.lot) };
 }
 

@@ -54,7 +54,14 @@ export async function readUploadedFile(request: Request): Promise<{ fileName: st
   const maxBytes = env().PLATLOAD_MAX_UPLOAD_BYTES;
   const type = request.headers.get("content-type") ?? "";
   if (!type.toLowerCase().startsWith("multipart/form-data")) throw noFile();
-  const body = await readBodyLimited(request, maxBytes + MULTIPART_OVERHEAD_BYTES, "The upload");
+  let body: Uint8Array;
+  try {
+    body = await readBodyLimited(request, maxBytes + MULTIPART_OVERHEAD_BYTES, "The upload");
+  } catch (error) {
+    // Name the upload limit itself, not the room left for the multipart wrapping.
+    if (error instanceof AppError && error.code === "payload_too_large") throw tooLarge("The upload", maxBytes);
+    throw error;
+  }
   const form = await new Response(body as BodyInit, { headers: { "content-type": type } }).formData().catch(() => null);
   const file = form?.get("file");
   if (!file || typeof file === "string") throw noFile();

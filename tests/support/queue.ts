@@ -26,6 +26,8 @@ export function startWorkerProcess(env: Record<string, string>, { label = "worke
     cwd: root,
     env: { ...process.env, ...env },
     stdio: ["ignore", "pipe", "pipe"],
+    // Its own process group, so a hard kill reaches the node process tsx starts, not tsx alone.
+    detached: true,
   });
   return new Promise((resolve, reject) => {
     let seen = "";
@@ -50,11 +52,19 @@ export function startWorkerProcess(env: Record<string, string>, { label = "worke
   });
 }
 
+/** Kills a worker the tests started at once (SIGKILL to its process group), as a crash would. */
+export async function killWorkerHard(child: ChildProcess): Promise<void> {
+  if (child.exitCode !== null || child.signalCode !== null) return;
+  const gone = new Promise<void>((resolve) => child.once("exit", () => resolve()));
+  process.kill(-child.pid!, "SIGKILL");
+  await gone;
+}
+
 /** Stops a worker process the tests started and waits for it to be gone (killed after 8 s). */
 export async function stopWorkerProcess(child: ChildProcess, signal: NodeJS.Signals = "SIGTERM"): Promise<void> {
   if (child.exitCode !== null || child.signalCode !== null) return;
   await new Promise<void>((resolve) => {
-    const timer = setTimeout(() => child.kill("SIGKILL"), 8000);
+    const timer = setTimeout(() => process.kill(-child.pid!, "SIGKILL"), 8000);
     child.once("exit", () => {
       clearTimeout(timer);
       resolve();
