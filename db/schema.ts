@@ -18,6 +18,7 @@ import {
 } from "drizzle-orm/mysql-core";
 import { ROLES, type Role } from "@/lib/auth/roles";
 import { DEFAULT_LOAD_PROCEDURE, LOAD_PROCEDURES } from "@/lib/load/results";
+import { IMPORT_KINDS } from "@/lib/imports/import-kinds";
 
 /** MariaDB rejects drizzle's serial(): an unsigned auto-increment bigint instead (DEVELOPERS.md, MariaDB notes). */
 const id = () => bigint("id", { mode: "number", unsigned: true }).autoincrement().primaryKey();
@@ -29,10 +30,14 @@ export { ROLES, type Role };
 export const LOT_STATUSES = ["planned", "permit_submitted", "permitted", "built"] as const;
 export type LotStatus = (typeof LOT_STATUSES)[number];
 
-export const IMPORT_KINDS = ["plans", "lots", "equipment"] as const;
+export { IMPORT_KINDS };
 export const IMPORT_STATES = ["received", "validating", "computing", "saving", "succeeded", "failed"] as const;
 
 export const SYSTEM_TYPES = ["ac-furnace", "heat-pump", "heat-pump-backup", "furnace"] as const;
+
+/** A packet is asked for (queued), made by a worker (rendering, then sending when e-mailed), then ready or failed. */
+export const PACKET_STATES = ["queued", "rendering", "sending", "ready", "failed"] as const;
+export type PacketState = (typeof PACKET_STATES)[number];
 
 export const accounts = mysqlTable("accounts", {
   id: id(),
@@ -233,15 +238,21 @@ export const imports = mysqlTable(
     progressPct: int("progress_pct").notNull().default(0),
     createdCount: int("created_count").notNull().default(0),
     updatedCount: int("updated_count").notNull().default(0),
-    /** Row-level errors: [{ row, column, reason }]. */
+    /** Row-level errors: [{ row, column, reason }], the first 200 of them. */
     errors: json("errors"),
+    /** How many problems the file had in all (errors keeps the first 200). */
+    errorCount: int("error_count").notNull().default(0),
     createdAt: createdAt(),
     finishedAt: datetime("finished_at", { mode: "date", fsp: 3 }),
   },
   (t) => [index("imports_account_time").on(t.accountId, t.createdAt)],
 );
 
-/** Generated files (permit packets, schedules) kept in object storage, with who made them and when. */
+/**
+ * Generated files (permit packets, schedules) kept in object storage, with who made them and when.
+ * The row is made when the file is asked for and a worker fills it in (state), so the request
+ * itself (which lots, whom to send it to) is kept here and the job carries only the id.
+ */
 export const packets = mysqlTable(
   "packets",
   {
@@ -249,15 +260,24 @@ export const packets = mysqlTable(
     accountId: ref("account_id").notNull().references(() => accounts.id),
     communityId: ref("community_id").references(() => communities.id),
     kind: mysqlEnum("kind", ["permit-packet", "equipment-schedule", "permit-schedule"]).notNull(),
-    fileName: varchar("file_name", { length: 255 }).notNull(),
-    fileKey: varchar("file_key", { length: 300 }).notNull(),
-    contentType: varchar("content_type", { length: 120 }).notNull(),
-    sizeBytes: int("size_bytes").notNull(),
+    state: mysqlEnum("state", PACKET_STATES).notNull().default("ready"),
+    /** What was asked: { lotIds, senderName, accountName } (lot ids resolved when asked). */
+    request: json("request"),
+    fileName: varchar("file_name", { length: 255 }).notNull().default(""),
+    /** Key in object storage; null until the file is made. */
+    fileKey: varchar("file_key", { length: 300 }),
+    contentType: varchar("content_type", { length: 120 }).notNull().default(""),
+    sizeBytes: int("size_bytes").notNull().default(0),
     lotCount: int("lot_count").notNull().default(0),
-    /** Addresses it was e-mailed to, if any. */
+    /** Addresses it was (or is to be) e-mailed to, if any. */
     sentTo: json("sent_to"),
+    /** When the message left; a retried job does not send it again. */
+    sentAt: datetime("sent_at", { mode: "date", fsp: 3 }),
+    /** Why it failed, in words for the user. */
+    error: text("error"),
     createdByUserId: ref("created_by_user_id").notNull().references(() => users.id),
     createdAt: createdAt(),
+    finishedAt: datetime("finished_at", { mode: "date", fsp: 3 }),
   },
   (t) => [index("packets_account_time").on(t.accountId, t.createdAt)],
 );

@@ -24,8 +24,23 @@ const envSchema = z.object({
   S3_ACCESS_KEY_ID: z.string().default("S3RVER"),
   S3_SECRET_ACCESS_KEY: z.string().default("S3RVER"),
   S3_FORCE_PATH_STYLE: z.enum(["true", "false"]).default("true"),
-  /** Largest upload accepted, bytes. */
+  /** Largest upload accepted by every importer, bytes (enforced while the upload streams in). */
   PLATLOAD_MAX_UPLOAD_BYTES: z.coerce.number().int().positive().default(20 * 1024 * 1024),
+  /** Largest JSON (or form) body any route reads, bytes. */
+  PLATLOAD_MAX_JSON_BYTES: z.coerce.number().int().positive().default(1024 * 1024),
+  /** The job queue's Redis (BullMQ): imports, permit packets and e-mail run as durable jobs. */
+  REDIS_URL: z.string().regex(/^rediss?:\/\/[^\s]+$/, "REDIS_URL must be a redis:// (or rediss://) URL"),
+  /** Key prefix of the job queue in Redis; two deployments may share one Redis under different prefixes. */
+  PLATLOAD_QUEUE_PREFIX: z.string().regex(/^[A-Za-z0-9_-]{1,40}$/, "PLATLOAD_QUEUE_PREFIX must be 1-40 letters, digits, - or _").default("platload"),
+  /** Jobs one worker process runs at once. */
+  PLATLOAD_WORKER_CONCURRENCY: z.coerce.number().int().min(1).max(16).default(2),
+  /**
+   * How long a worker's claim on a job lasts without renewal, ms: a worker that dies loses its
+   * jobs to another worker after about this long (plus one stalled-job check).
+   */
+  PLATLOAD_JOB_LOCK_MS: z.coerce.number().int().min(1000).default(30_000),
+  /** How often each worker looks for jobs whose worker died, ms. */
+  PLATLOAD_JOB_STALLED_CHECK_MS: z.coerce.number().int().min(500).default(30_000),
 });
 
 export type Env = z.infer<typeof envSchema>;

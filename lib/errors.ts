@@ -7,6 +7,7 @@ export const ERROR_STATUS = {
   conflict: 409,
   rate_limited: 429,
   payload_too_large: 413,
+  unavailable: 503,
 } as const;
 
 export type ErrorCode = keyof typeof ERROR_STATUS;
@@ -20,8 +21,12 @@ export interface FieldError {
 }
 
 export interface ErrorBody {
-  error: { code: ErrorCode; message: string; fieldErrors?: FieldError[] };
+  /** fieldErrors holds at most MAX_FIELD_ERRORS; fieldErrorCount says how many there were in all. */
+  error: { code: ErrorCode; message: string; fieldErrors?: FieldError[]; fieldErrorCount?: number };
 }
+
+/** An answer lists at most this many bad fields or cells (the first ones) and the total count. */
+export const MAX_FIELD_ERRORS = 200;
 
 export class AppError extends Error {
   readonly code: ErrorCode;
@@ -39,7 +44,8 @@ export class AppError extends Error {
   }
 
   toBody(): ErrorBody {
-    return { error: { code: this.code, message: this.message, ...(this.fieldErrors ? { fieldErrors: this.fieldErrors } : {}) } };
+    const fields = this.fieldErrors ? { fieldErrors: this.fieldErrors.slice(0, MAX_FIELD_ERRORS), fieldErrorCount: this.fieldErrors.length } : {};
+    return { error: { code: this.code, message: this.message, ...fields } };
   }
 }
 

@@ -1,18 +1,21 @@
 #!/usr/bin/env bash
 # Runs every Platload test — the README's second command. Installs what is missing, starts its
-# own MariaDB and mail fake on loopback, runs Vitest (unit, then integration against the real
-# database), builds, runs Playwright in Debian's Chromium, and stops everything it started.
+# own MariaDB, Redis, mail fake and S3 fake on loopback, runs Vitest (unit, then integration
+# against the real database, with a job worker the integration setup starts), builds, runs
+# Playwright in Debian's Chromium (its web server setup starts the app and a worker), and stops
+# everything it started.
 set -euo pipefail
 cd "$(dirname "${BASH_SOURCE[0]}")/.."
 source scripts/lib.sh
 export NEXT_TELEMETRY_DISABLED=1 VITE_CONFIG_NATIVE_IGNORE_WARNING=true
 
-ensure_apt mariadbd mariadb-server chromium chromium
+ensure_apt mariadbd mariadb-server redis-server redis-server chromium chromium
 ensure_node_modules
 
-stop_all() { bash scripts/s3.sh stop test >/dev/null || true; bash scripts/mail.sh stop test >/dev/null || true; bash scripts/db.sh stop test >/dev/null || true; }
+stop_all() { bash scripts/s3.sh stop test >/dev/null || true; bash scripts/mail.sh stop test >/dev/null || true; bash scripts/redis.sh stop test >/dev/null || true; bash scripts/db.sh stop test >/dev/null || true; }
 trap stop_all EXIT
 bash scripts/db.sh start test
+bash scripts/redis.sh start test
 bash scripts/mail.sh start test
 bash scripts/s3.sh start test
 

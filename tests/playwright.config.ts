@@ -1,5 +1,5 @@
 import { defineConfig } from "@playwright/test";
-import { E2E_DATABASE, TEST_APP_PORT, TEST_MAILBOX_DIR, TEST_NEXTAUTH_SECRET, TEST_S3_PORT, TEST_SMTP_PORT, testDatabaseUrl } from "./support/test-env";
+import { E2E_DATABASE, E2E_QUEUE_PREFIX, serviceEnv, TEST_APP_PORT } from "./support/test-env";
 
 const baseURL = `http://127.0.0.1:${TEST_APP_PORT}`;
 
@@ -22,22 +22,25 @@ export default defineConfig({
       args: ["--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--disable-background-networking", "--disable-component-update", "--disable-sync", "--no-first-run"],
     },
   },
-  webServer: {
-    // Platload's own server, as in production (it reads the client address for the sign-in limits).
-    command: `npx tsx scripts/serve.ts -H 127.0.0.1 -p ${TEST_APP_PORT}`,
-    url: `${baseURL}/sign-in`,
-    cwd: "..",
-    reuseExistingServer: false,
-    timeout: 120_000,
-    env: {
-      DATABASE_URL: testDatabaseUrl(E2E_DATABASE),
-      NEXTAUTH_URL: baseURL,
-      NEXTAUTH_SECRET: TEST_NEXTAUTH_SECRET,
-      SMTP_HOST: "127.0.0.1",
-      SMTP_PORT: String(TEST_SMTP_PORT),
-      PLATLOAD_MAILBOX_DIR: TEST_MAILBOX_DIR,
-      S3_ENDPOINT: `http://127.0.0.1:${TEST_S3_PORT}`,
-      NEXT_TELEMETRY_DISABLED: "1",
+  // The app and one job worker (imports, packets and e-mail run there), on the e2e database.
+  webServer: [
+    {
+      // Platload's own server, as in production (it reads the client address for the sign-in limits).
+      command: `npx tsx scripts/serve.ts -H 127.0.0.1 -p ${TEST_APP_PORT}`,
+      url: `${baseURL}/sign-in`,
+      cwd: "..",
+      reuseExistingServer: false,
+      timeout: 120_000,
+      env: { ...serviceEnv(E2E_DATABASE, E2E_QUEUE_PREFIX), NEXTAUTH_URL: baseURL, NEXT_TELEMETRY_DISABLED: "1" },
     },
-  },
+    {
+      command: "node_modules/.bin/tsx --conditions=react-server scripts/worker.ts",
+      wait: { stdout: /platload worker \d+ on queue/ },
+      cwd: "..",
+      reuseExistingServer: false,
+      timeout: 60_000,
+      stdout: "pipe",
+      env: serviceEnv(E2E_DATABASE, E2E_QUEUE_PREFIX),
+    },
+  ],
 });

@@ -1,6 +1,6 @@
 import { fileURLToPath } from "node:url";
 import { defineConfig } from "vitest/config";
-import { INTEGRATION_DATABASE, TEST_MAILBOX_DIR, TEST_NEXTAUTH_SECRET, TEST_S3_PORT, TEST_SMTP_PORT, testDatabaseUrl } from "./support/test-env";
+import { INTEGRATION_DATABASE, INTEGRATION_QUEUE_PREFIX, serviceEnv } from "./support/test-env";
 
 // This file lives in tests/; the project root is one folder up.
 const root = fileURLToPath(new URL("../", import.meta.url));
@@ -24,15 +24,8 @@ export default defineConfig({
           fileParallelism: false,
           testTimeout: 60_000,
           hookTimeout: 120_000,
-          env: {
-            DATABASE_URL: testDatabaseUrl(INTEGRATION_DATABASE),
-            NEXTAUTH_SECRET: TEST_NEXTAUTH_SECRET,
-            NEXTAUTH_URL: "http://127.0.0.1:3720",
-            SMTP_HOST: "127.0.0.1",
-            SMTP_PORT: String(TEST_SMTP_PORT),
-            PLATLOAD_MAILBOX_DIR: TEST_MAILBOX_DIR,
-            S3_ENDPOINT: `http://127.0.0.1:${TEST_S3_PORT}`,
-          },
+          // A small upload limit (2 MB), so the limit tests send little.
+          env: { ...serviceEnv(INTEGRATION_DATABASE, INTEGRATION_QUEUE_PREFIX), NEXTAUTH_URL: "http://127.0.0.1:3720", PLATLOAD_MAX_UPLOAD_BYTES: String(2 * 1024 * 1024) },
         },
       },
     ],

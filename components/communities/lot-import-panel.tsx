@@ -12,6 +12,7 @@ interface ImportState {
   createdCount: number;
   updatedCount: number;
   errors: { row: number; column: string; reason: string }[] | null;
+  errorCount: number;
 }
 
 const STAGES = [
@@ -23,7 +24,7 @@ const STAGES = [
 
 /**
  * Upload a lots file with a progress bar through upload, validate, compute and save. The import
- * runs on the server after the upload: leaving the page is fine, the result is on the Imports page.
+ * is a job a worker runs after the upload: leaving the page is fine, the result is on the Imports page.
  */
 export function LotImportPanel({ communityId, onDone }: { communityId: number; onDone: () => void }) {
   const [file, setFile] = useState<File | null>(null);
@@ -131,7 +132,7 @@ export function LotImportPanel({ communityId, onDone }: { communityId: number; o
           {error}
         </p>
       ) : null}
-      {status?.state === "failed" ? <ImportErrors message={`${status.errors?.length ?? 0} problem(s) in the file; nothing was imported.`} errors={status.errors ?? []} testId="lot-import-errors" /> : null}
+      {status?.state === "failed" ? <ImportErrors message={`${status.errorCount.toLocaleString("en-US")} problem(s) in the file; nothing was imported.`} errors={status.errors ?? []} total={status.errorCount} testId="lot-import-errors" /> : null}
     </section>
   );
 }

@@ -85,13 +85,13 @@ export function CatalogGrid({ canEdit }: { canEdit: boolean }) {
 
 function CatalogImport({ onDone }: { onDone: () => void }) {
   return (
-    <FileImportPanel<{ created: number; updated: number; lotsReselected: number }>
+    <FileImportPanel
       title="Import the catalog"
       description="CSV or XLSX in the template layout. Systems are created or updated by system code; if any cell is wrong, nothing is imported and every bad cell is listed."
       endpoint="/api/equipment/import"
       inputId="catalog-import-file"
       testId="catalog-import"
-      describeResult={(b) => `Imported: ${b.created} systems created, ${b.updated} updated; ${b.lotsReselected} lots reselected.`}
+      describeResult={(r) => `Imported: ${r.createdCount} systems created, ${r.updatedCount} updated; every lot's equipment was selected again.`}
       onImported={onDone}
     />
   );

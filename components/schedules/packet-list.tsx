@@ -11,6 +11,8 @@ interface PacketRow {
   sizeBytes: number;
   lotCount: number;
   sentTo: string[] | null;
+  state: "queued" | "rendering" | "sending" | "ready" | "failed";
+  error: string | null;
   createdAt: string;
   createdByName: string;
 }
@@ -39,14 +41,19 @@ export function PacketList({ communityId }: { communityId: number }) {
             { header: "What", cell: (p) => KIND_LABELS[p.kind] },
             { header: "Lots", numeric: true, cell: (p) => p.lotCount.toLocaleString("en-US") },
             { header: "Sent to", cell: (p) => (p.sentTo && p.sentTo.length > 0 ? p.sentTo.join(", ") : "—") },
-            { header: "Size", numeric: true, cell: (p) => `${(p.sizeBytes / 1e6).toFixed(2)} MB` },
+            { header: "Size", numeric: true, cell: (p) => (p.state === "ready" ? `${(p.sizeBytes / 1e6).toFixed(2)} MB` : "") },
             {
               header: "File",
-              cell: (p) => (
+              cell: (p) =>
+                p.state === "failed" ? (
+                  <span className="text-red-700">not made: {p.error}</span>
+                ) : p.state !== "ready" ? (
+                  <span className="text-zinc-500">{p.state === "queued" ? "waiting to be made…" : p.state === "sending" ? "sending…" : "being made…"}</span>
+                ) : (
                 <a className="text-accent-700 hover:underline" href={`/api/packets/${p.id}`} target="_blank" rel="noopener" data-testid={`packet-download-${p.id}`}>
                   {p.fileName}
                 </a>
-              ),
+                ),
             },
           ]}
         />

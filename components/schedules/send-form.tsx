@@ -1,10 +1,11 @@
 "use client";
 
 import { useMutation } from "@tanstack/react-query";
-import { useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { Button, FormError } from "@/components/ui/field";
 import { api, type ApiError } from "@/lib/client/api";
-import { PERMIT_STATUS_VALUES, WorkingBar } from "./working-bar";
+import { packetFinished, usePolled, type PacketProgress } from "@/lib/client/poll";
+import { PACKET_STATE_WORDS, PERMIT_STATUS_VALUES, WorkingBar } from "./working-bar";
 
 type Choice = "permit-packet-all" | "permit-packet-permit" | "equipment-schedule" | "permit-schedule";
 
@@ -27,10 +28,10 @@ export function splitAddresses(text: string): string[] {
 export function SendForm({ communityId, lotCount, permitLotCount, onSent }: { communityId: number; lotCount: number; permitLotCount: number; onSent: () => void }) {
   const [addresses, setAddresses] = useState("");
   const [choice, setChoice] = useState<Choice>("permit-packet-all");
-  const [sentTo, setSentTo] = useState<string[] | null>(null);
+  const [packetId, setPacketId] = useState<number | null>(null);
   const send = useMutation({
     mutationFn: (v: { to: string[]; choice: Choice }) =>
-      api<{ packetId: number; fileName: string; sentTo: string[] }>(`/api/communities/${communityId}/send`, {
+      api<{ packetId: number; sentTo: string[] }>(`/api/communities/${communityId}/send`, {
         method: "POST",
         body: {
           to: v.to,
@@ -39,10 +40,22 @@ export function SendForm({ communityId, lotCount, permitLotCount, onSent }: { co
         },
       }),
     onSuccess: (r) => {
-      setSentTo(r.sentTo);
+      setPacketId(r.packetId);
       onSent();
     },
   });
+  // A worker makes and sends the file: follow it until it is sent (or failed), then list it again.
+  const progress = usePolled<{ packet: PacketProgress }>(packetId ? `/api/packets/${packetId}/status` : null, packetFinished);
+  const packet = progress.data?.packet ?? null;
+  const reported = useRef<number | null>(null);
+  useEffect(() => {
+    if (packet && packetFinished({ packet }) && reported.current !== packet.id) {
+      reported.current = packet.id;
+      onSent();
+    }
+  }, [packet, onSent]);
+  const working = send.isPending || (packetId !== null && (!packet || !packetFinished({ packet })));
+  const sentTo = packet?.state === "ready" ? packet.sentTo : null;
 
   const error = send.isError ? (send.error as ApiError) : null;
   const addressErrors = error?.fieldErrors.filter((f) => f.field === "to" || f.field.startsWith("to.")) ?? [];
@@ -54,7 +67,7 @@ export function SendForm({ communityId, lotCount, permitLotCount, onSent }: { co
       <form
         onSubmit={(e) => {
           e.preventDefault();
-          setSentTo(null);
+          setPacketId(null);
           send.mutate({ to: typed, choice });
         }}
       >
@@ -95,14 +108,14 @@ export function SendForm({ communityId, lotCount, permitLotCount, onSent }: { co
             ))}
           </select>
         </div>
-        <FormError message={error && addressErrors.length === 0 ? error.message : null} testId="send-error" />
-        {send.isPending ? <WorkingBar label="Making the file and sending it…" testId="send-progress" /> : null}
-        {sentTo && !send.isPending ? (
+        <FormError message={error && addressErrors.length === 0 ? error.message : packet?.state === "failed" ? `Nothing was sent: ${packet.error ?? "unknown reason"}` : null} testId="send-error" />
+        {working ? <WorkingBar label={`${packet ? PACKET_STATE_WORDS[packet.state] : "Asking for"} the file…`} testId="send-progress" /> : null}
+        {sentTo && !working ? (
           <p className="mb-3 rounded border border-accent-100 bg-accent-50 px-3 py-2 text-xs text-accent-800" data-testid="send-result">
             Sent to {sentTo.join(", ")}. The file is kept in the list below.
           </p>
         ) : null}
-        <Button type="submit" disabled={send.isPending || typed.length === 0}>
+        <Button type="submit" disabled={working || typed.length === 0}>
           Send
         </Button>
       </form>

@@ -5,9 +5,12 @@ import { useEffect, useState } from "react";
 /** The statuses of lots handed in for permit (they carry a frozen snapshot). */
 export const PERMIT_STATUS_VALUES = ["permit_submitted", "permitted", "built"] as const;
 
+/** What a packet's state says to the person waiting for it. */
+export const PACKET_STATE_WORDS = { queued: "Waiting to make", rendering: "Making", sending: "Sending", ready: "Made", failed: "Could not make" } as const;
+
 /**
- * Progress while the server makes a file: the packet is made in one request, so the bar is
- * indeterminate (no percentage to report) and shows the time gone by.
+ * Progress while a worker makes a file: a packet reports its stage, not a percentage, so the
+ * bar is indeterminate and shows the time gone by.
  */
 export function WorkingBar({ label, testId }: { label: string; testId: string }) {
   const [seconds, setSeconds] = useState(0);

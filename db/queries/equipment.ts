@@ -1,16 +1,15 @@
 import "server-only";
 import { and, asc, eq } from "drizzle-orm";
 import type { Database } from "@/db";
-import { accounts, equipmentSystems, imports, lots } from "@/db/schema";
+import { accounts, equipmentSystems, lots } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
 import { sizingLimitsSchema } from "@/lib/equipment";
 import { AppError, notFound } from "@/lib/errors";
-import { EQUIPMENT_COLUMNS, equipmentEntryToRow, validateEquipmentTable } from "@/lib/workbook/equipment-columns";
-import { openTableImport } from "./import-file";
+import { checkCatalogImport } from "@/lib/imports/kinds";
+import { EQUIPMENT_COLUMNS, equipmentEntryToRow, validateEquipmentTable, type EquipmentCatalogEntry } from "@/lib/workbook/equipment-columns";
+import type { ImportSteps } from "./imports";
 import { catalogEntryFromRow, rowValuesFromEntry, sizingLimitsOf } from "../equipment";
 import { isFrozen, recomputeLots } from "../recompute";
-
-export const CATALOG_IMPORT_MAX_BYTES = 5 * 1024 * 1024;
 
 export async function listCatalog({ db, accountId }: { db: Database; accountId: number }) {
   const rows = await db.select().from(equipmentSystems).where(eq(equipmentSystems.accountId, accountId)).orderBy(asc(equipmentSystems.systemCode));
@@ -18,20 +17,22 @@ export async function listCatalog({ db, accountId }: { db: Database; accountId: 
 }
 
 /**
- * Imports a catalog file: validated as a whole (every bad cell reported, nothing written unless all
- * are good), systems created or updated by system code in one transaction, then every lot's
- * selection recomputed (frozen lots keep theirs). Systems not in the file are kept.
+ * The catalog importer: the file checked as a whole (every bad cell reported, nothing written
+ * unless all are good), then systems created or updated by system code in the save transaction
+ * (the catalog read under lock there), and every lot's selection recomputed (frozen lots keep
+ * theirs). Systems not in the file are kept.
  */
-export async function importCatalog({ db, accountId, userId, fileName, data }: { db: Database; accountId: number; userId: number; fileName: string; data: Uint8Array }) {
-  const { importId, table, fail } = await openTableImport({ db, accountId, userId, kind: "equipment", fileName, data, maxBytes: CATALOG_IMPORT_MAX_BYTES });
-  const result = validateEquipmentTable(table);
-  if (!result.ok) return fail(result.errors);
-  return db.transaction(async (tx) => {
+export const catalogImportSteps: ImportSteps<undefined, EquipmentCatalogEntry[], EquipmentCatalogEntry[]> = {
+  loadContext: async () => undefined,
+  check: (table) => checkCatalogImport(table),
+  compute: async (systems) => systems,
+  async save(tx, record, systems) {
+    const { accountId, userId } = record;
     const existing = await tx.select().from(equipmentSystems).where(eq(equipmentSystems.accountId, accountId)).for("update");
     const byCode = new Map(existing.map((e) => [e.systemCode.toLowerCase(), e]));
     let created = 0;
     let updated = 0;
-    for (const entry of result.systems) {
+    for (const entry of systems) {
       const values = rowValuesFromEntry(entry, accountId);
       const found = byCode.get(entry.id.toLowerCase());
       if (found) {
@@ -43,11 +44,10 @@ export async function importCatalog({ db, accountId, userId, fileName, data }: {
       }
     }
     const recomputed = await recomputeLots(tx, { accountId });
-    await recordAudit(tx, { accountId, userId, action: "equipment_import", entityType: "equipment", entityId: null, summary: `Imported the equipment catalog ${fileName}: ${created} systems created, ${updated} updated; ${recomputed.recomputed} lots reselected`, after: { importId, created, updated } });
-    await tx.update(imports).set({ state: "succeeded", createdCount: created, updatedCount: updated, errors: [], progressPct: 100, finishedAt: new Date() }).where(eq(imports.id, importId));
-    return { importId, created, updated, lotsReselected: recomputed.recomputed };
-  });
-}
+    await recordAudit(tx, { accountId, userId, action: "equipment_import", entityType: "equipment", entityId: null, summary: `Imported the equipment catalog ${record.fileName}: ${created} systems created, ${updated} updated; ${recomputed.recomputed} lots reselected`, after: { importId: record.id, created, updated } });
+    return { created, updated };
+  },
+};
 
 /** Edits one system's cells (as the catalog table reads them) with a version check, then reselects every lot. */
 export async function editCatalogSystem({ db, accountId, userId, systemId, version, cells }: { db: Database; accountId: number; userId: number; systemId: number; version: number; cells: Record<string, string | number | null> }) {

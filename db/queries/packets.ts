@@ -1,14 +1,15 @@
 import "server-only";
-import { and, asc, desc, eq, inArray } from "drizzle-orm";
+import { and, asc, desc, eq, inArray, lt } from "drizzle-orm";
 import type { Database } from "@/db";
 import { catalogEntryFromRow, sizingLimitsOf, type LotSelection } from "@/db/equipment";
-import { accounts, communities, equipmentSystems, lots, packets, planRevisions, plans, users, type LotStatus } from "@/db/schema";
+import { accounts, communities, equipmentSystems, lots, packets, planRevisions, plans, users, type LotStatus, type PacketState } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
 import { AppError, notFound } from "@/lib/errors";
 import { computeFacingLoads, LOAD_PROCEDURE_LABELS, LoadInputError, parseSiteConditions, type FacingLoads, type LoadProcedure, type PlanInput, type SiteConditions } from "@/lib/load";
+import { workJobId } from "@/lib/jobs/types";
 import { sendMail } from "@/lib/mail/send";
 import { lotReportFromResults, renderLotReportsPdf, type LotReport, type LotSystemChoice } from "@/lib/reports";
-import { getObject, objectKey, putObject } from "@/lib/storage/object-store";
+import { getObject, putObject } from "@/lib/storage/object-store";
 import { catalogForHeatingDesign } from "@/lib/workbook/equipment-columns";
 import { writeXlsx } from "@/lib/workbook/table-io";
 import { loadProcedureOf } from "../load-procedure";
@@ -67,7 +68,10 @@ export async function lotReportsFor({ db, accountId, lotIds }: { db: Database; a
     throw new AppError("conflict", `Lot${noPlan.length > 1 ? "s" : ""} ${noPlan.join(", ")} ha${noPlan.length > 1 ? "ve" : "s"} no plan model, so no load report can be made. Nothing was generated; choose a plan for ${noPlan.length > 1 ? "them" : "it"} or leave ${noPlan.length > 1 ? "them" : "it"} out.`);
   }
 
-  const reports = rows.map(({ lot, plan, revision, community }) => {
+  const reports: LotReport[] = [];
+  for (const [index, { lot, plan, revision, community }] of rows.entries()) {
+    // Computing many lots is long work for a job worker: let it renew its claim between lots.
+    if (index % 25 === 24) await new Promise((resolve) => setImmediate(resolve));
     const snapshot = lot.permitSnapshot as PermitSnapshot | null;
     let site: SiteConditions;
     let input: PlanInput;
@@ -90,7 +94,7 @@ export async function lotReportsFor({ db, accountId, lotIds }: { db: Database; a
       approval = { name: revision!.approverName, credential: revision!.approverCredential, date: revision!.approvedOn };
     }
     const { systemId, selection } = lotEquipment(lot);
-    return lotReportFromResults({
+    reports.push(lotReportFromResults({
       builderAccountName: account?.name ?? "Builder",
       communityName: community.name,
       lot: { lotNumber: lot.lotNumber, address: lot.address || null },
@@ -101,8 +105,8 @@ export async function lotReportsFor({ db, accountId, lotIds }: { db: Database; a
       sizingLimits: selection?.limitsUsed ?? accountLimits,
       approval: approval.name && approval.date ? { reviewerName: approval.name, credential: approval.credential ?? "", approvedOn: approval.date } : null,
       generatedAt,
-    });
-  });
+    }));
+  }
   return { reports, lots: rows.map((r) => r.lot) };
 }
 
@@ -204,47 +208,139 @@ async function generateFile({ db, accountId, communityId, kind, lotIds, statuses
   return { ...file, lotCount: file.result.schedule.totals.lotCount };
 }
 
-/**
- * Puts the file in object storage, runs `deliver` (the e-mail) if given, then records the packet
- * and its history entry in one transaction; when storing or sending fails nothing is recorded.
- */
-async function storePacket({ db, accountId, userId, communityId, kind, file, lotCount, sentTo, summary, deliver }: { db: Database; accountId: number; userId: number; communityId: number; kind: PacketKind; file: GeneratedFile; lotCount: number; sentTo: string[] | null; summary: string; deliver?: () => Promise<void> }) {
-  const fileKey = objectKey({ accountId, kind: `packets/${kind}`, fileName: file.fileName });
-  await putObject({ key: fileKey, body: file.body, contentType: file.contentType });
-  if (deliver) await deliver();
-  return db.transaction(async (tx) => {
-    const [{ id }] = await tx
-      .insert(packets)
-      .values({ accountId, communityId, kind, fileName: file.fileName, fileKey, contentType: file.contentType, sizeBytes: file.body.byteLength, lotCount, sentTo, createdByUserId: userId })
-      .$returningId();
-    await recordAudit(tx, {
-      accountId,
-      userId,
-      action: sentTo ? "packet_send" : "packet_generate",
-      entityType: "packet",
-      entityId: id,
-      summary,
-      after: { kind, fileName: file.fileName, sizeBytes: file.body.byteLength, lotCount, sentTo, communityId },
-    });
-    return id;
-  });
+/** What a packet row keeps of the request, for the worker that makes it. */
+interface PacketRequest {
+  lotIds?: number[];
+  senderName?: string;
+  accountName?: string;
 }
 
-export async function createPermitPacket({ db, accountId, userId, communityId, lotIds, statuses }: { db: Database; accountId: number; userId: number; communityId: number; lotIds?: number[]; statuses?: LotStatus[] }) {
-  const community = await communityOf(db, accountId, communityId);
-  const file = await permitPacketFile({ db, accountId, communityId, lotIds, statuses });
-  const packetId = await storePacket({
-    db,
-    accountId,
-    userId,
-    communityId,
-    kind: "permit-packet",
-    file,
-    lotCount: file.lotCount,
-    sentTo: null,
-    summary: `Permit packet of ${community.name}: ${file.lotCount} lot${file.lotCount === 1 ? "" : "s"} (${file.fileName})`,
+/** Lots of these ids that have neither a plan nor a permit snapshot: no report can be made for them. */
+async function lotsWithoutPlan(db: Database, accountId: number, lotIds: number[]): Promise<string[]> {
+  const rows = await db
+    .select({ lotNumber: lots.lotNumber, planId: lots.planId, snapshotAt: lots.permitSnapshotAt })
+    .from(lots)
+    .where(and(eq(lots.accountId, accountId), inArray(lots.id, lotIds)))
+    .orderBy(asc(lots.lotNumber));
+  return rows.filter((r) => r.planId === null && r.snapshotAt === null).map((r) => r.lotNumber);
+}
+
+/**
+ * Asks for a file: checks what is cheap to check now (the lots, and that each has a plan; the
+ * route checked the addresses) and records the packet as queued. A worker makes it (the `packet`
+ * job); the packet row shows how far it got. A refusal writes nothing.
+ */
+export async function requestPacket({ db, accountId, userId, communityId, kind, lotIds, statuses, to, senderName, accountName }: { db: Database; accountId: number; userId: number; communityId: number; kind: PacketKind; lotIds?: number[]; statuses?: LotStatus[]; to?: string[]; senderName?: string; accountName?: string }) {
+  await communityOf(db, accountId, communityId);
+  let ids: number[] | undefined;
+  if (kind === "permit-packet") {
+    ids = await packetLotIds({ db, accountId, communityId, lotIds, statuses });
+    const noPlan = await lotsWithoutPlan(db, accountId, ids);
+    if (noPlan.length > 0) {
+      throw new AppError("conflict", `Lot${noPlan.length > 1 ? "s" : ""} ${noPlan.join(", ")} ha${noPlan.length > 1 ? "ve" : "s"} no plan model, so no load report can be made. Nothing was generated; choose a plan for ${noPlan.length > 1 ? "them" : "it"} or leave ${noPlan.length > 1 ? "them" : "it"} out.`);
+    }
+  }
+  const request: PacketRequest = { lotIds: ids, senderName, accountName };
+  const createdAt = new Date();
+  const [{ id }] = await db
+    .insert(packets)
+    .values({ accountId, communityId, kind, state: "queued", request, sentTo: to ?? null, lotCount: ids?.length ?? 0, createdByUserId: userId, createdAt })
+    .$returningId();
+  return { packetId: id, lotCount: ids?.length ?? 0, jobId: workJobId("packet", { id, createdAt }) };
+}
+
+const FINISHED_PACKET: readonly PacketState[] = ["ready", "failed"];
+
+/** A packet that cannot be made (a lot lost its plan, the job used its last attempt), with the reason. */
+export async function failPacket(db: Database, packetId: number, reason: string): Promise<void> {
+  await db
+    .update(packets)
+    .set({ state: "failed", error: reason.slice(0, 2000), finishedAt: new Date() })
+    .where(and(eq(packets.id, packetId), inArray(packets.state, ["queued", "rendering", "sending"])));
+}
+
+/**
+ * The `packet` job: renders the file, keeps it in object storage under a key of its own (a
+ * retry writes the same object again, never a second one), e-mails it when asked, then marks
+ * the packet ready with its history entry in one transaction that first checks it is not
+ * finished already. sentAt is written as soon as the mail server takes the message, so a retry
+ * after that does not send again; only a worker dying between the server's acceptance and that
+ * write can send twice, and the message id is the same both times so a mail program can tell.
+ */
+export async function runPacketJob({ db, packetId }: { db: Database; packetId: number }): Promise<{ state: "ready" | "failed" | "already-finished" }> {
+  const [packet] = await db.select().from(packets).where(eq(packets.id, packetId));
+  if (!packet) throw notFound("That packet");
+  if (FINISHED_PACKET.includes(packet.state)) return { state: "already-finished" };
+  const request = (packet.request ?? {}) as PacketRequest;
+  const { accountId } = packet;
+  const communityId = packet.communityId!;
+  await db.update(packets).set({ state: "rendering" }).where(and(eq(packets.id, packetId), inArray(packets.state, ["queued", "rendering", "sending"])));
+  let file: GeneratedFile & { lotCount: number };
+  let community: typeof communities.$inferSelect;
+  try {
+    community = await communityOf(db, accountId, communityId);
+    file = await generateFile({ db, accountId, communityId, kind: packet.kind, lotIds: request.lotIds });
+  } catch (error) {
+    // A request that became impossible (a lot lost its plan, the community went) is not retried.
+    if (error instanceof AppError) {
+      await failPacket(db, packetId, error.message);
+      return { state: "failed" };
+    }
+    throw error;
+  }
+  const extension = file.fileName.slice(file.fileName.lastIndexOf("."));
+  const fileKey = `accounts/${accountId}/packets/${packetId}${extension}`;
+  await putObject({ key: fileKey, body: file.body, contentType: file.contentType });
+  const sentTo = (packet.sentTo as string[] | null) ?? null;
+  if (sentTo && !packet.sentAt) {
+    await db.update(packets).set({ state: "sending" }).where(eq(packets.id, packetId));
+    const message = packetMessage({ accountName: request.accountName ?? "Your builder", senderName: request.senderName ?? "Someone", communityName: community.name, kind: packet.kind, fileName: file.fileName, lotCount: file.lotCount });
+    await sendMail({ accountId, to: sentTo, subject: message.subject, text: message.text, messageId: `<packet-${packetId}.${accountId}@platload.local>`, attachments: [{ filename: file.fileName, content: Buffer.from(file.body), contentType: file.contentType }] });
+    await db.update(packets).set({ sentAt: new Date() }).where(eq(packets.id, packetId));
+  }
+  const summary = sentTo
+    ? `Sent ${PACKET_KIND_LABELS[packet.kind].toLowerCase()} of ${community.name} (${file.lotCount} lots) to ${sentTo.join(", ")}`
+    : `Permit packet of ${community.name}: ${file.lotCount} lot${file.lotCount === 1 ? "" : "s"} (${file.fileName})`;
+  const finished = await db.transaction(async (tx) => {
+    const [row] = await tx.select({ state: packets.state }).from(packets).where(eq(packets.id, packetId)).for("update");
+    if (!row || FINISHED_PACKET.includes(row.state)) return false;
+    await tx
+      .update(packets)
+      .set({ state: "ready", fileName: file.fileName, fileKey, contentType: file.contentType, sizeBytes: file.body.byteLength, lotCount: file.lotCount, error: null, finishedAt: new Date() })
+      .where(eq(packets.id, packetId));
+    await recordAudit(tx, {
+      accountId,
+      userId: packet.createdByUserId,
+      action: sentTo ? "packet_send" : "packet_generate",
+      entityType: "packet",
+      entityId: packetId,
+      summary,
+      after: { kind: packet.kind, fileName: file.fileName, sizeBytes: file.body.byteLength, lotCount: file.lotCount, sentTo, communityId },
+    });
+    return true;
   });
-  return { packetId, fileName: file.fileName, lotCount: file.lotCount, sizeBytes: file.body.byteLength };
+  return { state: finished ? "ready" : "already-finished" };
+}
+
+/** How far a packet has got, for the page that asked for it. */
+export async function getPacketStatus({ db, accountId, packetId }: { db: Database; accountId: number; packetId: number }) {
+  const [packet] = await db.select().from(packets).where(and(eq(packets.id, packetId), eq(packets.accountId, accountId)));
+  if (!packet) throw notFound("That packet");
+  return {
+    id: packet.id,
+    kind: packet.kind,
+    state: packet.state,
+    fileName: packet.fileName,
+    lotCount: packet.lotCount,
+    sizeBytes: packet.sizeBytes,
+    sentTo: (packet.sentTo as string[] | null) ?? null,
+    error: packet.error,
+  };
+}
+
+/** Packets not finished that were asked for before `before` (their job may have been lost). */
+export async function unfinishedPackets(db: Database, before: Date) {
+  return db.select({ id: packets.id, createdAt: packets.createdAt }).from(packets).where(and(inArray(packets.state, ["queued", "rendering", "sending"]), lt(packets.createdAt, before)));
 }
 
 /** The stored files of a community, newest first, with who made them and when. */
@@ -259,6 +355,8 @@ export async function listPackets({ db, accountId, communityId }: { db: Database
       sizeBytes: packets.sizeBytes,
       lotCount: packets.lotCount,
       sentTo: packets.sentTo,
+      state: packets.state,
+      error: packets.error,
       createdAt: packets.createdAt,
       createdByName: users.name,
     })
@@ -273,6 +371,9 @@ export async function listPackets({ db, accountId, communityId }: { db: Database
 export async function getPacketFile({ db, accountId, packetId }: { db: Database; accountId: number; packetId: number }) {
   const [packet] = await db.select().from(packets).where(and(eq(packets.id, packetId), eq(packets.accountId, accountId)));
   if (!packet) throw notFound("That packet");
+  if (packet.state !== "ready" || !packet.fileKey) {
+    throw new AppError("conflict", packet.state === "failed" ? `This file could not be made: ${packet.error ?? "see the list of kept files"}.` : "This file is still being made; it opens here when it is ready.");
+  }
   return { packet, body: await getObject(packet.fileKey) };
 }
 
@@ -297,27 +398,3 @@ export function packetMessage({ accountName, senderName, communityName, kind, fi
     ].join("\n"),
   };
 }
-
-/**
- * Generates the file, puts it in object storage, e-mails it as an attachment, then records the
- * packet with the addresses and a history entry. A failed send records nothing.
- */
-export async function sendCommunityFile({ db, accountId, userId, senderName, accountName, communityId, to, what, lotIds, statuses }: { db: Database; accountId: number; userId: number; senderName: string; accountName: string; communityId: number; to: string[]; what: PacketKind; lotIds?: number[]; statuses?: LotStatus[] }) {
-  const community = await communityOf(db, accountId, communityId);
-  const file = await generateFile({ db, accountId, communityId, kind: what, lotIds, statuses });
-  const message = packetMessage({ accountName, senderName, communityName: community.name, kind: what, fileName: file.fileName, lotCount: file.lotCount });
-  const packetId = await storePacket({
-    db,
-    accountId,
-    userId,
-    communityId,
-    kind: what,
-    file,
-    lotCount: file.lotCount,
-    sentTo: to,
-    summary: `Sent ${PACKET_KIND_LABELS[what].toLowerCase()} of ${community.name} (${file.lotCount} lots) to ${to.join(", ")}`,
-    deliver: () => sendMail({ accountId, to, subject: message.subject, text: message.text, attachments: [{ filename: file.fileName, content: Buffer.from(file.body), contentType: file.contentType }] }),
-  });
-  return { packetId, fileName: file.fileName, lotCount: file.lotCount, sentTo: to };
-}
-

@@ -1,36 +1,33 @@
 import "server-only";
 import { eq } from "drizzle-orm";
-import type { Database } from "@/db";
-import { imports, planRevisions, plans } from "@/db/schema";
+import { planRevisions, plans } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
-import { readTable } from "@/lib/workbook/columns";
-import { PLAN_COLUMNS, validatePlanTable } from "@/lib/workbook/plan-columns";
+import { checkPlanImport } from "@/lib/imports/kinds";
+import { PLAN_COLUMNS, type ValidPlanRow } from "@/lib/workbook/plan-columns";
+import type { ImportSteps } from "./imports";
 import { recomputeLots } from "./lots";
-import { openTableImport } from "./import-file";
 import { revisionCells, writePlanRevision, type PlanCells } from "./plans";
 
-export const PLAN_IMPORT_MAX_BYTES = 5 * 1024 * 1024;
-
 /**
- * Imports a plan library file (CSV or XLSX in the template layout): validated as a whole, every bad
- * cell reported, nothing written unless every row is good; then plans are created or updated by plan
- * code in one transaction. The import is recorded either way, with its errors.
+ * The plan library importer (CSV or XLSX in the template layout): every row checked, then plans
+ * created or updated by plan code in the save transaction, reading the current plans under lock
+ * there (so an edit made while the file was checked is seen, never overwritten unseen). A row
+ * equal to the plan as it is changes nothing.
  */
-export async function importPlanLibrary({ db, accountId, userId, fileName, data }: { db: Database; accountId: number; userId: number; fileName: string; data: Uint8Array }) {
-  const { importId, table, fail } = await openTableImport({ db, accountId, userId, kind: "plans", fileName, data, maxBytes: PLAN_IMPORT_MAX_BYTES });
-  const result = validatePlanTable(table);
-  if (!result.ok) return fail(result.errors);
-  const entered = new Map(readTable(table, PLAN_COLUMNS).rows.map((r) => [r.rowNumber, r.entered]));
-
-  const counts = await db.transaction(async (tx) => {
+export const planImportSteps: ImportSteps<undefined, ValidPlanRow[], ValidPlanRow[]> = {
+  loadContext: async () => undefined,
+  check: (table) => checkPlanImport(table),
+  compute: async (checked) => checked,
+  async save(tx, record, rows) {
+    const { accountId, userId } = record;
     const existing = await tx.select({ plan: plans, revision: planRevisions }).from(plans).innerJoin(planRevisions, eq(planRevisions.id, plans.currentRevisionId)).where(eq(plans.accountId, accountId)).for("update");
     const byCode = new Map(existing.map((e) => [e.plan.planCode.toLowerCase(), e]));
     let created = 0;
     let updated = 0;
     const after: { planId: number; planCode: string; cells: PlanCells }[] = [];
-    for (const row of result.plans) {
+    for (const row of rows) {
       const cells: PlanCells = {};
-      for (const column of PLAN_COLUMNS) cells[column.key] = entered.get(row.rowNumber)?.[column.key] ?? "";
+      for (const column of PLAN_COLUMNS) cells[column.key] = row.entered[column.key] ?? "";
       const found = byCode.get(row.planCode.toLowerCase());
       if (found) {
         const old = revisionCells(found.revision, found.plan.planCode, found.plan.name);
@@ -48,9 +45,7 @@ export async function importPlanLibrary({ db, accountId, userId, fileName, data 
       }
     }
     await recomputeLots(tx, { accountId, planIds: after.map((a) => a.planId) });
-    await recordAudit(tx, { accountId, userId, action: "plan_import", entityType: "plan", entityId: null, summary: `Imported ${fileName}: ${created} created, ${updated} updated`, after });
-    await tx.update(imports).set({ state: "succeeded", createdCount: created, updatedCount: updated, errors: [], progressPct: 100, finishedAt: new Date() }).where(eq(imports.id, importId));
+    await recordAudit(tx, { accountId, userId, action: "plan_import", entityType: "plan", entityId: null, summary: `Imported ${record.fileName}: ${created} created, ${updated} updated`, after });
     return { created, updated };
-  });
-  return { importId, ...counts };
-}
+  },
+};

@@ -41,6 +41,7 @@ export async function listImports({ db, accountId }: { db: Database; accountId: 
       createdCount: imports.createdCount,
       updatedCount: imports.updatedCount,
       errors: imports.errors,
+      errorCount: imports.errorCount,
       createdAt: imports.createdAt,
       finishedAt: imports.finishedAt,
       userName: users.name,

@@ -117,6 +117,8 @@ export async function acceptInvitation({ db, token, password, name }: { db: Data
   if (password.length < PASSWORD_MIN_LENGTH) {
     throw new AppError("invalid_input", `The password must have at least ${PASSWORD_MIN_LENGTH} characters.`, [{ field: "password", message: `At least ${PASSWORD_MIN_LENGTH} characters` }]);
   }
+  // The token is looked up before any password work: a made-up link costs one indexed read, not a hash.
+  if (!(await findOpenInvitation({ db, token }))) throw new AppError("not_found", "This invitation link is not valid any more. Ask your admin for a new one.");
   const passwordHash = await hashPassword(password);
   return db.transaction(async (tx) => {
     const [inv] = await tx.select().from(invitations).where(eq(invitations.tokenHash, hashToken(token))).for("update");

@@ -1,9 +1,11 @@
 import "server-only";
 import { getToken } from "next-auth/jwt";
-import { NextResponse, type NextRequest } from "next/server";
+import { NextRequest, NextResponse } from "next/server";
 import { z } from "zod";
 import { getDb, type Database } from "@/db";
+import { env } from "@/lib/env";
 import { AppError, type FieldError } from "@/lib/errors";
+import { jsonBodyLimit, readBodyLimited } from "@/lib/http/body";
 import { parseId } from "@/lib/http/ids";
 import { authorizeMember, type Member } from "./member";
 import type { Permission } from "./permissions";
@@ -95,11 +97,27 @@ function noStore(response: Response): Response {
   }
 }
 
-/** The edge every route shares: the Origin check, the one error shape, JSON answers, no caching. */
+/**
+ * A body declared larger than any route reads is refused before the handler runs (413): an
+ * upload may be as large as the upload limit, anything else as large as the JSON limit. Bodies
+ * without a declared length are limited while they are read (readBodyLimited).
+ */
+function checkDeclaredLength(request: NextRequest): void {
+  const declared = request.headers.get("content-length");
+  if (declared === null) return;
+  const upload = (request.headers.get("content-type") ?? "").toLowerCase().startsWith("multipart/form-data");
+  const limit = upload ? env().PLATLOAD_MAX_UPLOAD_BYTES + 64 * 1024 : jsonBodyLimit();
+  if (Number(declared) > limit) {
+    throw new AppError("payload_too_large", `The request body is larger than ${Number((limit / 1048576).toFixed(1))} MB, the limit. Nothing was saved.`);
+  }
+}
+
+/** The edge every route shares: the Origin check, the body limit, the one error shape, JSON answers, no caching. */
 function guarded<P>(guard: RouteGuard, run: (request: NextRequest, params: P) => Promise<unknown>): NextHandler<P> {
   const handler: NextHandler<P> = async (request, context) => {
     try {
       checkOrigin(request);
+      checkDeclaredLength(request);
       const result = await run(request, await context.params);
       return noStore(result instanceof Response ? result : NextResponse.json(result));
     } catch (error) {
@@ -140,11 +158,20 @@ export function publicRoute<P = Record<string, never>>(handler: (ctx: { request:
   return guarded<P>({ kind: "public" }, (request, params) => handler({ request, params, db: getDb() }));
 }
 
-/** next-auth's own handler behind the same edge (Origin check, no caching); its CSRF token guards sign-in. */
+/**
+ * next-auth's own handler behind the same edge (Origin check, body limit, no caching); its CSRF
+ * token guards sign-in. A posted form is read here, at most PLATLOAD_MAX_JSON_BYTES counted as it
+ * streams, before next-auth sees it.
+ */
 export function nextAuthRoute(handler: (request: NextRequest, context: { params: Promise<{ nextauth: string[] }> }) => Promise<Response>) {
   const wrapped: NextHandler<{ nextauth: string[] }> = async (request, context) => {
     try {
       checkOrigin(request);
+      checkDeclaredLength(request);
+      if (request.method === "POST") {
+        const body = await readBodyLimited(request, jsonBodyLimit(), "The sign-in request");
+        request = new NextRequest(request.url, { method: "POST", headers: request.headers, body: body as BodyInit });
+      }
       return noStore(await handler(request, context));
     } catch (error) {
       return noStore(errorResponse(error));
@@ -157,11 +184,12 @@ export function zodFieldErrors(error: z.ZodError): FieldError[] {
   return error.issues.map((issue) => ({ field: issue.path.join(".") || "(body)", message: issue.message }));
 }
 
-/** Parses a JSON body with a zod schema; a bad body is a 400 naming every bad field. */
+/** Parses a JSON body (at most PLATLOAD_MAX_JSON_BYTES) with a zod schema; a bad body is a 400 naming every bad field. */
 export async function parseJsonBody<T extends z.ZodType>(request: Request, schema: T): Promise<z.infer<T>> {
+  const bytes = await readBodyLimited(request, jsonBodyLimit(), "The request body");
   let raw: unknown;
   try {
-    raw = await request.json();
+    raw = JSON.parse(new TextDecoder("utf-8", { fatal: true }).decode(bytes));
   } catch {
     throw new AppError("invalid_input", "The request body is not valid JSON.");
   }

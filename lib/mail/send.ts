@@ -9,6 +9,8 @@ export interface OutgoingMail {
   subject: string;
   text: string;
   attachments?: { filename: string; content: Buffer; contentType?: string }[];
+  /** A stable Message-ID for a message a retried job may send again. */
+  messageId?: string;
 }
 
 const globalForMail = globalThis as unknown as { platloadMail?: Transporter };

@@ -593,7 +593,11 @@ export async function renderLotReportsPdf(reports: readonly LotReport[], options
   });
   const cursor: Cursor = { doc, y: PAGE.top, pageLabels: [], label: "", continuation: null };
   if (options.cover ?? valid.length > 1) drawCover(cursor, valid, title, generatedAt);
-  for (const report of valid) drawLot(cursor, report);
+  for (const [index, report] of valid.entries()) {
+    drawLot(cursor, report);
+    // A long packet is made by a job worker: let it renew its claim on the job between lots.
+    if (index % 10 === 9) await new Promise((resolve) => setImmediate(resolve));
+  }
   drawFooters(doc, cursor.pageLabels, [...new Set(valid.map((r) => r.engineVersion))].join(", "), generatedAt);
   doc.end();
   return done;

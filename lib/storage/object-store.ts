@@ -1,5 +1,5 @@
 import "server-only";
-import { GetObjectCommand, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
+import { DeleteObjectCommand, GetObjectCommand, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
 import { env } from "@/lib/env";
 
 // Uploaded files and generated packets live in object storage (S3 API). Here a local fake on
@@ -27,6 +27,11 @@ export async function getObject(key: string): Promise<Uint8Array> {
   const result = await client().send(new GetObjectCommand({ Bucket: env().S3_BUCKET, Key: key }));
   if (!result.Body) throw new Error(`object ${key} has no body`);
   return result.Body.transformToByteArray();
+}
+
+/** Removes an object; removing one that is already gone is not an error (S3 answers 204 either way). */
+export async function deleteObject(key: string): Promise<void> {
+  await client().send(new DeleteObjectCommand({ Bucket: env().S3_BUCKET, Key: key }));
 }
 
 /** A key that says what the file is and cannot collide: account/kind/date/random-name. */

@@ -59,6 +59,9 @@ export interface TableCellError {
 export interface RawTable {
   headers: string[];
   rows: { rowNumber: number; cells: string[] }[];
+  /** For a workbook: the sheet read, and the header rows of its other sheets (to say where data is). */
+  sheetName?: string;
+  otherSheets?: { name: string; headers: string[] }[];
 }
 
 export interface ReadRow {

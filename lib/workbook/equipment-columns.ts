@@ -359,7 +359,9 @@ export function validateEquipmentTable(table: RawTable): EquipmentTableResult {
       firstRowOfCode.set(code.toLowerCase(), row.rowNumber);
     }
     if (badRows.has(row.rowNumber)) continue; // cell errors first; row checks once the cells read
-    const type = row.values.system_type as SystemType;
+    const type = row.values.system_type as SystemType | undefined;
+    // Without a system type (its column is missing, reported on row 1) the row cannot be cross-checked.
+    if (type === undefined) continue;
     const problems = crossCheckRow(row.values, type);
     if (problems.length > 0) {
       for (const problem of problems) errors.push({ row: row.rowNumber, column: headerOf(problem.key), reason: problem.reason });

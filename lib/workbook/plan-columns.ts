@@ -549,6 +549,8 @@ export interface ValidPlanRow {
   planCode: string;
   planName: string;
   input: PlanInput;
+  /** The cells as entered (formulas kept), by column key. */
+  entered: Record<string, string>;
 }
 
 export type PlanTableResult = { ok: true; plans: ValidPlanRow[] } | { ok: false; errors: TableCellError[] };
@@ -576,7 +578,7 @@ export function validatePlanTable(table: RawTable): PlanTableResult {
     }
     if (badRows.has(row.rowNumber)) continue; // cell errors first; engine checks once the cells read
     const result = finishRow(row.values, []);
-    if (result.ok) plans.push({ rowNumber: row.rowNumber, planCode: result.planCode, planName: result.planName, input: result.input });
+    if (result.ok) plans.push({ rowNumber: row.rowNumber, planCode: result.planCode, planName: result.planName, input: result.input, entered: row.entered });
     else for (const error of result.errors) errors.push({ row: row.rowNumber, column: error.header, reason: error.reason });
   }
   if (read.rows.length === 0 && errors.length === 0) errors.push({ row: 2, column: headerOf("plan_code"), reason: "the table has no plan rows" });

@@ -43,9 +43,37 @@ export function unescapeCsvText(text: string): string {
 
 export type OutputCell = string | number | null | undefined;
 
+/**
+ * Counts the separators of the first line outside quotes: a file saved with semicolons or tabs
+ * (a spreadsheet program set to a decimal-comma locale does that) reads as one wide column of
+ * whole header chunks otherwise.
+ */
+function firstLineSeparators(text: string): { comma: number; semicolon: number; tab: number } {
+  const counts = { comma: 0, semicolon: 0, tab: 0 };
+  let quoted = false;
+  for (const ch of text) {
+    if (ch === '"') quoted = !quoted;
+    else if (!quoted && (ch === "\n" || ch === "\r")) break;
+    else if (!quoted && ch === ",") counts.comma += 1;
+    else if (!quoted && ch === ";") counts.semicolon += 1;
+    else if (!quoted && ch === "\t") counts.tab += 1;
+  }
+  return counts;
+}
+
 /** Reads CSV text: the first record is the header; records keep their 1-based numbers. */
 export function readCsv(text: string): RawTable {
   const withoutBom = text.replace(/^\uFEFF/, "");
+  if (withoutBom.includes("\u0000")) throw new TableFileError("the file is not text (it holds NUL bytes): is it a workbook or another binary file saved as .csv?");
+  // Semicolon- or tab-separated files are refused rather than guessed: such files often write
+  // decimals with commas ("12,5"), which would silently read as other numbers.
+  const separators = firstLineSeparators(withoutBom);
+  if (separators.semicolon > separators.comma || separators.tab > separators.comma) {
+    const kind = separators.semicolon >= separators.tab ? "semicolon" : "tab";
+    throw new TableFileError(
+      `this file looks ${kind}-separated (its header row has ${kind === "semicolon" ? separators.semicolon : separators.tab} ${kind}s and ${separators.comma} commas); save it as comma-separated CSV, with a point as the decimal mark, or as .xlsx`,
+    );
+  }
   const parsed = Papa.parse<string[]>(withoutBom, { header: false, skipEmptyLines: false, delimiter: "," });
   const fatal = parsed.errors.find((error) => error.type === "Quotes");
   if (fatal) {
@@ -92,24 +120,48 @@ function xlsxCellText(cell: ExcelJS.Cell): string {
   return String(cell.text ?? "");
 }
 
-/** Reads the first worksheet (or the one named `sheetName`): row 1 is the header. */
+function headerCells(sheet: ExcelJS.Worksheet): string[] {
+  const headerRow = sheet.getRow(1);
+  const headers: string[] = [];
+  for (let column = 1; column <= sheet.columnCount; column += 1) headers.push(xlsxCellText(headerRow.getCell(column)).trim());
+  while (headers.length > 0 && headers[headers.length - 1] === "") headers.pop();
+  return headers;
+}
+
+/** An XLSX file is a zip archive: it starts with the zip signature "PK\x03\x04". */
+const isZip = (bytes: Uint8Array) => bytes.byteLength >= 4 && bytes[0] === 0x50 && bytes[1] === 0x4b && bytes[2] === 0x03 && bytes[3] === 0x04;
+
+const NOT_XLSX = "not a readable XLSX workbook";
+
+/**
+ * Reads the first worksheet (or the one named `sheetName`): row 1 is the header. The other
+ * sheets' header rows come along, so an import can say when the data is on another sheet.
+ * Anything that is not a workbook is "not a readable XLSX workbook", never the zip reader's words.
+ */
 export async function readXlsx(data: ArrayBuffer | Uint8Array, sheetName?: string): Promise<RawTable> {
   const workbook = new ExcelJS.Workbook();
+  const bytes = data instanceof Uint8Array ? data : new Uint8Array(data);
+  if (!isZip(bytes)) {
+    const looksLikeText = bytes.byteLength > 0 && !bytes.subarray(0, 512).includes(0) && /[,;\t]/.test(new TextDecoder().decode(bytes.subarray(0, 512)));
+    throw new TableFileError(`the file is ${NOT_XLSX}${looksLikeText ? " (it looks like CSV text: save it with the .csv extension)" : " (an .xlsx file is a zip archive and this one is not)"}`);
+  }
   try {
     // exceljs' typings want a Node Buffer; a Uint8Array view over the same bytes works.
-    const bytes = data instanceof Uint8Array ? data : new Uint8Array(data);
     await workbook.xlsx.load(Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength) as unknown as ExcelJS.Buffer);
-  } catch (error) {
-    throw new TableFileError(`the file cannot be read as XLSX (${error instanceof Error ? error.message : String(error)})`);
+  } catch {
+    throw new TableFileError(`the file is ${NOT_XLSX} (it is damaged, password-protected or another kind of zip archive); save it again from the spreadsheet program as .xlsx or .csv`);
   }
   const sheet = sheetName ? workbook.getWorksheet(sheetName) : workbook.worksheets[0];
   if (!sheet) throw new TableFileError(sheetName ? `the workbook has no sheet named "${sheetName}"` : "the workbook has no sheets");
+  const otherSheets = workbook.worksheets.filter((other) => other !== sheet).map((other) => ({ name: other.name, headers: headerCells(other) }));
+  const headers = headerCells(sheet);
+  if (headers.length === 0) {
+    const withData = otherSheets.filter((other) => other.headers.length > 0).map((other) => `"${other.name}"`);
+    throw new TableFileError(
+      `the first row of the sheet "${sheet.name}" is empty: a header row is needed${withData.length > 0 ? `; the data looks to be on the sheet ${withData.join(" or ")} — move that sheet first, or save it alone` : ""}`,
+    );
+  }
   const columnCount = sheet.columnCount;
-  const headerRow = sheet.getRow(1);
-  const headers: string[] = [];
-  for (let column = 1; column <= columnCount; column += 1) headers.push(xlsxCellText(headerRow.getCell(column)).trim());
-  while (headers.length > 0 && headers[headers.length - 1] === "") headers.pop();
-  if (headers.length === 0) throw new TableFileError("the first row of the sheet is empty: a header row is needed");
   const rows: RawTable["rows"] = [];
   for (let rowNumber = 2; rowNumber <= sheet.rowCount; rowNumber += 1) {
     const row = sheet.getRow(rowNumber);
@@ -117,7 +169,7 @@ export async function readXlsx(data: ArrayBuffer | Uint8Array, sheetName?: strin
     for (let column = 1; column <= Math.max(columnCount, headers.length); column += 1) cells.push(xlsxCellText(row.getCell(column)));
     rows.push({ rowNumber, cells });
   }
-  return { headers, rows };
+  return { headers, rows, sheetName: sheet.name, otherSheets };
 }
 
 /** Reads a CSV or XLSX file's bytes, choosing by the file name's extension. */

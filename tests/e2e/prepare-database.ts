@@ -1,10 +1,13 @@
-// Before the end-to-end run: a fresh, migrated and seeded database for the app under test.
+// Before the end-to-end run: a fresh, migrated and seeded database for the app under test, and
+// an empty job queue for it (a recreated database restarts its ids).
 import { seedDatabase } from "@/db/seed";
 import { connect, freshDatabase } from "../support/database";
-import { E2E_DATABASE } from "../support/test-env";
+import { emptyQueue } from "../support/queue";
+import { E2E_DATABASE, E2E_QUEUE_PREFIX } from "../support/test-env";
 
 async function main() {
   await freshDatabase(E2E_DATABASE);
+  await emptyQueue(E2E_QUEUE_PREFIX);
   const { db, close } = connect(E2E_DATABASE);
   try {
     await seedDatabase(db);

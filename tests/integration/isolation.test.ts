@@ -119,6 +119,7 @@ const SAMPLES: Record<string, Samples> = {
   "POST /api/lots/[lotId]/status": (t) => [{ kind: "foreign", params: { lotId: String(t.lotId) }, body: { version: 1, status: "permit_submitted" } }],
   // (the packet rows made here have no stored file, so the caller's own one is not fetched)
   "GET /api/packets/[packetId]": (t) => [{ kind: "foreign", params: { packetId: String(t.packetId) }, control: false }],
+  "GET /api/packets/[packetId]/status": (t) => [{ kind: "foreign", params: { packetId: String(t.packetId) } }],
   "GET /api/plans": (t) => [{ kind: "own-read" }, { kind: "foreign", query: `?communityId=${t.communityId}` }],
   "PATCH /api/plans": (t) => [{ kind: "foreign", body: { changes: [{ planId: t.planId, version: 1, cells: { bedrooms: "2" } }] } }],
   "POST /api/plans": (t) => [{ kind: "foreign", body: { fromPlanId: t.planId, planCode: "ZZ-ISO", name: "Copy" } }],

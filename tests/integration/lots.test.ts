@@ -5,17 +5,16 @@ import * as lotsRoute from "@/app/api/communities/[communityId]/lots/route";
 import * as importRoute from "@/app/api/communities/[communityId]/lots/import/route";
 import * as scheduleRoute from "@/app/api/communities/[communityId]/permit-schedule/route";
 import * as communitiesRoute from "@/app/api/communities/route";
-import * as importItemRoute from "@/app/api/imports/[importId]/route";
 import * as statusRoute from "@/app/api/lots/[lotId]/status/route";
 import * as plansRoute from "@/app/api/plans/route";
 import { getDb } from "@/db";
-import { processLotImport, receiveLotImport } from "@/db/queries/lot-import";
 import { DEMO_SITE } from "@/db/demo-scenario";
 import { imports, lots, plans } from "@/db/schema";
 import { getObject } from "@/lib/storage/object-store";
 import { writeXlsx } from "@/lib/workbook/table-io";
 import { LOT_HEADERS } from "@/lib/workbook/lot-columns";
 import { seededIds } from "../support/demo-ids";
+import { waitForImport } from "../support/jobs";
 import { callRoute, sessionCookie } from "../support/requests";
 
 const COMPASS = ["N", "NE", "E", "SE", "S", "SW", "W", "NW"];
@@ -23,15 +22,6 @@ function lotsCsv(rows: string[][]) {
   return [LOT_HEADERS.join(","), ...rows.map((r) => r.map((c) => (/[",]/.test(c) ? `"${c.replace(/"/g, '""')}"` : c)).join(","))].join("\n");
 }
 const lotRow = (n: number, planCode: string, facing = COMPASS[n % 8]) => [`B-${String(n).padStart(4, "0")}`, `${n} Larch Loop`, planCode, facing, "", "planned", ""];
-
-async function waitForImport(cookie: string, importId: number) {
-  for (let i = 0; i < 300; i++) {
-    const res = await callRoute(importItemRoute.GET, { path: "/x", params: { importId: String(importId) }, cookie });
-    if (["succeeded", "failed"].includes(res.json.import.state)) return res.json.import;
-    await new Promise((r) => setTimeout(r, 100));
-  }
-  throw new Error("import did not finish");
-}
 
 describe("communities and lots", () => {
   let ids: Awaited<ReturnType<typeof seededIds>>;
@@ -47,6 +37,12 @@ describe("communities and lots", () => {
     communityId = created.json.id;
     planCodes = (await getDb().select({ code: plans.planCode }).from(plans).where(eq(plans.accountId, ids.demoAccountId))).map((p) => p.code);
   });
+
+  const postLots = async (fileName: string, data: Uint8Array | string) => {
+    const form = new FormData();
+    form.append("file", new File([data as BlobPart], fileName));
+    return callRoute(importRoute.POST, { path: "/x", method: "POST", cookie: designer, params: { communityId: String(communityId) }, form });
+  };
 
   const lotCount = async () => (await getDb().select({ n: count() }).from(lots).where(eq(lots.communityId, communityId)))[0].n;
 
@@ -78,11 +74,13 @@ describe("communities and lots", () => {
     const rows = Array.from({ length: 2000 }, (_, i) => lotRow(i + 5001, planCodes[i % planCodes.length]));
     rows[1234][3] = "sideways";
     rows[1500][0] = rows[10][0];
-    const { importId } = await receiveLotImport({ db: getDb(), accountId: ids.demoAccountId, userId: ids.roleUsers.designer, communityId, fileName: "bad.csv", data: new TextEncoder().encode(lotsCsv(rows)), maxBytes: 1e7 });
     const before = await lotCount();
-    await expect(processLotImport({ db: getDb(), importId })).rejects.toMatchObject({ code: "invalid_input" });
+    const res = await postLots("bad.csv", lotsCsv(rows));
+    expect(res.status, res.text).toBe(202);
+    const done = await waitForImport(designer, res.json.importId);
+    expect(done.state).toBe("failed");
     expect(await lotCount()).toBe(before);
-    const [record] = await getDb().select().from(imports).where(eq(imports.id, importId));
+    const [record] = await getDb().select().from(imports).where(eq(imports.id, res.json.importId));
     expect(record.state).toBe("failed");
     expect(record.errors).toEqual(
       expect.arrayContaining([
@@ -90,18 +88,25 @@ describe("communities and lots", () => {
         expect.objectContaining({ row: 1502, column: "Lot", reason: expect.stringMatching(/already on row 12/) }),
       ]),
     );
+    // a file that failed is not kept in object storage
+    expect(record.fileKey).toBeNull();
   });
 
   it("refuses a lot import naming another account's plan code", async () => {
     const [otherPlan] = await getDb().select().from(plans).where(eq(plans.accountId, ids.otherAccountId));
-    const { importId } = await receiveLotImport({ db: getDb(), accountId: ids.demoAccountId, userId: ids.roleUsers.designer, communityId, fileName: "other.csv", data: new TextEncoder().encode(lotsCsv([lotRow(9001, otherPlan.planCode)])), maxBytes: 1e7 });
-    await expect(processLotImport({ db: getDb(), importId })).rejects.toMatchObject({ code: "invalid_input" });
-    const [record] = await getDb().select().from(imports).where(eq(imports.id, importId));
-    expect(record.errors).toEqual([expect.objectContaining({ row: 2, column: "Plan code", reason: expect.stringContaining(otherPlan.planCode) })]);
+    const res = await postLots("other.csv", lotsCsv([lotRow(9001, otherPlan.planCode)]));
+    expect(res.status, res.text).toBe(202);
+    const done = await waitForImport(designer, res.json.importId);
+    expect(done.state).toBe("failed");
+    expect(done.errors).toEqual([expect.objectContaining({ row: 2, column: "Plan code", reason: expect.stringContaining(otherPlan.planCode) })]);
   });
 
-  it("an upload over the size limit is refused with a clear message", async () => {
-    await expect(receiveLotImport({ db: getDb(), accountId: ids.demoAccountId, userId: ids.roleUsers.designer, communityId, fileName: "big.csv", data: new Uint8Array(2048), maxBytes: 1024 })).rejects.toMatchObject({ code: "payload_too_large" });
+  it("an upload over the size limit is refused with a clear message, and nothing is recorded", async () => {
+    const importsBefore = (await getDb().select({ n: count() }).from(imports))[0].n;
+    const res = await postLots("big.csv", new Uint8Array(Number(process.env.PLATLOAD_MAX_UPLOAD_BYTES) + 1).fill(65));
+    expect(res.status).toBe(413);
+    expect(res.json.error.message).toMatch(/larger than .* MB, the limit/);
+    expect((await getDb().select({ n: count() }).from(imports))[0].n).toBe(importsBefore);
   });
 
   it("a plan edit recomputes unfrozen lots and leaves frozen lots' snapshots as they were", async () => {

@@ -11,6 +11,7 @@ import { getDb } from "@/db";
 import { auditLog, imports, planRevisions, plans } from "@/db/schema";
 import { readCsv } from "@/lib/workbook/table-io";
 import { seededIds } from "../support/demo-ids";
+import { waitForImport } from "../support/jobs";
 import { callRoute, sessionCookie } from "../support/requests";
 
 const root = path.resolve(__dirname, "../..");
@@ -44,13 +45,13 @@ describe("plan library", () => {
   it("imports a good file: creates plans by code in one go and records the import; the same file again changes nothing", async () => {
     const before = await planCount();
     const res = await callRoute(importRoute.POST, { path: "/api/plans/import", method: "POST", cookie: designer, form: csvForm("example-plans.csv", exampleCsv) });
-    expect(res.status, JSON.stringify(res.json)).toBe(200);
-    expect(res.json).toMatchObject({ created: 5, updated: 0 });
+    expect(res.status, JSON.stringify(res.json)).toBe(202);
+    expect(await waitForImport(designer, res.json.importId)).toMatchObject({ state: "succeeded", createdCount: 5, updatedCount: 0 });
     expect(await planCount()).toBe(before + 5);
     const [record] = await getDb().select().from(imports).where(eq(imports.id, res.json.importId));
     expect(record).toMatchObject({ kind: "plans", state: "succeeded", createdCount: 5, fileName: "example-plans.csv" });
     const again = await callRoute(importRoute.POST, { path: "/api/plans/import", method: "POST", cookie: designer, form: csvForm("example-plans.csv", exampleCsv) });
-    expect(again.json).toMatchObject({ created: 0, updated: 0 });
+    expect(await waitForImport(designer, again.json.importId)).toMatchObject({ state: "succeeded", createdCount: 0, updatedCount: 0 });
   });
 
   const badFiles: [string, () => string, { row: number; column: RegExp }][] = [
@@ -64,9 +65,11 @@ describe("plan library", () => {
       const before = await planCount();
       const revisionsBefore = (await getDb().select({ n: count() }).from(planRevisions))[0].n;
       const res = await callRoute(importRoute.POST, { path: "/api/plans/import", method: "POST", cookie: designer, form: csvForm("bad.csv", make()) });
-      expect(res.status).toBe(400);
-      const hit = res.json.error.fieldErrors.find((f: { row: number; column: string }) => f.row === where.row && where.column.test(f.column));
-      expect(hit, JSON.stringify(res.json.error.fieldErrors)).toBeTruthy();
+      expect(res.status).toBe(202);
+      const done = await waitForImport(designer, res.json.importId);
+      expect(done.state).toBe("failed");
+      const hit = done.errors.find((f) => f.row === where.row && where.column.test(f.column));
+      expect(hit, JSON.stringify(done.errors)).toBeTruthy();
       expect(await planCount()).toBe(before);
       expect((await getDb().select({ n: count() }).from(planRevisions))[0].n).toBe(revisionsBefore);
       const [failed] = await getDb().select().from(imports).where(and(eq(imports.accountId, ids.demoAccountId), eq(imports.fileName, "bad.csv"))).orderBy(imports.id);
@@ -210,8 +213,9 @@ describe("plan library", () => {
     expect(res.text).toContain("'=38*9-2*15");
     expect(res.text).toMatch(/Heating, front N \(Btu\/h\)/);
     const back = await callRoute(importRoute.POST, { path: "/api/plans/import", method: "POST", cookie: designer, form: csvForm("export.csv", res.text) });
-    expect(back.status, JSON.stringify(back.json?.error?.fieldErrors?.slice(0, 3))).toBe(200);
-    expect(back.json).toMatchObject({ created: 0, updated: 0 });
+    expect(back.status, back.text).toBe(202);
+    const done = await waitForImport(designer, back.json.importId);
+    expect(done, JSON.stringify(done.errors?.slice(0, 3))).toMatchObject({ state: "succeeded", createdCount: 0, updatedCount: 0 });
   });
 
   it("another account's plans are not reachable for editing", async () => {

@@ -15,12 +15,14 @@ import * as packetsRoute from "@/app/api/communities/[communityId]/packets/route
 import * as sendRoute from "@/app/api/communities/[communityId]/send/route";
 import * as reportRoute from "@/app/api/lots/[lotId]/report/route";
 import * as packetRoute from "@/app/api/packets/[packetId]/route";
+import * as packetStatusRoute from "@/app/api/packets/[packetId]/status/route";
 import { getDb } from "@/db";
 import { setLotStatus } from "@/db/queries/lots";
 import { DEMO_SITE } from "@/db/demo-scenario";
 import { auditLog, communities, equipmentSystems, lots, packets } from "@/db/schema";
 import { REPORT_CAUTION } from "@/lib/reports";
 import { seededIds } from "../support/demo-ids";
+import { waitForPacket } from "../support/jobs";
 import { callRoute, sessionCookie } from "../support/requests";
 import { TEST_MAILBOX_DIR } from "../support/test-env";
 
@@ -148,8 +150,9 @@ describe("schedules, packets and sending", () => {
 
   it("a permit packet is stored, listed with who and when, downloadable, and its PDF carries the caution and every lot number", async () => {
     const res = await callRoute(packetsRoute.POST, { path: "/x", method: "POST", params: { communityId }, cookie: purchasing, body: {} });
-    expect(res.status, res.text).toBe(200);
+    expect(res.status, res.text).toBe(202);
     expect(res.json.lotCount).toBe(lotNumbers.length);
+    expect(await waitForPacket(purchasing, res.json.packetId)).toMatchObject({ state: "ready", lotCount: lotNumbers.length });
     const list = await callRoute(packetsRoute.GET, { path: "/x", params: { communityId }, cookie: viewer });
     const listed = list.json.packets.find((p: { id: number }) => p.id === res.json.packetId);
     expect(listed).toMatchObject({ kind: "permit-packet", lotCount: lotNumbers.length, createdByName: "Priya Lund" });
@@ -175,7 +178,8 @@ describe("schedules, packets and sending", () => {
       frozeLotId = lot.id;
     }
     const res = await callRoute(packetsRoute.POST, { path: "/x", method: "POST", params: { communityId }, cookie: purchasing, body: { statuses: ["permit_submitted"] } });
-    expect(res.status, res.text).toBe(200);
+    expect(res.status, res.text).toBe(202);
+    expect((await waitForPacket(purchasing, res.json.packetId)).state).toBe("ready");
     const [{ n: submitted }] = await db.select({ n: count() }).from(lots).where(and(eq(lots.communityId, ids.demoRecords.communityId), eq(lots.status, "permit_submitted")));
     expect(res.json.lotCount).toBe(submitted);
 
@@ -191,7 +195,8 @@ describe("schedules, packets and sending", () => {
   it("sending the permit packet puts a message with the PDF attached in the mailbox, and records the addresses", async () => {
     const to = `permits.${Date.now()}@county-office.test`;
     const res = await callRoute(sendRoute.POST, { path: "/x", method: "POST", params: { communityId }, cookie: purchasing, body: { to: [to], what: "permit-packet" } });
-    expect(res.status, res.text).toBe(200);
+    expect(res.status, res.text).toBe(202);
+    expect(await waitForPacket(purchasing, res.json.packetId)).toMatchObject({ state: "ready", sentTo: [to] });
     const mail = await waitForMail(to);
     expect(mail.subject).toContain("Cedar Hollow");
     expect(mail.text).toMatch(/licensed professional/);
@@ -210,7 +215,8 @@ describe("schedules, packets and sending", () => {
   it("sending the equipment schedule attaches the XLSX and stores it as a packet", async () => {
     const to = `supplier.${Date.now()}@ductworks.test`;
     const res = await callRoute(sendRoute.POST, { path: "/x", method: "POST", params: { communityId }, cookie: purchasing, body: { to: [to], what: "equipment-schedule" } });
-    expect(res.status, res.text).toBe(200);
+    expect(res.status, res.text).toBe(202);
+    expect((await waitForPacket(purchasing, res.json.packetId)).state).toBe("ready");
     const mail = await waitForMail(to);
     expect(mail.attachments[0].filename).toMatch(/^equipment-schedule-.*\.xlsx$/);
     const list = await callRoute(packetsRoute.GET, { path: "/x", params: { communityId }, cookie: purchasing });
@@ -243,7 +249,8 @@ describe("schedules, packets and sending", () => {
 
   it("another account's community, lot and packet are not found (404)", async () => {
     const made = await callRoute(packetsRoute.POST, { path: "/x", method: "POST", params: { communityId }, cookie: purchasing, body: { lotIds: [ids.demoRecords.lotId] } });
-    expect(made.status).toBe(200);
+    expect(made.status).toBe(202);
+    expect((await waitForPacket(purchasing, made.json.packetId)).state).toBe("ready");
     const asOther = { cookie: otherAdmin };
     expect((await callRoute(scheduleRoute.GET, { path: "/x?format=json", params: { communityId }, ...asOther })).status).toBe(404);
     expect((await callRoute(packetsRoute.GET, { path: "/x", params: { communityId }, ...asOther })).status).toBe(404);
@@ -251,6 +258,7 @@ describe("schedules, packets and sending", () => {
     expect((await callRoute(sendRoute.POST, { path: "/x", method: "POST", params: { communityId }, body: { to: ["a@example.test"], what: "permit-packet" }, ...asOther })).status).toBe(404);
     expect((await callRoute(reportRoute.GET, { path: "/x", params: { lotId: String(ids.demoRecords.lotId) }, ...asOther })).status).toBe(404);
     expect((await callRoute(packetRoute.GET, { path: "/x", params: { packetId: String(made.json.packetId) }, ...asOther })).status).toBe(404);
+    expect((await callRoute(packetStatusRoute.GET, { path: "/x", params: { packetId: String(made.json.packetId) }, ...asOther })).status).toBe(404);
     // and the other account's own lot report works for its admin
     expect((await callBinary(reportRoute.GET, { path: "/x", params: { lotId: String(ids.otherRecords.lotId) }, cookie: otherAdmin })).status).toBe(200);
   });

@@ -17,7 +17,7 @@ export default async function ImportsPage() {
   const rows = await listImports({ db: getDb(), accountId: member.accountId });
   return (
     <div className="max-w-6xl">
-      <PageHeader title="Imports" description="Every uploaded file: who, when, what it changed, and its row-level errors. An import is all or nothing. Reload to follow one that is still running." />
+      <PageHeader title="Imports" description="Every uploaded file: who, when, what it changed, and its row-level errors. An import is all or nothing. Imports run in the background: reload to follow one that is still running." />
       <DataTable
         testId="imports-table"
         rows={rows}
@@ -44,16 +44,18 @@ export default async function ImportsPage() {
             cell: (r) => {
               const errors = Array.isArray(r.errors) ? (r.errors as { row: number; column: string; reason: string }[]) : [];
               if (errors.length === 0) return "";
+              const total = Math.max(r.errorCount, errors.length);
               return (
                 <details>
-                  <summary className="cursor-pointer text-red-700">{errors.length} problem(s)</summary>
+                  <summary className="cursor-pointer text-red-700">{total.toLocaleString("en-US")} problem(s)</summary>
                   <ul className="mt-1 max-h-64 overflow-y-auto text-xs">
-                    {errors.slice(0, 500).map((e, i) => (
+                    {errors.map((e, i) => (
                       <li key={i}>
                         row {e.row}, {e.column}: {e.reason}
                       </li>
                     ))}
                   </ul>
+                  {total > errors.length ? <p className="mt-1 text-xs">… and {(total - errors.length).toLocaleString("en-US")} more (the first {errors.length} are kept).</p> : null}
                 </details>
               );
             },

@@ -1,4 +1,5 @@
-import { communityOf, createPermitPacket, listPackets } from "@/db/queries/packets";
+import { communityOf, listPackets } from "@/db/queries/packets";
+import { queuePacket } from "@/db/queries/packet-jobs";
 import { apiRoute, idParam, parseJsonBody } from "@/lib/auth/route";
 import { packetBodySchema } from "./schema";
 
@@ -7,10 +8,14 @@ export const GET = apiRoute<{ communityId: string }>({ permission: "read" }, asy
   packets: await listPackets({ db, accountId: member.accountId, communityId: idParam(params.communityId, "That community") }),
 }));
 
-/** Makes a permit packet (one PDF of the lots' load reports), keeps it in object storage and records it. */
+/**
+ * Asks for a permit packet (one PDF of the lots' load reports): checked and queued (202); a
+ * worker makes it and keeps it, with progress on GET /api/packets/:id/status.
+ */
 export const POST = apiRoute<{ communityId: string }>({ permission: "schedules.export" }, async ({ db, member, params, request }) => {
   const communityId = idParam(params.communityId, "That community");
   await communityOf(db, member.accountId, communityId);
   const body = await parseJsonBody(request, packetBodySchema);
-  return createPermitPacket({ db, accountId: member.accountId, userId: member.userId, communityId, lotIds: body.lotIds, statuses: body.statuses });
+  const queued = await queuePacket({ db, accountId: member.accountId, userId: member.userId, communityId, kind: "permit-packet", lotIds: body.lotIds, statuses: body.statuses });
+  return Response.json(queued, { status: 202 });
 });
