@@ -41,10 +41,14 @@ test("an admin invites a member, the mail arrives, the link sets a password and 
   await form.getByRole("button", { name: "Send invitation" }).click();
   await expect(page.getByTestId("invitations-list")).toContainText(email);
 
-  // the development mailbox shows the account's admin the mail the account sent
+  // the development mailbox shows the account's admin the mail the account sent; the worker sends it
+  // after the answer (a durable job), so the page is reloaded until it has arrived
   await page.goto("/dev/mailbox");
   const message = page.getByTestId("mail-message").filter({ hasText: email }).first();
-  await expect(message.getByTestId("mail-subject")).toContainText("invited you to Marrow & Finch Homes");
+  await expect(async () => {
+    await page.reload();
+    await expect(message.getByTestId("mail-subject")).toContainText("invited you to Marrow & Finch Homes", { timeout: 2_000 });
+  }).toPass({ timeout: 60_000 });
   const body = await message.getByTestId("mail-body").innerText();
   const link = /http\S+\/invitation\/\S+/.exec(body)?.[0];
   expect(link).toBeTruthy();
