@@ -78,8 +78,7 @@ const SCRATCH = {
   gain: row(),
   roofIrr: row(),
   atticF: row(),
-  radNonsolar: row(),
-  radSolar: row(),
+  doorGain: row(),
   stored: row(),
   storedSolar: row(),
   sumRadNonsolar: row(),
@@ -152,7 +151,7 @@ export function hourlyCoolingDay(p: PreparedPlan, facingAzimuthDeg: number): Coo
 
   // Scratch rows reused across calls (the function is synchronous and never re-entered).
   const { walls, windows, doors, ceilings, vaulted, skylights, floors, foundationWalls, garageWall, ducts, rooms, total } = SCRATCH;
-  const { te, lagged, gain, roofIrr, atticF, radNonsolar, radSolar } = SCRATCH;
+  const { te, lagged, gain, roofIrr, atticF, doorGain } = SCRATCH;
   const windowsByFacade = SCRATCH.windowsByFacade;
   walls.fill(0);
   windows.fill(0);
@@ -171,7 +170,6 @@ export function hourlyCoolingDay(p: PreparedPlan, facingAzimuthDeg: number): Coo
 
   // Walls and doors: conduction of the sol-air difference, through each wall's CTS (ch. 18 eq.
   // 30–31); doors are thin and taken without conduction lag. Their radiant share then through the RTS.
-  const doorGain = SCRATCH.radSolar; // reused as the door heat-gain row here (cleared below)
   doorGain.fill(0);
   for (let fi = 0; fi < env.facades.length; fi++) {
     const fc = env.facades[fi];

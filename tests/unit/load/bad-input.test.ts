@@ -1,17 +1,8 @@
 /** Bad input: each case is refused with a LoadInputError naming the field (and range where one exists). */
 import { describe, expect, it } from "vitest";
 import { computeFacingLoads, LoadInputError, parsePlanInput, parseSiteConditions, safeParsePlanInput } from "../../../lib/load";
-import { SEA_LEVEL_SITE, symmetricPlan } from "./helpers";
+import { errorOf, SEA_LEVEL_SITE, symmetricPlan } from "./helpers";
 
-function errorOf(fn: () => unknown): LoadInputError {
-  try {
-    fn();
-  } catch (error) {
-    if (error instanceof LoadInputError) return error;
-    throw error;
-  }
-  throw new Error("expected a LoadInputError");
-}
 
 const base = symmetricPlan();
 const withFront = (front: Record<string, unknown>) => ({ ...base, facades: { ...base.facades, front } });

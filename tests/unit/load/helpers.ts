@@ -1,4 +1,5 @@
 /** Test helpers: small invented plans and sites built for one property each. */
+import { LoadInputError } from "../../../lib/load/errors";
 import type { PlanInputRaw, SiteConditionsRaw } from "../../../lib/load/input";
 
 export const SEA_LEVEL_SITE: SiteConditionsRaw = {
@@ -32,4 +33,15 @@ export function symmetricPlan(overrides: Partial<PlanInputRaw> = {}): PlanInputR
 export function withinTolerance(actual: number, expected: number, tol: { relative?: number; absolute?: number }): boolean {
   if (tol.relative !== undefined) return Math.abs(actual - expected) <= tol.relative * Math.abs(expected);
   return Math.abs(actual - expected) <= (tol.absolute ?? 0) + 1e-9;
+}
+
+/** The LoadInputError that `fn` throws (any other outcome fails the test). */
+export function errorOf(fn: () => unknown): LoadInputError {
+  try {
+    fn();
+  } catch (error) {
+    if (error instanceof LoadInputError) return error;
+    throw error;
+  }
+  throw new Error("expected a LoadInputError");
 }

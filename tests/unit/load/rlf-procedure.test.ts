@@ -23,7 +23,7 @@ import {
   W_M2K_PER_BTUH_FT2F,
 } from "../../../lib/load/residential-load-factor/tables";
 import { BTUH_FT2_PER_W_M2 } from "../../../lib/load/units";
-import { SEA_LEVEL_SITE, symmetricPlan } from "./helpers";
+import { errorOf, SEA_LEVEL_SITE, symmetricPlan } from "./helpers";
 
 const perM2 = (btuhFt2: number) => btuhFt2 / BTUH_FT2_PER_W_M2;
 
@@ -65,15 +65,6 @@ function window(overrides: Partial<RlfFenestrationGroup> = {}): RlfFenestrationG
 
 const glassDetail = (h: RlfHouse) => residentialLoadFactorLoads(h).rows.find((r) => r.kind === "fenestration")!.fenestration!;
 
-function errorOf(fn: () => unknown): LoadInputError {
-  try {
-    fn();
-  } catch (error) {
-    if (error instanceof LoadInputError) return error;
-    throw error;
-  }
-  throw new Error("expected a LoadInputError");
-}
 
 describe("HoF 2021 ch. 17 Tables 9 and 10 against each other", () => {
   // Table 10 as read (25°–60°; see tables.ts on the stored copy's shifted columns) against the Table 9
