@@ -17,7 +17,16 @@ export function pageExtensionsFor(phase: string, demoBuild: string | undefined):
 export default function nextConfig(phase: string): NextConfig {
   return {
     // Packages with Node-only internals stay outside the server bundle.
-    serverExternalPackages: ["exceljs", "mysql2", "nodemailer", "mailparser", "bcryptjs", "psychrolib", "pdfkit", "rate-limiter-flexible"],
+    serverExternalPackages: [
+      "exceljs",
+      "mysql2",
+      "nodemailer",
+      "mailparser",
+      "bcryptjs",
+      "psychrolib",
+      "pdfkit",
+      "rate-limiter-flexible",
+    ],
     poweredByHeader: false,
     typedRoutes: false,
     pageExtensions: pageExtensionsFor(phase, process.env.PLATLOAD_DEMO_BUILD),
@@ -27,7 +36,13 @@ export default function nextConfig(phase: string): NextConfig {
     async headers() {
       return [
         { source: "/:path*", headers: SECURITY_HEADERS },
-        { source: "/api/:path*", headers: [{ key: "Content-Security-Policy", value: API_CONTENT_SECURITY_POLICY }, { key: "Cache-Control", value: "no-store" }] },
+        {
+          source: "/api/:path*",
+          headers: [
+            { key: "Content-Security-Policy", value: API_CONTENT_SECURITY_POLICY },
+            { key: "Cache-Control", value: "no-store" },
+          ],
+        },
       ];
     },
   };

@@ -14,7 +14,18 @@ export interface DemoUser {
 
 /** A facade of a plan: gross wall, window area, door area (ft²); the other window properties take the plan's defaults. */
 function facade(grossWallAreaFt2: number, windowAreaFt2: number, doorAreaFt2 = 0, overhangDepthFt = 1.5) {
-  return { grossWallAreaFt2, doorAreaFt2, window: { areaFt2: windowAreaFt2, uFactor: 0.3, shgc: 0.23, overhangDepthFt, overhangHeightAboveHeadFt: 1.5, windowHeightFt: 5 } };
+  return {
+    grossWallAreaFt2,
+    doorAreaFt2,
+    window: {
+      areaFt2: windowAreaFt2,
+      uFactor: 0.3,
+      shgc: 0.23,
+      overhangDepthFt,
+      overhangHeightAboveHeadFt: 1.5,
+      windowHeightFt: 5,
+    },
+  };
 }
 
 export const DEMO_PLANS: { planCode: string; name: string; input: PlanInputRaw }[] = [
@@ -28,7 +39,12 @@ export const DEMO_PLANS: { planCode: string; name: string; input: PlanInputRaw }
       bedrooms: 3,
       ceilingHeightFt: 9,
       wall: { baseId: "wood-2x4-16in-oc", cavityR: 13, continuousR: 0 },
-      facades: { front: facade(370, 48, 20, 6), left: facade(450, 15), back: facade(370, 60), right: facade(450, 15) },
+      facades: {
+        front: facade(370, 48, 20, 6),
+        left: facade(450, 15),
+        back: facade(370, 60),
+        right: facade(450, 15),
+      },
       attic: { kind: "vented", ceiling: { cavityR: 38 } },
       foundation: { kind: "slab-on-grade", slabPerimeterFt: 164 },
       garage: { wallAreaFt2: 180, doorAreaFt2: 18 },
@@ -46,7 +62,12 @@ export const DEMO_PLANS: { planCode: string; name: string; input: PlanInputRaw }
       bedrooms: 3,
       ceilingHeightFt: 9,
       wall: { baseId: "wood-2x4-16in-oc", cavityR: 15, continuousR: 0 },
-      facades: { front: facade(420, 55, 20, 8), left: facade(500, 20), back: facade(420, 90), right: facade(500, 20) },
+      facades: {
+        front: facade(420, 55, 20, 8),
+        left: facade(500, 20),
+        back: facade(420, 90),
+        right: facade(500, 20),
+      },
       attic: { kind: "vented", ceiling: { cavityR: 38 } },
       foundation: { kind: "slab-on-grade", slabPerimeterFt: 182 },
       garage: { wallAreaFt2: 200, doorAreaFt2: 18 },
@@ -64,7 +85,12 @@ export const DEMO_PLANS: { planCode: string; name: string; input: PlanInputRaw }
       bedrooms: 4,
       ceilingHeightFt: 9,
       wall: { baseId: "wood-2x4-16in-oc", cavityR: 13, continuousR: 0 },
-      facades: { front: facade(760, 95, 20, 2), left: facade(690, 30), back: facade(760, 110), right: facade(690, 30) },
+      facades: {
+        front: facade(760, 95, 20, 2),
+        left: facade(690, 30),
+        back: facade(760, 110),
+        right: facade(690, 30),
+      },
       attic: { kind: "vented", ceiling: { cavityR: 38 } },
       foundation: { kind: "slab-on-grade", slabPerimeterFt: 150 },
       garage: { wallAreaFt2: 240, doorAreaFt2: 18, floorOverAreaFt2: 0 },
@@ -82,7 +108,12 @@ export const DEMO_PLANS: { planCode: string; name: string; input: PlanInputRaw }
       bedrooms: 4,
       ceilingHeightFt: 9,
       wall: { baseId: "wood-2x6-24in-oc", cavityR: 20, continuousR: 0 },
-      facades: { front: facade(840, 110, 24, 2), left: facade(760, 40), back: facade(840, 150), right: facade(760, 40) },
+      facades: {
+        front: facade(840, 110, 24, 2),
+        left: facade(760, 40),
+        back: facade(840, 150),
+        right: facade(760, 40),
+      },
       attic: { kind: "encapsulated", roofDeck: { cavityR: 20 }, ceiling: { cavityR: 0 } },
       foundation: { kind: "slab-on-grade", slabPerimeterFt: 176 },
       garage: { wallAreaFt2: 260, doorAreaFt2: 18, floorOverAreaFt2: 420 },
@@ -130,11 +161,20 @@ export const OTHER_ACCOUNT = {
   community: { name: "Heron Flats", locality: "Gulf Coast (demo)" },
   /** The second builder sizes by the hourly method, to show that each account picks its own procedure. */
   loadProcedure: "hourly" as const,
-  plan: { planCode: "HX-2100", name: "Harbor", input: { ...DEMO_PLANS[1].input, name: "Harbor", conditionedFloorAreaFt2: 2100 } as PlanInputRaw },
+  plan: {
+    planCode: "HX-2100",
+    name: "Harbor",
+    input: { ...DEMO_PLANS[1].input, name: "Harbor", conditionedFloorAreaFt2: 2100 } as PlanInputRaw,
+  },
 };
 
 const STREETS = ["Quillfeather Lane", "Saltgrass Way", "Tern Hollow Drive", "Juniper Bend"];
-const FACINGS_BY_STREET = [[0, 180], [90, 270], [45, 225], [135, 315]];
+const FACINGS_BY_STREET = [
+  [0, 180],
+  [90, 270],
+  [45, 225],
+  [135, 315],
+];
 
 /** 120 lots on four streets; each street's lots face across it, so two facings per street. */
 export function demoLots(planCodes: string[]) {

@@ -2,20 +2,37 @@
 // and the catalog table use (lib/workbook/equipment-columns.ts), and the selection kept per lot.
 // No "server-only" guard: the seed and the benchmark use it too.
 import { eq } from "drizzle-orm";
-import { DEFAULT_SIZING_LIMITS, parseCatalog, selectFromParsed, sizingLimitsSchema, type CatalogSystem, type SizingLimits } from "@/lib/equipment";
-import { catalogForHeatingDesign, joinModelNumbers, type EquipmentCatalogEntry } from "@/lib/workbook/equipment-columns";
+import {
+  DEFAULT_SIZING_LIMITS,
+  parseCatalog,
+  selectFromParsed,
+  sizingLimitsSchema,
+  type CatalogSystem,
+  type SizingLimits,
+} from "@/lib/equipment";
+import {
+  catalogForHeatingDesign,
+  joinModelNumbers,
+  type EquipmentCatalogEntry,
+} from "@/lib/workbook/equipment-columns";
 import type { Database } from "./index";
 import { accounts, equipmentSystems, type EquipmentSystem } from "./schema";
 
 type Tx = Parameters<Parameters<Database["transaction"]>[0]>[0];
 
-const num = (v: string | number | null | undefined) => (v === null || v === undefined || v === "" ? undefined : Number(v));
+const num = (v: string | number | null | undefined) =>
+  v === null || v === undefined || v === "" ? undefined : Number(v);
 const text = (v: string | null | undefined) => (v ? v : undefined);
 
 export function catalogEntryFromRow(row: EquipmentSystem): EquipmentCatalogEntry {
   const entry: EquipmentCatalogEntry = {
     id: row.systemCode,
-    modelNumber: joinModelNumbers({ outdoorModel: row.outdoorModel, indoorModel: row.indoorModel, furnaceModel: row.furnaceModel }) || row.systemCode,
+    modelNumber:
+      joinModelNumbers({
+        outdoorModel: row.outdoorModel,
+        indoorModel: row.indoorModel,
+        furnaceModel: row.furnaceModel,
+      }) || row.systemCode,
     type: row.systemType,
     nominalTons: num(row.nominalTons),
     coolingTotalBtuh: row.coolingTotalBtuh ?? 0,
@@ -61,7 +78,10 @@ export function rowValuesFromEntry(entry: EquipmentCatalogEntry, accountId: numb
 
 /** The account's sizing limits, or the defaults (from memory and common practice). */
 export async function sizingLimitsOf(db: Database | Tx, accountId: number): Promise<SizingLimits> {
-  const [account] = await db.select({ limits: accounts.sizingLimits }).from(accounts).where(eq(accounts.id, accountId));
+  const [account] = await db
+    .select({ limits: accounts.sizingLimits })
+    .from(accounts)
+    .where(eq(accounts.id, accountId));
   const parsed = sizingLimitsSchema.safeParse(account?.limits ?? {});
   return parsed.success ? parsed.data : { ...DEFAULT_SIZING_LIMITS };
 }
@@ -69,12 +89,24 @@ export async function sizingLimitsOf(db: Database | Tx, accountId: number): Prom
 /** What a lot keeps of its equipment selection. */
 export interface LotSelection {
   computedAt: string;
-  bestFit: { systemId: number; systemCode: string; coolingPctOfLoad: number | null; heatingPctOfLoad: number | null } | null;
+  bestFit: {
+    systemId: number;
+    systemCode: string;
+    coolingPctOfLoad: number | null;
+    heatingPctOfLoad: number | null;
+  } | null;
   fittingCodes: string[];
   /** When nothing fits: the nearest system's reasons, in words (too big, too small, latent short…). */
   noFitReason: string | null;
   /** The chosen system (override or best fit) against the loads. */
-  chosen: { systemId: number; systemCode: string; fits: boolean; reasons: string[]; coolingPctOfLoad: number | null; heatingPctOfLoad: number | null } | null;
+  chosen: {
+    systemId: number;
+    systemCode: string;
+    fits: boolean;
+    reasons: string[];
+    coolingPctOfLoad: number | null;
+    heatingPctOfLoad: number | null;
+  } | null;
   limitsUsed: SizingLimits;
 }
 
@@ -103,7 +135,12 @@ export class LotEquipmentSelector {
 
   select(
     { communityId, heatingOutdoorDbF }: { communityId: number; heatingOutdoorDbF: number },
-    loads: { heatingBtuh: number; coolingSensibleBtuh: number; coolingLatentBtuh: number; coolingTotalBtuh: number },
+    loads: {
+      heatingBtuh: number;
+      coolingSensibleBtuh: number;
+      coolingLatentBtuh: number;
+      coolingTotalBtuh: number;
+    },
     overrideSystemId: number | null,
   ): { selection: LotSelection; systemId: number | null } {
     let catalog = this.perSite.get(communityId);
@@ -112,20 +149,48 @@ export class LotEquipmentSelector {
       catalog = parseCatalog(catalogForHeatingDesign(this.rows.map(catalogEntryFromRow), heatingOutdoorDbF));
       this.perSite.set(communityId, catalog);
     }
-    const result = selectFromParsed({ loads: { ...loads, coolingRequired: true }, catalog, limits: this.limits });
+    const result = selectFromParsed({
+      loads: { ...loads, coolingRequired: true },
+      catalog,
+      limits: this.limits,
+    });
     const evaluations = [...result.fitting, ...result.notFitting];
     const best = result.bestFit;
     const chosenCode = overrideSystemId ? this.codeById.get(overrideSystemId) : best?.system.id;
     const chosen = chosenCode ? evaluations.find((e) => e.system.id === chosenCode) : undefined;
     // The nearest misfit: the one with the fewest reasons, then closest cooling ratio to 100 %.
-    const nearest = [...result.notFitting].sort((a, b) => a.reasons.length - b.reasons.length || Math.abs((a.coolingPctOfLoad ?? 999) - 100) - Math.abs((b.coolingPctOfLoad ?? 999) - 100))[0];
+    const nearest = [...result.notFitting].sort(
+      (a, b) =>
+        a.reasons.length - b.reasons.length ||
+        Math.abs((a.coolingPctOfLoad ?? 999) - 100) - Math.abs((b.coolingPctOfLoad ?? 999) - 100),
+    )[0];
     const selection: LotSelection = {
       computedAt: new Date().toISOString(),
-      bestFit: best ? { systemId: this.idByCode.get(best.system.id)!, systemCode: best.system.id, coolingPctOfLoad: best.coolingPctOfLoad, heatingPctOfLoad: best.heatingPctOfLoad } : null,
+      bestFit: best
+        ? {
+            systemId: this.idByCode.get(best.system.id)!,
+            systemCode: best.system.id,
+            coolingPctOfLoad: best.coolingPctOfLoad,
+            heatingPctOfLoad: best.heatingPctOfLoad,
+          }
+        : null,
       fittingCodes: result.fitting.map((e) => e.system.id),
-      noFitReason: best ? null : this.rows.length === 0 ? "the catalog is empty" : nearest ? `nearest is ${nearest.system.id}: ${nearest.reasons.map((r) => r.message).join("; ")}` : "no system fits",
+      noFitReason: best
+        ? null
+        : this.rows.length === 0
+          ? "the catalog is empty"
+          : nearest
+            ? `nearest is ${nearest.system.id}: ${nearest.reasons.map((r) => r.message).join("; ")}`
+            : "no system fits",
       chosen: chosen
-        ? { systemId: this.idByCode.get(chosen.system.id)!, systemCode: chosen.system.id, fits: chosen.fits, reasons: chosen.reasons.map((r) => r.message), coolingPctOfLoad: chosen.coolingPctOfLoad, heatingPctOfLoad: chosen.heatingPctOfLoad }
+        ? {
+            systemId: this.idByCode.get(chosen.system.id)!,
+            systemCode: chosen.system.id,
+            fits: chosen.fits,
+            reasons: chosen.reasons.map((r) => r.message),
+            coolingPctOfLoad: chosen.coolingPctOfLoad,
+            heatingPctOfLoad: chosen.heatingPctOfLoad,
+          }
         : null,
       limitsUsed: result.limitsUsed,
     };

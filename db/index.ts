@@ -9,7 +9,13 @@ export type Database = MySql2Database<typeof schema>;
 const globalForDb = globalThis as unknown as { platloadPool?: mysql.Pool; platloadDb?: Database };
 
 export function createPool(url: string): mysql.Pool {
-  return mysql.createPool({ uri: url, connectionLimit: 10, dateStrings: false, timezone: "Z", supportBigNumbers: true });
+  return mysql.createPool({
+    uri: url,
+    connectionLimit: 10,
+    dateStrings: false,
+    timezone: "Z",
+    supportBigNumbers: true,
+  });
 }
 
 export function getDb(): Database {

@@ -24,6 +24,9 @@ export function procedureOfStored(stored: { procedure?: unknown } | null | undef
 
 /** The account's chosen procedure (the column's default when the account is not found). */
 export async function loadProcedureOf(db: Database | Tx, accountId: number): Promise<LoadProcedure> {
-  const [account] = await db.select({ procedure: accounts.loadProcedure }).from(accounts).where(eq(accounts.id, accountId));
+  const [account] = await db
+    .select({ procedure: accounts.loadProcedure })
+    .from(accounts)
+    .where(eq(accounts.id, accountId));
   return account?.procedure ?? DEFAULT_LOAD_PROCEDURE;
 }

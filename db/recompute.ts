@@ -1,7 +1,16 @@
 // Lot loads: computed from the current plan revision and the community's design conditions, and
 // written back in a few statements. No "server-only" guard: the seed and the benchmark use it too.
 import { and, eq, inArray, sql, type SQL } from "drizzle-orm";
-import { computeFacingLoads, LOAD_PROCEDURE_LABELS, LoadInputError, parseSiteConditions, type FacingLoads, type LoadProcedure, type PlanInput, type SiteConditions } from "@/lib/load";
+import {
+  computeFacingLoads,
+  LOAD_PROCEDURE_LABELS,
+  LoadInputError,
+  parseSiteConditions,
+  type FacingLoads,
+  type LoadProcedure,
+  type PlanInput,
+  type SiteConditions,
+} from "@/lib/load";
 import { AppError } from "@/lib/errors";
 import { LotEquipmentSelector, type LotSelection } from "./equipment";
 import type { Database } from "./index";
@@ -63,10 +72,18 @@ export { procedureOfStored } from "./load-procedure";
 export const FROZEN_STATUSES: readonly LotStatus[] = ["permit_submitted", "permitted", "built"];
 export const isFrozen = (status: LotStatus) => FROZEN_STATUSES.includes(status);
 
-function summarize(result: FacingLoads, cardinalTotals: number[], revision: { id: number; number: number }, previous: LotResults | null): LotResults {
+function summarize(
+  result: FacingLoads,
+  cardinalTotals: number[],
+  revision: { id: number; number: number },
+  previous: LotResults | null,
+): LotResults {
   const c = result.cooling;
   const rank = 1 + cardinalTotals.filter((t) => t > c.totalBtuh + 0.5).length;
-  const changed = !!previous && (Math.round(previous.coolingTotalBtuh) !== Math.round(c.totalBtuh) || Math.round(previous.heatingBtuh) !== Math.round(result.heating.totalBtuh));
+  const changed =
+    !!previous &&
+    (Math.round(previous.coolingTotalBtuh) !== Math.round(c.totalBtuh) ||
+      Math.round(previous.heatingBtuh) !== Math.round(result.heating.totalBtuh));
   return {
     engineVersion: result.engineVersion,
     procedure: result.procedure,
@@ -82,7 +99,13 @@ function summarize(result: FacingLoads, cardinalTotals: number[], revision: { id
     airflowCfm: c.airflowCfm,
     facingRank: Math.min(4, rank),
     changed,
-    previous: previous ? { heatingBtuh: previous.heatingBtuh, coolingTotalBtuh: previous.coolingTotalBtuh, procedure: procedureOfStored(previous) } : null,
+    previous: previous
+      ? {
+          heatingBtuh: previous.heatingBtuh,
+          coolingTotalBtuh: previous.coolingTotalBtuh,
+          procedure: procedureOfStored(previous),
+        }
+      : null,
   };
 }
 
@@ -101,7 +124,11 @@ export class LotCalculator {
   ) {}
 
   /** The calculator for an account: its chosen procedure, read once. */
-  static async forAccount(db: Db, accountId: number, conditionsByCommunity: Map<number, unknown>): Promise<LotCalculator> {
+  static async forAccount(
+    db: Db,
+    accountId: number,
+    conditionsByCommunity: Map<number, unknown>,
+  ): Promise<LotCalculator> {
     return new LotCalculator(conditionsByCommunity, await loadProcedureOf(db, accountId));
   }
 
@@ -114,7 +141,10 @@ export class LotCalculator {
     return site;
   }
 
-  compute(lot: { communityId: number; facingDeg: number; previous: LotResults | null }, revision: { id: number; number: number; input: PlanInput }): { full: FacingLoads; summary: LotResults } {
+  compute(
+    lot: { communityId: number; facingDeg: number; previous: LotResults | null },
+    revision: { id: number; number: number; input: PlanInput },
+  ): { full: FacingLoads; summary: LotResults } {
     const site = this.site(lot.communityId);
     const key = `${revision.id}:${lot.communityId}`;
     let totals = this.cardinal.get(key);
@@ -132,20 +162,40 @@ export class LotCalculator {
       return computeFacingLoads(input, site, facingDeg, { validated: true, procedure: this.procedure });
     } catch (error) {
       if (error instanceof LoadInputError) {
-        throw new AppError("conflict", `Lot loads cannot be computed by ${LOAD_PROCEDURE_LABELS[this.procedure]}: ${error.message}. Nothing was saved.`, error.issues.map((issue) => ({ field: issue.field, message: issue.message })));
+        throw new AppError(
+          "conflict",
+          `Lot loads cannot be computed by ${LOAD_PROCEDURE_LABELS[this.procedure]}: ${error.message}. Nothing was saved.`,
+          error.issues.map((issue) => ({ field: issue.field, message: issue.message })),
+        );
       }
       throw error;
     }
   }
 
   /** Equipment for a lot's loads from the account's catalog, at the community's heating design temperature. */
-  select(selector: LotEquipmentSelector, communityId: number, summary: LotResults, overrideSystemId: number | null) {
-    return selector.select({ communityId, heatingOutdoorDbF: this.site(communityId).heatingOutdoorDbF }, summary, overrideSystemId);
+  select(
+    selector: LotEquipmentSelector,
+    communityId: number,
+    summary: LotResults,
+    overrideSystemId: number | null,
+  ) {
+    return selector.select(
+      { communityId, heatingOutdoorDbF: this.site(communityId).heatingOutdoorDbF },
+      summary,
+      overrideSystemId,
+    );
   }
 }
 
 /** Writes many lots' results in a few statements (CASE per id, 500 ids a statement). */
-export async function writeResults(tx: Db, rows: { id: number; results: LotResults; selection?: { selection: LotSelection; systemId: number | null } }[]) {
+export async function writeResults(
+  tx: Db,
+  rows: {
+    id: number;
+    results: LotResults;
+    selection?: { selection: LotSelection; systemId: number | null };
+  }[],
+) {
   const now = new Date();
   for (let i = 0; i < rows.length; i += 500) {
     const chunk = rows.slice(i, i + 500);
@@ -158,17 +208,33 @@ export async function writeResults(tx: Db, rows: { id: number; results: LotResul
         resultsRevisionId: sql`CASE ${lots.id} ${sql.join(revisionCases, sql` `)} END`,
         resultsComputedAt: now,
       })
-      .where(inArray(lots.id, chunk.map((r) => r.id)));
+      .where(
+        inArray(
+          lots.id,
+          chunk.map((r) => r.id),
+        ),
+      );
     // Frozen lots keep the selection of their permit snapshot; the others get a new one.
     const selected = chunk.filter((r) => r.selection);
     if (selected.length > 0) {
       await tx
         .update(lots)
         .set({
-          selection: sql`CASE ${lots.id} ${sql.join(selected.map((r) => sql`WHEN ${r.id} THEN ${JSON.stringify(r.selection!.selection)}`), sql` `)} END`,
-          equipmentSystemId: sql`CASE ${lots.id} ${sql.join(selected.map((r) => sql`WHEN ${r.id} THEN ${r.selection!.systemId}`), sql` `)} END`,
+          selection: sql`CASE ${lots.id} ${sql.join(
+            selected.map((r) => sql`WHEN ${r.id} THEN ${JSON.stringify(r.selection!.selection)}`),
+            sql` `,
+          )} END`,
+          equipmentSystemId: sql`CASE ${lots.id} ${sql.join(
+            selected.map((r) => sql`WHEN ${r.id} THEN ${r.selection!.systemId}`),
+            sql` `,
+          )} END`,
         })
-        .where(inArray(lots.id, selected.map((r) => r.id)));
+        .where(
+          inArray(
+            lots.id,
+            selected.map((r) => r.id),
+          ),
+        );
     }
   }
 }
@@ -178,7 +244,15 @@ export async function writeResults(tx: Db, rows: { id: number; results: LotResul
  * account matching the filter. Frozen lots are recomputed too (so the grid can show that the
  * current plan differs) but their permit snapshot is never touched.
  */
-export async function recomputeLots(tx: Db, { accountId, communityId, planIds, lotIds }: { accountId: number; communityId?: number; planIds?: number[]; lotIds?: number[] }) {
+export async function recomputeLots(
+  tx: Db,
+  {
+    accountId,
+    communityId,
+    planIds,
+    lotIds,
+  }: { accountId: number; communityId?: number; planIds?: number[]; lotIds?: number[] },
+) {
   const filters = [eq(lots.accountId, accountId)];
   if (communityId) filters.push(eq(lots.communityId, communityId));
   if (planIds) {
@@ -208,8 +282,15 @@ export async function recomputeLots(tx: Db, { accountId, communityId, planIds, l
     .where(and(...filters));
   if (rows.length === 0) return { recomputed: 0, changed: 0 };
   const communityIds = [...new Set(rows.map((r) => r.communityId))];
-  const conditions = await tx.select({ id: communities.id, conditions: communities.conditions }).from(communities).where(inArray(communities.id, communityIds));
-  const calculator = await LotCalculator.forAccount(tx, accountId, new Map(conditions.map((c) => [c.id, c.conditions])));
+  const conditions = await tx
+    .select({ id: communities.id, conditions: communities.conditions })
+    .from(communities)
+    .where(inArray(communities.id, communityIds));
+  const calculator = await LotCalculator.forAccount(
+    tx,
+    accountId,
+    new Map(conditions.map((c) => [c.id, c.conditions])),
+  );
   const selector = await LotEquipmentSelector.forAccount(tx, accountId);
   const inputs = new Map<number, PlanInput>();
   const out: Parameters<typeof writeResults>[1] = [];
@@ -219,11 +300,19 @@ export async function recomputeLots(tx: Db, { accountId, communityId, planIds, l
       input = r.input as PlanInput;
       inputs.set(r.revisionId, input);
     }
-    const { summary } = calculator.compute({ communityId: r.communityId, facingDeg: Number(r.facingDeg), previous: (r.results as LotResults | null) ?? null }, { id: r.revisionId, number: r.revisionNumber, input });
-    const selection = isFrozen(r.status) ? undefined : calculator.select(selector, r.communityId, summary, r.equipmentOverride ? r.equipmentSystemId : null);
+    const { summary } = calculator.compute(
+      {
+        communityId: r.communityId,
+        facingDeg: Number(r.facingDeg),
+        previous: (r.results as LotResults | null) ?? null,
+      },
+      { id: r.revisionId, number: r.revisionNumber, input },
+    );
+    const selection = isFrozen(r.status)
+      ? undefined
+      : calculator.select(selector, r.communityId, summary, r.equipmentOverride ? r.equipmentSystemId : null);
     out.push({ id: r.id, results: summary, selection });
   }
   await writeResults(tx, out);
   return { recomputed: out.length, changed: out.filter((o) => o.results.changed).length };
 }
-

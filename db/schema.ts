@@ -23,7 +23,10 @@ import { IMPORT_KINDS } from "@/lib/imports/import-kinds";
 /** MariaDB rejects drizzle's serial(): an unsigned auto-increment bigint instead (DEVELOPERS.md, MariaDB notes). */
 const id = () => bigint("id", { mode: "number", unsigned: true }).autoincrement().primaryKey();
 const ref = (name: string) => bigint(name, { mode: "number", unsigned: true });
-const createdAt = () => datetime("created_at", { mode: "date", fsp: 3 }).notNull().$defaultFn(() => new Date());
+const createdAt = () =>
+  datetime("created_at", { mode: "date", fsp: 3 })
+    .notNull()
+    .$defaultFn(() => new Date());
 
 export { ROLES, type Role };
 
@@ -31,7 +34,14 @@ export const LOT_STATUSES = ["planned", "permit_submitted", "permitted", "built"
 export type LotStatus = (typeof LOT_STATUSES)[number];
 
 export { IMPORT_KINDS };
-export const IMPORT_STATES = ["received", "validating", "computing", "saving", "succeeded", "failed"] as const;
+export const IMPORT_STATES = [
+  "received",
+  "validating",
+  "computing",
+  "saving",
+  "succeeded",
+  "failed",
+] as const;
 
 export const SYSTEM_TYPES = ["ac-furnace", "heat-pump", "heat-pump-backup", "furnace"] as const;
 
@@ -63,25 +73,36 @@ export const memberships = mysqlTable(
   "memberships",
   {
     id: id(),
-    userId: ref("user_id").notNull().references(() => users.id),
-    accountId: ref("account_id").notNull().references(() => accounts.id),
+    userId: ref("user_id")
+      .notNull()
+      .references(() => users.id),
+    accountId: ref("account_id")
+      .notNull()
+      .references(() => accounts.id),
     role: mysqlEnum("role", ROLES).notNull(),
     createdAt: createdAt(),
   },
-  (t) => [uniqueIndex("memberships_user_account").on(t.userId, t.accountId), index("memberships_account").on(t.accountId)],
+  (t) => [
+    uniqueIndex("memberships_user_account").on(t.userId, t.accountId),
+    index("memberships_account").on(t.accountId),
+  ],
 );
 
 export const invitations = mysqlTable(
   "invitations",
   {
     id: id(),
-    accountId: ref("account_id").notNull().references(() => accounts.id),
+    accountId: ref("account_id")
+      .notNull()
+      .references(() => accounts.id),
     email: varchar("email", { length: 254 }).notNull(),
     name: varchar("name", { length: 160 }).notNull(),
     role: mysqlEnum("role", ROLES).notNull(),
     /** SHA-256 of the token sent by e-mail; the token itself is never stored. */
     tokenHash: varchar("token_hash", { length: 64 }).notNull().unique(),
-    invitedByUserId: ref("invited_by_user_id").notNull().references(() => users.id),
+    invitedByUserId: ref("invited_by_user_id")
+      .notNull()
+      .references(() => users.id),
     expiresAt: datetime("expires_at", { mode: "date" }).notNull(),
     acceptedAt: datetime("accepted_at", { mode: "date" }),
     revokedAt: datetime("revoked_at", { mode: "date" }),
@@ -107,7 +128,9 @@ export const plans = mysqlTable(
   "plans",
   {
     id: id(),
-    accountId: ref("account_id").notNull().references(() => accounts.id),
+    accountId: ref("account_id")
+      .notNull()
+      .references(() => accounts.id),
     planCode: varchar("plan_code", { length: 40 }).notNull(),
     name: varchar("name", { length: 160 }).notNull(),
     /** The revision shown and edited now (the newest). */
@@ -115,7 +138,9 @@ export const plans = mysqlTable(
     /** Bumped on every save; a save carrying an older version is refused. */
     version: int("version").notNull().default(1),
     createdAt: createdAt(),
-    updatedAt: datetime("updated_at", { mode: "date", fsp: 3 }).notNull().$defaultFn(() => new Date()),
+    updatedAt: datetime("updated_at", { mode: "date", fsp: 3 })
+      .notNull()
+      .$defaultFn(() => new Date()),
   },
   (t) => [uniqueIndex("plans_account_code").on(t.accountId, t.planCode)],
 );
@@ -124,8 +149,12 @@ export const planRevisions = mysqlTable(
   "plan_revisions",
   {
     id: id(),
-    accountId: ref("account_id").notNull().references(() => accounts.id),
-    planId: ref("plan_id").notNull().references(() => plans.id),
+    accountId: ref("account_id")
+      .notNull()
+      .references(() => accounts.id),
+    planId: ref("plan_id")
+      .notNull()
+      .references(() => plans.id),
     number: int("number").notNull(),
     /** The plan library row as entered, by column key (lib/workbook/plan-columns.ts): text, formulas kept. */
     cells: json("cells"),
@@ -142,14 +171,19 @@ export const planRevisions = mysqlTable(
     createdByUserId: ref("created_by_user_id").references(() => users.id),
     createdAt: createdAt(),
   },
-  (t) => [uniqueIndex("plan_revisions_plan_number").on(t.planId, t.number), index("plan_revisions_account").on(t.accountId)],
+  (t) => [
+    uniqueIndex("plan_revisions_plan_number").on(t.planId, t.number),
+    index("plan_revisions_account").on(t.accountId),
+  ],
 );
 
 export const communities = mysqlTable(
   "communities",
   {
     id: id(),
-    accountId: ref("account_id").notNull().references(() => accounts.id),
+    accountId: ref("account_id")
+      .notNull()
+      .references(() => accounts.id),
     name: varchar("name", { length: 160 }).notNull(),
     locality: varchar("locality", { length: 160 }).notNull().default(""),
     /** The engine's SiteConditions (location and design conditions). */
@@ -164,7 +198,9 @@ export const equipmentSystems = mysqlTable(
   "equipment_systems",
   {
     id: id(),
-    accountId: ref("account_id").notNull().references(() => accounts.id),
+    accountId: ref("account_id")
+      .notNull()
+      .references(() => accounts.id),
     systemCode: varchar("system_code", { length: 60 }).notNull(),
     systemType: mysqlEnum("system_type", SYSTEM_TYPES).notNull(),
     outdoorModel: varchar("outdoor_model", { length: 80 }).notNull().default(""),
@@ -191,8 +227,12 @@ export const lots = mysqlTable(
   "lots",
   {
     id: id(),
-    accountId: ref("account_id").notNull().references(() => accounts.id),
-    communityId: ref("community_id").notNull().references(() => communities.id),
+    accountId: ref("account_id")
+      .notNull()
+      .references(() => accounts.id),
+    communityId: ref("community_id")
+      .notNull()
+      .references(() => communities.id),
     lotNumber: varchar("lot_number", { length: 40 }).notNull(),
     address: varchar("address", { length: 200 }).notNull().default(""),
     planId: ref("plan_id").references(() => plans.id),
@@ -226,8 +266,12 @@ export const imports = mysqlTable(
   "imports",
   {
     id: id(),
-    accountId: ref("account_id").notNull().references(() => accounts.id),
-    userId: ref("user_id").notNull().references(() => users.id),
+    accountId: ref("account_id")
+      .notNull()
+      .references(() => accounts.id),
+    userId: ref("user_id")
+      .notNull()
+      .references(() => users.id),
     kind: mysqlEnum("kind", IMPORT_KINDS).notNull(),
     communityId: ref("community_id").references(() => communities.id),
     fileName: varchar("file_name", { length: 255 }).notNull(),
@@ -257,7 +301,9 @@ export const packets = mysqlTable(
   "packets",
   {
     id: id(),
-    accountId: ref("account_id").notNull().references(() => accounts.id),
+    accountId: ref("account_id")
+      .notNull()
+      .references(() => accounts.id),
     communityId: ref("community_id").references(() => communities.id),
     kind: mysqlEnum("kind", ["permit-packet", "equipment-schedule", "permit-schedule"]).notNull(),
     state: mysqlEnum("state", PACKET_STATES).notNull().default("ready"),
@@ -275,7 +321,9 @@ export const packets = mysqlTable(
     sentAt: datetime("sent_at", { mode: "date", fsp: 3 }),
     /** Why it failed, in words for the user. */
     error: text("error"),
-    createdByUserId: ref("created_by_user_id").notNull().references(() => users.id),
+    createdByUserId: ref("created_by_user_id")
+      .notNull()
+      .references(() => users.id),
     createdAt: createdAt(),
     finishedAt: datetime("finished_at", { mode: "date", fsp: 3 }),
   },
@@ -286,7 +334,9 @@ export const auditLog = mysqlTable(
   "audit_log",
   {
     id: id(),
-    accountId: ref("account_id").notNull().references(() => accounts.id),
+    accountId: ref("account_id")
+      .notNull()
+      .references(() => accounts.id),
     userId: ref("user_id").references(() => users.id),
     action: varchar("action", { length: 60 }).notNull(),
     entityType: varchar("entity_type", { length: 40 }).notNull(),
@@ -296,7 +346,10 @@ export const auditLog = mysqlTable(
     after: json("after"),
     createdAt: createdAt(),
   },
-  (t) => [index("audit_account_time").on(t.accountId, t.createdAt), index("audit_entity").on(t.entityType, t.entityId)],
+  (t) => [
+    index("audit_account_time").on(t.accountId, t.createdAt),
+    index("audit_entity").on(t.entityType, t.entityId),
+  ],
 );
 
 export const accountsRelations = relations(accounts, ({ many }) => ({

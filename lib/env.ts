@@ -15,7 +15,12 @@ const envSchema = z.object({
    * Reverse proxies in front of the app that append to X-Forwarded-For (lib/http/client-address.ts).
    * 0: the client's address is the socket's and X-Forwarded-For is ignored.
    */
-  PLATLOAD_TRUSTED_PROXIES: z.coerce.number().int("PLATLOAD_TRUSTED_PROXIES must be a whole number").min(0).max(10).default(0),
+  PLATLOAD_TRUSTED_PROXIES: z.coerce
+    .number()
+    .int("PLATLOAD_TRUSTED_PROXIES must be a whole number")
+    .min(0)
+    .max(10)
+    .default(0),
   NEXTAUTH_URL: z.string().url().optional(),
   /** Object storage (S3 API): a local fake in development and tests, a real bucket in production. */
   S3_ENDPOINT: z.string().url().optional(),
@@ -25,13 +30,24 @@ const envSchema = z.object({
   S3_SECRET_ACCESS_KEY: z.string().default("S3RVER"),
   S3_FORCE_PATH_STYLE: z.enum(["true", "false"]).default("true"),
   /** Largest upload accepted by every importer, bytes (enforced while the upload streams in). */
-  PLATLOAD_MAX_UPLOAD_BYTES: z.coerce.number().int().positive().default(20 * 1024 * 1024),
+  PLATLOAD_MAX_UPLOAD_BYTES: z.coerce
+    .number()
+    .int()
+    .positive()
+    .default(20 * 1024 * 1024),
   /** Largest JSON (or form) body any route reads, bytes. */
-  PLATLOAD_MAX_JSON_BYTES: z.coerce.number().int().positive().default(1024 * 1024),
+  PLATLOAD_MAX_JSON_BYTES: z.coerce
+    .number()
+    .int()
+    .positive()
+    .default(1024 * 1024),
   /** The job queue's Redis (BullMQ): imports, permit packets and e-mail run as durable jobs. */
   REDIS_URL: z.string().regex(/^rediss?:\/\/[^\s]+$/, "REDIS_URL must be a redis:// (or rediss://) URL"),
   /** Key prefix of the job queue in Redis; two deployments may share one Redis under different prefixes. */
-  PLATLOAD_QUEUE_PREFIX: z.string().regex(/^[A-Za-z0-9_-]{1,40}$/, "PLATLOAD_QUEUE_PREFIX must be 1-40 letters, digits, - or _").default("platload"),
+  PLATLOAD_QUEUE_PREFIX: z
+    .string()
+    .regex(/^[A-Za-z0-9_-]{1,40}$/, "PLATLOAD_QUEUE_PREFIX must be 1-40 letters, digits, - or _")
+    .default("platload"),
   /** Jobs one worker process runs at once. */
   PLATLOAD_WORKER_CONCURRENCY: z.coerce.number().int().min(1).max(16).default(2),
   /**

@@ -44,7 +44,9 @@ export class AppError extends Error {
   }
 
   toBody(): ErrorBody {
-    const fields = this.fieldErrors ? { fieldErrors: this.fieldErrors.slice(0, MAX_FIELD_ERRORS), fieldErrorCount: this.fieldErrors.length } : {};
+    const fields = this.fieldErrors
+      ? { fieldErrors: this.fieldErrors.slice(0, MAX_FIELD_ERRORS), fieldErrorCount: this.fieldErrors.length }
+      : {};
     return { error: { code: this.code, message: this.message, ...fields } };
   }
 }

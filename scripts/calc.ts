@@ -25,9 +25,21 @@
 import { readFile } from "node:fs/promises";
 import path from "node:path";
 import { LoadInputError } from "../lib/load/errors";
-import { computePlanFacings, DEFAULT_LOAD_PROCEDURE, ENGINE_VERSION, LOAD_PROCEDURE_LABELS, LOAD_PROCEDURES, type LoadProcedure } from "../lib/load/index";
+import {
+  computePlanFacings,
+  DEFAULT_LOAD_PROCEDURE,
+  ENGINE_VERSION,
+  LOAD_PROCEDURE_LABELS,
+  LOAD_PROCEDURES,
+  type LoadProcedure,
+} from "../lib/load/index";
 import { PROCEDURE_STATEMENTS } from "../lib/reports/procedure-text";
-import { safeParsePlanInput, safeParseSiteConditions, type PlanInput, type SiteConditions } from "../lib/load/input";
+import {
+  safeParsePlanInput,
+  safeParseSiteConditions,
+  type PlanInput,
+  type SiteConditions,
+} from "../lib/load/input";
 import { formatTableErrors } from "../lib/workbook/columns";
 import { airLeakageText, planAssemblies } from "../lib/workbook/plan-assemblies";
 import { columnForEnginePath, validatePlanTable } from "../lib/workbook/plan-columns";
@@ -48,7 +60,11 @@ FILE: a plan library .csv or .xlsx (layout of templates/) or a .json plan input 
 /** Bad input: the message is printed as is and the exit code is 2. */
 class InputProblem extends Error {}
 
-type SiteFlag = { flag: string; field: keyof SiteConditions; kind: "temperatureF" | "temperatureDifferenceF" | "degrees" | "lengthFt" | "count" | "percent" };
+type SiteFlag = {
+  flag: string;
+  field: keyof SiteConditions;
+  kind: "temperatureF" | "temperatureDifferenceF" | "degrees" | "lengthFt" | "count" | "percent";
+};
 
 const SITE_FLAGS: readonly SiteFlag[] = [
   { flag: "--heating-db", field: "heatingOutdoorDbF", kind: "temperatureF" },
@@ -85,11 +101,15 @@ function parseArgs(argv: readonly string[]): Options {
       continue;
     }
     if (arg === "--help" || arg === "-h") throw new InputProblem(USAGE);
-    const [name, inlineValue] = arg.startsWith("--") && arg.includes("=") ? [arg.slice(0, arg.indexOf("=")), arg.slice(arg.indexOf("=") + 1)] : [arg, undefined];
+    const [name, inlineValue] =
+      arg.startsWith("--") && arg.includes("=")
+        ? [arg.slice(0, arg.indexOf("=")), arg.slice(arg.indexOf("=") + 1)]
+        : [arg, undefined];
     const takeValue = (): string => {
       if (inlineValue !== undefined) return inlineValue;
       const next = argv[index + 1];
-      if (next === undefined || (next.startsWith("--") && !/^--?\d/.test(next))) throw new InputProblem(`${name} needs a value\n${USAGE}`);
+      if (next === undefined || (next.startsWith("--") && !/^--?\d/.test(next)))
+        throw new InputProblem(`${name} needs a value\n${USAGE}`);
       index += 1;
       return next;
     };
@@ -100,7 +120,10 @@ function parseArgs(argv: readonly string[]): Options {
     if (name === "--procedure") {
       const text = takeValue();
       const known = LOAD_PROCEDURES.find((candidate) => candidate === text);
-      if (!known) throw new InputProblem(`--procedure ${text}: not a load procedure; use ${LOAD_PROCEDURES.join(" or ")}\n${USAGE}`);
+      if (!known)
+        throw new InputProblem(
+          `--procedure ${text}: not a load procedure; use ${LOAD_PROCEDURES.join(" or ")}\n${USAGE}`,
+        );
       procedure = known;
       continue;
     }
@@ -125,12 +148,16 @@ async function readJsonFile(filePath: string, what: string): Promise<unknown> {
   try {
     text = await readFile(filePath, "utf8");
   } catch (error) {
-    throw new InputProblem(`cannot read ${what} ${filePath}: ${error instanceof Error ? error.message : String(error)}`);
+    throw new InputProblem(
+      `cannot read ${what} ${filePath}: ${error instanceof Error ? error.message : String(error)}`,
+    );
   }
   try {
     return JSON.parse(text) as unknown;
   } catch (error) {
-    throw new InputProblem(`${what} ${filePath} is not valid JSON: ${error instanceof Error ? error.message : String(error)}`);
+    throw new InputProblem(
+      `${what} ${filePath} is not valid JSON: ${error instanceof Error ? error.message : String(error)}`,
+    );
   }
 }
 
@@ -144,7 +171,9 @@ async function loadSite(options: Options): Promise<{ site: SiteConditions; notes
     }
     raw = { ...(fromFile as Record<string, unknown>) };
   } else if (options.siteFlags.size === 0) {
-    throw new InputProblem(`design conditions are needed: --site site.json or the flags --heating-db, --cooling-db, --cooling-wb, --daily-range, --latitude, --elevation\n${USAGE}`);
+    throw new InputProblem(
+      `design conditions are needed: --site site.json or the flags --heating-db, --cooling-db, --cooling-wb, --daily-range, --latitude, --elevation\n${USAGE}`,
+    );
   }
   for (const [flag, value] of options.siteFlags) raw[flag.field] = value;
   if (raw.longitudeDeg === undefined && !options.sitePath) {
@@ -156,7 +185,8 @@ async function loadSite(options: Options): Promise<{ site: SiteConditions; notes
   if (!parsed.ok) {
     const byField = new Map(SITE_FLAGS.map((flag) => [flag.field as string, flag.flag]));
     const lines = parsed.issues.map((issue) => {
-      const source = options.siteFlags.size > 0 && byField.has(issue.field) ? `${byField.get(issue.field)} / ` : "";
+      const source =
+        options.siteFlags.size > 0 && byField.has(issue.field) ? `${byField.get(issue.field)} / ` : "";
       return `design conditions, ${source}${issue.field}: ${issue.message}`;
     });
     throw new InputProblem(lines.join("\n"));
@@ -179,14 +209,19 @@ async function loadPlans(filePath: string): Promise<NamedPlan[]> {
     const list: unknown[] = Array.isArray(raw)
       ? raw
       : typeof raw === "object" && raw !== null && Array.isArray((raw as { plans?: unknown }).plans)
-        ? ((raw as { plans: unknown[] }).plans)
+        ? (raw as { plans: unknown[] }).plans
         : [raw];
     const problems: string[] = [];
     const plans: NamedPlan[] = [];
     list.forEach((item, index) => {
       // planCode is this command's own label beside the engine's (strict) plan input.
-      const { planCode, ...planFields } = typeof item === "object" && item !== null && !Array.isArray(item) ? (item as Record<string, unknown>) : { planCode: undefined };
-      const parsed = safeParsePlanInput(typeof item === "object" && item !== null && !Array.isArray(item) ? planFields : item);
+      const { planCode, ...planFields } =
+        typeof item === "object" && item !== null && !Array.isArray(item)
+          ? (item as Record<string, unknown>)
+          : { planCode: undefined };
+      const parsed = safeParsePlanInput(
+        typeof item === "object" && item !== null && !Array.isArray(item) ? planFields : item,
+      );
       const label = `plan ${index + 1}`;
       if (!parsed.ok) {
         for (const issue of parsed.issues) problems.push(`${label}, field ${issue.field}: ${issue.message}`);
@@ -195,7 +230,10 @@ async function loadPlans(filePath: string): Promise<NamedPlan[]> {
       const code = typeof planCode === "string" ? planCode : `plan-${index + 1}`;
       plans.push({ planCode: code, planName: parsed.value.name ?? code, input: parsed.value, source: label });
     });
-    if (problems.length > 0) throw new InputProblem(`${filePath}: ${problems.length} bad field(s); nothing was calculated\n${problems.join("\n")}`);
+    if (problems.length > 0)
+      throw new InputProblem(
+        `${filePath}: ${problems.length} bad field(s); nothing was calculated\n${problems.join("\n")}`,
+      );
     if (plans.length === 0) throw new InputProblem(`${filePath}: no plans in the file`);
     return plans;
   }
@@ -203,7 +241,9 @@ async function loadPlans(filePath: string): Promise<NamedPlan[]> {
   try {
     bytes = new Uint8Array(await readFile(filePath));
   } catch (error) {
-    throw new InputProblem(`cannot read ${filePath}: ${error instanceof Error ? error.message : String(error)}`);
+    throw new InputProblem(
+      `cannot read ${filePath}: ${error instanceof Error ? error.message : String(error)}`,
+    );
   }
   let table;
   try {
@@ -214,9 +254,16 @@ async function loadPlans(filePath: string): Promise<NamedPlan[]> {
   }
   const result = validatePlanTable(table);
   if (!result.ok) {
-    throw new InputProblem(`${filePath}: ${result.errors.length} bad cell(s); nothing was calculated\n${formatTableErrors(result.errors)}`);
+    throw new InputProblem(
+      `${filePath}: ${result.errors.length} bad cell(s); nothing was calculated\n${formatTableErrors(result.errors)}`,
+    );
   }
-  return result.plans.map(({ planCode, planName, input, rowNumber }) => ({ planCode, planName, input, source: `row ${rowNumber}` }));
+  return result.plans.map(({ planCode, planName, input, rowNumber }) => ({
+    planCode,
+    planName,
+    input,
+    source: `row ${rowNumber}`,
+  }));
 }
 
 const integer = new Intl.NumberFormat("en-US", { maximumFractionDigits: 0 });
@@ -225,12 +272,23 @@ const twoDecimals = new Intl.NumberFormat("en-US", { minimumFractionDigits: 2, m
 
 /** Columns right-aligned except the first; widths fitted to the longest cell. */
 function alignTable(header: readonly string[], rows: readonly (readonly string[])[]): string[] {
-  const widths = header.map((title, column) => Math.max(title.length, ...rows.map((row) => row[column].length)));
-  const line = (cells: readonly string[]) => cells.map((cell, column) => (column === 0 ? cell.padEnd(widths[column]) : cell.padStart(widths[column]))).join("  ");
+  const widths = header.map((title, column) =>
+    Math.max(title.length, ...rows.map((row) => row[column].length)),
+  );
+  const line = (cells: readonly string[]) =>
+    cells
+      .map((cell, column) => (column === 0 ? cell.padEnd(widths[column]) : cell.padStart(widths[column])))
+      .join("  ");
   return [line(header), widths.map((width) => "-".repeat(width)).join("  "), ...rows.map(line)];
 }
 
-function printTable(plans: readonly NamedPlan[], results: readonly ReturnType<typeof computePlanFacings>[], site: SiteConditions, notes: readonly string[], procedure: LoadProcedure): void {
+function printTable(
+  plans: readonly NamedPlan[],
+  results: readonly ReturnType<typeof computePlanFacings>[],
+  site: SiteConditions,
+  notes: readonly string[],
+  procedure: LoadProcedure,
+): void {
   const out: string[] = [];
   out.push(`Load procedure: ${PROCEDURE_STATEMENTS[procedure]}`);
   out.push(
@@ -256,9 +314,23 @@ function printTable(plans: readonly NamedPlan[], results: readonly ReturnType<ty
       integer.format(facing.cooling.floorAreaPerTonFt2),
     ]);
     out.push(
-      ...alignTable(["Facing", "Heating Btu/h", "Cool sens. Btu/h", "Cool lat. Btu/h", "Cool total Btu/h", "Tons", "ft²/ton"], rows).map((line) => `  ${line}`),
+      ...alignTable(
+        [
+          "Facing",
+          "Heating Btu/h",
+          "Cool sens. Btu/h",
+          "Cool lat. Btu/h",
+          "Cool total Btu/h",
+          "Tons",
+          "ft²/ton",
+        ],
+        rows,
+      ).map((line) => `  ${line}`),
     );
-    const spreadPct = result.worst.coolingTotalBtuh > 0 ? (100 * result.coolingSpreadBtuh) / result.worst.coolingTotalBtuh : 0;
+    const spreadPct =
+      result.worst.coolingTotalBtuh > 0
+        ? (100 * result.coolingSpreadBtuh) / result.worst.coolingTotalBtuh
+        : 0;
     out.push(
       `  Worst facing: front ${result.worst.label} (cooling total ${integer.format(result.worst.coolingTotalBtuh)} Btu/h); ` +
         `spread between facings ${integer.format(result.coolingSpreadBtuh)} Btu/h (${oneDecimal.format(spreadPct)} % of the worst)`,
@@ -269,7 +341,9 @@ function printTable(plans: readonly NamedPlan[], results: readonly ReturnType<ty
       const from = a.source === "direct" ? a.description : `from ${a.description}`;
       return `${a.name} ${a.heating.toFixed(3)} (${from}${a.notUsed ? `; entered but not used: ${a.notUsed}` : ""})`;
     });
-    out.push(`  Heating U-factors used (Btu/h·ft²·°F; slab edge F-factor, Btu/h·ft·°F): ${assemblies.join("; ")}`);
+    out.push(
+      `  Heating U-factors used (Btu/h·ft²·°F; slab edge F-factor, Btu/h·ft·°F): ${assemblies.join("; ")}`,
+    );
     // The engine's notes on assumed defaults, once per plan.
     const assumptions = [...new Set(result.facings.flatMap((facing) => facing.notes))];
     for (const note of assumptions) out.push(`  Assumed: ${note}`);
@@ -305,12 +379,16 @@ async function main(): Promise<number> {
       if (!(error instanceof LoadInputError)) throw error;
       for (const issue of error.issues) {
         const column = columnForEnginePath(issue.field);
-        refused.push(`${plan.source} (${plan.planCode})${column ? `, column "${column.header}"` : ""}, field ${issue.field}: ${issue.message}`);
+        refused.push(
+          `${plan.source} (${plan.planCode})${column ? `, column "${column.header}"` : ""}, field ${issue.field}: ${issue.message}`,
+        );
       }
     }
   }
   if (refused.length > 0) {
-    console.error(`${options.file}: the engine refused ${refused.length} input(s); nothing was printed\n${refused.join("\n")}`);
+    console.error(
+      `${options.file}: the engine refused ${refused.length} input(s); nothing was printed\n${refused.join("\n")}`,
+    );
     return 2;
   }
   if (options.json) {
@@ -321,7 +399,12 @@ async function main(): Promise<number> {
       caution: CAUTION,
       notes,
       site,
-      plans: plans.map((plan, index) => ({ planCode: plan.planCode, planName: plan.planName, input: plan.input, results: results[index] })),
+      plans: plans.map((plan, index) => ({
+        planCode: plan.planCode,
+        planName: plan.planName,
+        input: plan.input,
+        results: results[index],
+      })),
     };
     console.log(JSON.stringify(report, null, 2));
   } else {

@@ -12,7 +12,12 @@ import { formatTableErrors } from "../lib/workbook/columns";
 import { PLAN_COLUMNS, PLAN_HEADERS, validatePlanTable } from "../lib/workbook/plan-columns";
 import { equipmentTemplateFiles } from "../lib/workbook/equipment-columns";
 import { readCsv, writeCsv, writeXlsx } from "../lib/workbook/table-io";
-import { EXAMPLE_PLAN_ROWS, EXAMPLE_SITE, TEMPLATE_EXAMPLE_ROW, type ExampleRow } from "../lib/workbook/templates";
+import {
+  EXAMPLE_PLAN_ROWS,
+  EXAMPLE_SITE,
+  TEMPLATE_EXAMPLE_ROW,
+  type ExampleRow,
+} from "../lib/workbook/templates";
 import { renderTemplatesReadme } from "../lib/workbook/templates-readme";
 
 const templatesDir = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "..", "templates");
@@ -23,7 +28,8 @@ const TEMPLATE_TIMESTAMP = new Date(Date.UTC(2026, 0, 1));
 function toCells(rows: readonly ExampleRow[]): string[][] {
   for (const row of rows) {
     for (const key of Object.keys(row)) {
-      if (!PLAN_COLUMNS.some((column) => column.key === key)) throw new Error(`example row ${row.plan_code}: unknown column key ${key}`);
+      if (!PLAN_COLUMNS.some((column) => column.key === key))
+        throw new Error(`example row ${row.plan_code}: unknown column key ${key}`);
     }
   }
   return rows.map((row) => PLAN_COLUMNS.map((column) => row[column.key] ?? ""));
@@ -56,7 +62,9 @@ async function main(): Promise<void> {
     ["example-site.json", `${JSON.stringify(EXAMPLE_SITE, null, 2)}\n`],
     ["README.md", renderTemplatesReadme()],
     // The equipment catalog's template, example and column guide (lib/workbook/equipment-columns.ts).
-    ...(await equipmentTemplateFiles({ fixedTimestamp: TEMPLATE_TIMESTAMP })).map(({ name, content }): [string, string | Uint8Array] => [name, content]),
+    ...(await equipmentTemplateFiles({ fixedTimestamp: TEMPLATE_TIMESTAMP })).map(
+      ({ name, content }): [string, string | Uint8Array] => [name, content],
+    ),
   ];
   for (const [name, content] of files) {
     await writeFile(path.join(templatesDir, name), content);

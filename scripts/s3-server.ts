@@ -9,7 +9,13 @@ const directory = process.env.S3_FAKE_DIR ?? path.resolve(".data/s3-demo");
 const bucket = process.env.S3_BUCKET ?? "platload";
 mkdirSync(directory, { recursive: true });
 
-const server = new S3rver({ port, address: "127.0.0.1", silent: true, directory, configureBuckets: [{ name: bucket, configs: [] }] });
+const server = new S3rver({
+  port,
+  address: "127.0.0.1",
+  silent: true,
+  directory,
+  configureBuckets: [{ name: bucket, configs: [] }],
+});
 
 server
   .run()

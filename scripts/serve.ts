@@ -34,9 +34,12 @@ async function main() {
     void handle(request, response);
   });
   server.listen(port, hostname, () => {
-    console.log(`Platload ${dev ? "(development) " : ""}on http://${hostname}:${port}; ${trustedProxies} trusted prox${trustedProxies === 1 ? "y" : "ies"} in front`);
+    console.log(
+      `Platload ${dev ? "(development) " : ""}on http://${hostname}:${port}; ${trustedProxies} trusted prox${trustedProxies === 1 ? "y" : "ies"} in front`,
+    );
   });
-  for (const signal of ["SIGINT", "SIGTERM"] as const) process.on(signal, () => server.close(() => process.exit(0)));
+  for (const signal of ["SIGINT", "SIGTERM"] as const)
+    process.on(signal, () => server.close(() => process.exit(0)));
 }
 
 main().catch((error: unknown) => {

@@ -20,6 +20,8 @@ bash scripts/mail.sh start test
 bash scripts/s3.sh start test
 
 started=$(date +%s)
+echo "== format check (Prettier)"
+npx prettier --check . >/dev/null || { npx prettier --list-different .; echo "Run npm run format to fix."; exit 1; }
 echo "== type check"
 npx tsc --noEmit -p .
 echo "== unit and integration tests (Vitest)"

@@ -29,13 +29,21 @@ async function main() {
       sweep: () => sweep({ db, queue }),
     },
     onFinalFailure: async (name, payload, error) => {
-      if (name === "import") await markImportStopped(db, (payload as { importId: number }).importId, error.message);
-      if (name === "packet") await failPacket(db, (payload as { packetId: number }).packetId, `it could not be made: ${error.message}`);
+      if (name === "import")
+        await markImportStopped(db, (payload as { importId: number }).importId, error.message);
+      if (name === "packet")
+        await failPacket(
+          db,
+          (payload as { packetId: number }).packetId,
+          `it could not be made: ${error.message}`,
+        );
     },
   });
   worker.on("completed", (job) => console.log(`job ${job.id} (${job.name}) done`));
   await worker.waitUntilReady();
-  console.log(`platload worker ${process.pid} on queue prefix "${settings.PLATLOAD_QUEUE_PREFIX}", ${settings.PLATLOAD_WORKER_CONCURRENCY} at a time`);
+  console.log(
+    `platload worker ${process.pid} on queue prefix "${settings.PLATLOAD_QUEUE_PREFIX}", ${settings.PLATLOAD_WORKER_CONCURRENCY} at a time`,
+  );
 
   let stopping = false;
   const stop = async (signal: string) => {

@@ -19,7 +19,16 @@ export default defineConfig({
     trace: "off",
     launchOptions: {
       executablePath: "/usr/bin/chromium",
-      args: ["--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--disable-background-networking", "--disable-component-update", "--disable-sync", "--no-first-run"],
+      args: [
+        "--headless",
+        "--no-sandbox",
+        "--disable-gpu",
+        "--disable-quic",
+        "--disable-background-networking",
+        "--disable-component-update",
+        "--disable-sync",
+        "--no-first-run",
+      ],
     },
   },
   // The app and one job worker (imports, packets and e-mail run there), on the e2e database.
@@ -31,7 +40,11 @@ export default defineConfig({
       cwd: "..",
       reuseExistingServer: false,
       timeout: 120_000,
-      env: { ...serviceEnv(E2E_DATABASE, E2E_QUEUE_PREFIX), NEXTAUTH_URL: baseURL, NEXT_TELEMETRY_DISABLED: "1" },
+      env: {
+        ...serviceEnv(E2E_DATABASE, E2E_QUEUE_PREFIX),
+        NEXTAUTH_URL: baseURL,
+        NEXT_TELEMETRY_DISABLED: "1",
+      },
     },
     {
       command: "node_modules/.bin/tsx --conditions=react-server scripts/worker.ts",

@@ -25,7 +25,11 @@ export default defineConfig({
           testTimeout: 60_000,
           hookTimeout: 120_000,
           // A small upload limit (2 MB), so the limit tests send little.
-          env: { ...serviceEnv(INTEGRATION_DATABASE, INTEGRATION_QUEUE_PREFIX), NEXTAUTH_URL: "http://127.0.0.1:3720", PLATLOAD_MAX_UPLOAD_BYTES: String(2 * 1024 * 1024) },
+          env: {
+            ...serviceEnv(INTEGRATION_DATABASE, INTEGRATION_QUEUE_PREFIX),
+            NEXTAUTH_URL: "http://127.0.0.1:3720",
+            PLATLOAD_MAX_UPLOAD_BYTES: String(2 * 1024 * 1024),
+          },
         },
       },
     ],

@@ -8,7 +8,9 @@ export default function AuthLayout({ children }: { children: React.ReactNode }) 
           <Brand size={28} />
         </div>
         <div className="rounded-lg border border-zinc-200 bg-white p-6 shadow-sm">{children}</div>
-        <p className="mt-4 text-center text-xs text-zinc-500">Heating and cooling loads for every plan, facing and lot.</p>
+        <p className="mt-4 text-center text-xs text-zinc-500">
+          Heating and cooling loads for every plan, facing and lot.
+        </p>
       </div>
     </main>
   );

@@ -7,7 +7,10 @@ import { ROLE_LABELS } from "@/lib/auth/permissions";
 
 export default async function WorkbookLayout({ children }: { children: React.ReactNode }) {
   const { member, permissions, accountCount } = await getPageContext();
-  const items = NAV_ITEMS.filter((i) => permissions.includes(i.permission)).map(({ href, label }) => ({ href, label }));
+  const items = NAV_ITEMS.filter((i) => permissions.includes(i.permission)).map(({ href, label }) => ({
+    href,
+    label,
+  }));
   return (
     <div className="min-h-screen">
       <header className="border-b border-zinc-200 bg-white">

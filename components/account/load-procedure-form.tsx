@@ -17,7 +17,8 @@ interface ProcedureSetting {
 const EXPLANATIONS: Record<LoadProcedure, string> = {
   "residential-load-factor":
     "The peak load by the handbook's residential load-factor tables and equations. Gives the design peak only: no peak hour and no 24-hour profile. The default.",
-  hourly: "Every solar hour of the design day with heat storage in the walls, roof and furnishings; the peak is the largest hour. Gives the peak hour and the 24-hour profile.",
+  hourly:
+    "Every solar hour of the design day with heat storage in the walls, roof and furnishings; the peak is the largest hour. Gives the peak hour and the 24-hour profile.",
 };
 
 /**
@@ -26,19 +27,30 @@ const EXPLANATIONS: Record<LoadProcedure, string> = {
  */
 export function LoadProcedureForm({ canEdit }: { canEdit: boolean }) {
   const queryClient = useQueryClient();
-  const query = useQuery({ queryKey: ["load-procedure"], queryFn: () => api<ProcedureSetting>("/api/account/load-procedure") });
+  const query = useQuery({
+    queryKey: ["load-procedure"],
+    queryFn: () => api<ProcedureSetting>("/api/account/load-procedure"),
+  });
   const [picked, setPicked] = useState<LoadProcedure | null>(null);
   const [error, setError] = useState<ApiError | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
   const save = useMutation({
     mutationFn: (body: { procedure: LoadProcedure; from: LoadProcedure }) =>
-      api<{ procedure: LoadProcedure; changed: boolean; lotsRecomputed: number; lotsChanged: number }>("/api/account/load-procedure", { method: "PUT", body }),
+      api<{ procedure: LoadProcedure; changed: boolean; lotsRecomputed: number; lotsChanged: number }>(
+        "/api/account/load-procedure",
+        { method: "PUT", body },
+      ),
     onSuccess: (r) => {
       setError(null);
       setPicked(null);
-      setNotice(r.changed ? `Saved. ${r.lotsRecomputed} lots recomputed by the new procedure (${r.lotsChanged} with changed loads); lots frozen for permit keep their snapshot.` : "Nothing to change: that procedure is already in use.");
+      setNotice(
+        r.changed
+          ? `Saved. ${r.lotsRecomputed} lots recomputed by the new procedure (${r.lotsChanged} with changed loads); lots frozen for permit keep their snapshot.`
+          : "Nothing to change: that procedure is already in use.",
+      );
       // Every load on every page may have moved.
-      for (const key of ["load-procedure", "plans", "plan", "lots", "equipment-schedule"]) void queryClient.invalidateQueries({ queryKey: [key] });
+      for (const key of ["load-procedure", "plans", "plan", "lots", "equipment-schedule"])
+        void queryClient.invalidateQueries({ queryKey: [key] });
     },
     onError: (e: ApiError) => setError(e),
   });
@@ -49,12 +61,17 @@ export function LoadProcedureForm({ canEdit }: { canEdit: boolean }) {
   const currentLabel = query.data.choices.find((c) => c.procedure === current)?.label ?? current;
 
   return (
-    <section className="rounded border border-zinc-200 bg-white p-3" aria-labelledby="procedure-heading" data-testid="load-procedure">
+    <section
+      className="rounded border border-zinc-200 bg-white p-3"
+      aria-labelledby="procedure-heading"
+      data-testid="load-procedure"
+    >
       <h2 id="procedure-heading" className="mb-1 text-sm font-semibold">
         Load procedure
       </h2>
       <p className="mb-2 text-xs text-zinc-600">
-        The procedure that sizes equipment and goes on the permit papers: lots, the plan library, load reports and schedules use it. The plan sheet shows both procedures side by side.
+        The procedure that sizes equipment and goes on the permit papers: lots, the plan library, load reports
+        and schedules use it. The plan sheet shows both procedures side by side.
       </p>
       <p className="mb-2 text-sm" data-testid="procedure-in-use">
         In use: <span className="font-semibold">{currentLabel}</span>
@@ -67,7 +84,13 @@ export function LoadProcedureForm({ canEdit }: { canEdit: boolean }) {
             save.mutate({ procedure: chosen, from: current });
           }}
         >
-          <FormError message={error ? `${error.message}${error.fieldErrors.length > 0 ? ` ${error.fieldErrors.map((f) => `${f.field}: ${f.message}`).join("; ")}` : ""}` : null} />
+          <FormError
+            message={
+              error
+                ? `${error.message}${error.fieldErrors.length > 0 ? ` ${error.fieldErrors.map((f) => `${f.field}: ${f.message}`).join("; ")}` : ""}`
+                : null
+            }
+          />
           <fieldset className="mb-2">
             <legend className="mb-1 text-xs font-medium text-zinc-700">Choose the procedure</legend>
             {query.data.choices.map((c) => (
@@ -85,7 +108,9 @@ export function LoadProcedureForm({ canEdit }: { canEdit: boolean }) {
                 <div>
                   <label htmlFor={`procedure-${c.procedure}`} className="text-sm font-medium text-zinc-800">
                     {c.label}
-                    {c.procedure === current ? <span className="ml-1 text-xs font-normal text-zinc-600">(in use)</span> : null}
+                    {c.procedure === current ? (
+                      <span className="ml-1 text-xs font-normal text-zinc-600">(in use)</span>
+                    ) : null}
                   </label>
                   <p id={`procedure-${c.procedure}-help`} className="text-xs text-zinc-600">
                     {EXPLANATIONS[c.procedure]}
@@ -95,7 +120,11 @@ export function LoadProcedureForm({ canEdit }: { canEdit: boolean }) {
             ))}
           </fieldset>
           <p className="mb-2 text-xs text-zinc-600">
-            Saving recomputes every lot of the account by the chosen procedure and reselects its equipment, in one step with one history entry. {query.data.frozenLots > 0 ? `The ${query.data.frozenLots} lots frozen for permit keep the procedure and loads of their snapshot.` : "Lots frozen for permit would keep their snapshot."}
+            Saving recomputes every lot of the account by the chosen procedure and reselects its equipment, in
+            one step with one history entry.{" "}
+            {query.data.frozenLots > 0
+              ? `The ${query.data.frozenLots} lots frozen for permit keep the procedure and loads of their snapshot.`
+              : "Lots frozen for permit would keep their snapshot."}
           </p>
           <Button type="submit" disabled={save.isPending || chosen === current}>
             {save.isPending ? "Recomputing lots…" : "Use this procedure and recompute lots"}

@@ -24,7 +24,13 @@ const FIELDS: { key: string; label: string; step?: string; optional?: boolean; h
   { key: "indoorCoolingRhPct", label: "Indoor cooling RH (%)" },
 ];
 
-export const DEFAULT_CONDITIONS: Conditions = { designMonth: 7, groundReflectance: 0.2, indoorHeatingF: 70, indoorCoolingF: 75, indoorCoolingRhPct: 50 };
+export const DEFAULT_CONDITIONS: Conditions = {
+  designMonth: 7,
+  groundReflectance: 0.2,
+  indoorHeatingF: 70,
+  indoorCoolingF: 75,
+  indoorCoolingRhPct: 50,
+};
 
 /**
  * Name, location and design conditions of a community. A preset only fills the fields (marked
@@ -49,16 +55,27 @@ export function ConditionsForm({
 }) {
   const [name, setName] = useState(initial.name);
   const [locality, setLocality] = useState(initial.locality);
-  const [values, setValues] = useState<Record<string, string>>(() => Object.fromEntries(FIELDS.map((f) => [f.key, initial.conditions[f.key] === undefined ? "" : String(initial.conditions[f.key])])));
+  const [values, setValues] = useState<Record<string, string>>(() =>
+    Object.fromEntries(
+      FIELDS.map((f) => [
+        f.key,
+        initial.conditions[f.key] === undefined ? "" : String(initial.conditions[f.key]),
+      ]),
+    ),
+  );
   const [presetId, setPresetId] = useState("");
   const [localError, setLocalError] = useState<string | null>(null);
-  const fieldError = (key: string) => error?.fieldErrors.find((f) => f.field === `conditions.${key}` || f.field === key)?.message;
+  const fieldError = (key: string) =>
+    error?.fieldErrors.find((f) => f.field === `conditions.${key}` || f.field === key)?.message;
 
   function applyPreset(id: string) {
     setPresetId(id);
     const preset = CLIMATE_PRESETS.find((p) => p.id === id);
     if (!preset) return;
-    setValues((v) => ({ ...v, ...Object.fromEntries(Object.entries(preset.conditions).map(([k, x]) => [k, String(x)])) }));
+    setValues((v) => ({
+      ...v,
+      ...Object.fromEntries(Object.entries(preset.conditions).map(([k, x]) => [k, String(x)])),
+    }));
   }
 
   function submit(event: React.FormEvent) {
@@ -87,13 +104,29 @@ export function ConditionsForm({
   const preset = CLIMATE_PRESETS.find((p) => p.id === presetId);
   return (
     <form onSubmit={submit} noValidate data-testid="conditions-form">
-      <FormError message={localError ?? (error && error.fieldErrors.length === 0 ? error.message : error ? "Some values are not valid; see the marked fields. Nothing was saved." : null)} testId="conditions-error" />
+      <FormError
+        message={
+          localError ??
+          (error && error.fieldErrors.length === 0
+            ? error.message
+            : error
+              ? "Some values are not valid; see the marked fields. Nothing was saved."
+              : null)
+        }
+        testId="conditions-error"
+      />
       {showPresets ? (
         <div className="mb-3">
           <label htmlFor="preset" className="mb-1 block text-xs font-medium text-zinc-700">
             Start from a climate preset
           </label>
-          <select id="preset" value={presetId} onChange={(e) => applyPreset(e.target.value)} className="w-full rounded border border-zinc-300 bg-white px-2 py-1.5" disabled={disabled}>
+          <select
+            id="preset"
+            value={presetId}
+            onChange={(e) => applyPreset(e.target.value)}
+            className="w-full rounded border border-zinc-300 bg-white px-2 py-1.5"
+            disabled={disabled}
+          >
             <option value="">None — enter the values yourself</option>
             {CLIMATE_PRESETS.map((p) => (
               <option key={p.id} value={p.id}>
@@ -102,7 +135,10 @@ export function ConditionsForm({
             ))}
           </select>
           {preset ? (
-            <p className="mt-1 rounded border border-amber-200 bg-caution-50 px-2 py-1 text-xs text-caution-800" data-testid="preset-caution">
+            <p
+              className="mt-1 rounded border border-amber-200 bg-caution-50 px-2 py-1 text-xs text-caution-800"
+              data-testid="preset-caution"
+            >
               {PRESET_CAUTION} Enter the values your jurisdiction requires before relying on the loads.
             </p>
           ) : null}
@@ -113,14 +149,26 @@ export function ConditionsForm({
           <label htmlFor="community-name" className="mb-1 block text-xs font-medium text-zinc-700">
             Community name
           </label>
-          <input id="community-name" value={name} onChange={(e) => setName(e.target.value)} disabled={disabled} className="w-full rounded border border-zinc-300 px-2 py-1.5" />
+          <input
+            id="community-name"
+            value={name}
+            onChange={(e) => setName(e.target.value)}
+            disabled={disabled}
+            className="w-full rounded border border-zinc-300 px-2 py-1.5"
+          />
           {fieldError("name") ? <p className="mt-1 text-xs text-red-700">{fieldError("name")}</p> : null}
         </div>
         <div>
           <label htmlFor="community-locality" className="mb-1 block text-xs font-medium text-zinc-700">
             Locality
           </label>
-          <input id="community-locality" value={locality} onChange={(e) => setLocality(e.target.value)} disabled={disabled} className="w-full rounded border border-zinc-300 px-2 py-1.5" />
+          <input
+            id="community-locality"
+            value={locality}
+            onChange={(e) => setLocality(e.target.value)}
+            disabled={disabled}
+            className="w-full rounded border border-zinc-300 px-2 py-1.5"
+          />
         </div>
       </div>
       <div className="mt-3 grid gap-3 sm:grid-cols-3 lg:grid-cols-4">

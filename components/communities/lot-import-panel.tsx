@@ -66,7 +66,8 @@ export function LotImportPanel({ communityId, onDone }: { communityId: number; o
     xhr.upload.onprogress = (e) => e.lengthComputable && setUploadPct(Math.round((100 * e.loaded) / e.total));
     xhr.onload = () => {
       setUploadPct(100);
-      const body = JSON.parse(xhr.responseText || "null") as (Partial<ErrorBody> & { importId?: number }) | null;
+      const body = JSON.parse(xhr.responseText || "null") as
+        (Partial<ErrorBody> & { importId?: number }) | null;
       if (xhr.status === 202 && body?.importId) setImportId(body.importId);
       else setError(body?.error?.message ?? `The server answered ${xhr.status}.`);
     };
@@ -74,31 +75,61 @@ export function LotImportPanel({ communityId, onDone }: { communityId: number; o
     xhr.send(form);
   }
 
-  const stageIndex = status ? Math.max(1, STAGES.findIndex((s) => s.key === status.state)) : uploadPct !== null ? 0 : -1;
-  const overall = status ? (status.state === "succeeded" || status.state === "failed" ? 100 : status.progressPct) : uploadPct !== null ? Math.round(uploadPct * 0.05) : 0;
+  const stageIndex = status
+    ? Math.max(
+        1,
+        STAGES.findIndex((s) => s.key === status.state),
+      )
+    : uploadPct !== null
+      ? 0
+      : -1;
+  const overall = status
+    ? status.state === "succeeded" || status.state === "failed"
+      ? 100
+      : status.progressPct
+    : uploadPct !== null
+      ? Math.round(uploadPct * 0.05)
+      : 0;
   const busy = uploadPct !== null && !error && status?.state !== "succeeded" && status?.state !== "failed";
 
   return (
-    <section className="rounded border border-zinc-200 bg-white p-3" aria-labelledby="lot-import-heading" data-testid="lot-import">
+    <section
+      className="rounded border border-zinc-200 bg-white p-3"
+      aria-labelledby="lot-import-heading"
+      data-testid="lot-import"
+    >
       <h2 id="lot-import-heading" className="mb-1 text-sm font-semibold">
         Import lots
       </h2>
       <p className="mb-2 text-xs text-zinc-600">
         CSV or XLSX with the columns Lot, Address, Plan code, Facing, Options note, Status, Planned start (
-        <a className="text-accent-700 hover:underline" href={`/api/communities/${communityId}/lots/template?format=xlsx`}>
+        <a
+          className="text-accent-700 hover:underline"
+          href={`/api/communities/${communityId}/lots/template?format=xlsx`}
+        >
           template XLSX
         </a>
         ,{" "}
-        <a className="text-accent-700 hover:underline" href={`/api/communities/${communityId}/lots/template?format=csv`}>
+        <a
+          className="text-accent-700 hover:underline"
+          href={`/api/communities/${communityId}/lots/template?format=csv`}
+        >
           CSV
         </a>
-        ). Lots are created or updated by lot number and every lot of the community is recomputed. The whole file is checked first; if any cell is wrong, nothing is written.
+        ). Lots are created or updated by lot number and every lot of the community is recomputed. The whole
+        file is checked first; if any cell is wrong, nothing is written.
       </p>
       <div className="flex items-center gap-2">
         <label htmlFor="lot-import-file" className="sr-only">
           Lots file
         </label>
-        <input id="lot-import-file" type="file" accept=".csv,.xlsx" className="text-xs" onChange={(e) => setFile(e.target.files?.[0] ?? null)} />
+        <input
+          id="lot-import-file"
+          type="file"
+          accept=".csv,.xlsx"
+          className="text-xs"
+          onChange={(e) => setFile(e.target.files?.[0] ?? null)}
+        />
         <Button type="button" onClick={upload} disabled={!file || busy}>
           Import
         </Button>
@@ -107,17 +138,40 @@ export function LotImportPanel({ communityId, onDone }: { communityId: number; o
         <div className="mt-3" data-testid="import-progress">
           <div className="mb-1 flex gap-4 text-xs">
             {STAGES.map((s, i) => (
-              <span key={s.key} className={i < stageIndex || status?.state === "succeeded" ? "text-accent-700" : i === stageIndex ? "font-semibold text-zinc-900" : "text-zinc-400"}>
+              <span
+                key={s.key}
+                className={
+                  i < stageIndex || status?.state === "succeeded"
+                    ? "text-accent-700"
+                    : i === stageIndex
+                      ? "font-semibold text-zinc-900"
+                      : "text-zinc-400"
+                }
+              >
                 {i + 1}. {s.label}
               </span>
             ))}
           </div>
-          <div className="h-2 w-full overflow-hidden rounded bg-zinc-200" role="progressbar" aria-label="Import progress" aria-valuenow={overall} aria-valuemin={0} aria-valuemax={100}>
-            <div className={`h-full ${status?.state === "failed" ? "bg-red-600" : "bg-accent-600"}`} style={{ width: `${overall}%` }} />
+          <div
+            className="h-2 w-full overflow-hidden rounded bg-zinc-200"
+            role="progressbar"
+            aria-label="Import progress"
+            aria-valuenow={overall}
+            aria-valuemin={0}
+            aria-valuemax={100}
+          >
+            <div
+              className={`h-full ${status?.state === "failed" ? "bg-red-600" : "bg-accent-600"}`}
+              style={{ width: `${overall}%` }}
+            />
           </div>
           {busy ? (
             <p className="mt-1 text-xs text-zinc-500">
-              You may leave this page; the import goes on and its result will be on the <Link href="/imports" className="text-accent-700 hover:underline">Imports</Link> page.
+              You may leave this page; the import goes on and its result will be on the{" "}
+              <Link href="/imports" className="text-accent-700 hover:underline">
+                Imports
+              </Link>{" "}
+              page.
             </p>
           ) : null}
         </div>
@@ -128,11 +182,21 @@ export function LotImportPanel({ communityId, onDone }: { communityId: number; o
         </p>
       ) : null}
       {error ? (
-        <p className="mt-2 rounded border border-red-200 bg-red-50 p-2 text-xs text-red-800" data-testid="lot-import-errors">
+        <p
+          className="mt-2 rounded border border-red-200 bg-red-50 p-2 text-xs text-red-800"
+          data-testid="lot-import-errors"
+        >
           {error}
         </p>
       ) : null}
-      {status?.state === "failed" ? <ImportErrors message={`${status.errorCount.toLocaleString("en-US")} problem(s) in the file; nothing was imported.`} errors={status.errors ?? []} total={status.errorCount} testId="lot-import-errors" /> : null}
+      {status?.state === "failed" ? (
+        <ImportErrors
+          message={`${status.errorCount.toLocaleString("en-US")} problem(s) in the file; nothing was imported.`}
+          errors={status.errors ?? []}
+          total={status.errorCount}
+          testId="lot-import-errors"
+        />
+      ) : null}
     </section>
   );
 }

@@ -12,7 +12,8 @@ export function NewCommunity() {
   const [open, setOpen] = useState(false);
   const [error, setError] = useState<ApiError | null>(null);
   const create = useMutation({
-    mutationFn: (body: { name: string; locality: string; conditions: Conditions }) => api<{ id: number }>("/api/communities", { method: "POST", body }),
+    mutationFn: (body: { name: string; locality: string; conditions: Conditions }) =>
+      api<{ id: number }>("/api/communities", { method: "POST", body }),
     onSuccess: ({ id }) => router.push(`/communities/${id}`),
     onError: (e: ApiError) => setError(e),
   });
@@ -28,7 +29,14 @@ export function NewCommunity() {
       <h2 id="new-community-heading" className="mb-3 text-sm font-semibold">
         New community
       </h2>
-      <ConditionsForm initial={{ name: "", locality: "", conditions: DEFAULT_CONDITIONS }} submitLabel="Create community" busy={create.isPending} error={error} onSubmit={(v) => create.mutate(v)} showPresets />
+      <ConditionsForm
+        initial={{ name: "", locality: "", conditions: DEFAULT_CONDITIONS }}
+        submitLabel="Create community"
+        busy={create.isPending}
+        error={error}
+        onSubmit={(v) => create.mutate(v)}
+        showPresets
+      />
     </section>
   );
 }

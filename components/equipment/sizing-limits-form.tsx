@@ -8,7 +8,10 @@ import { api, type ApiError } from "@/lib/client/api";
 const FIELDS = [
   { key: "coolingMinPct", label: "Cooling capacity at least (% of cooling total)" },
   { key: "coolingMaxPct", label: "Cooling capacity at most, air conditioners (%)" },
-  { key: "heatPumpCoolingMaxPct", label: "Cooling capacity at most, heat pumps where heating exceeds cooling (%)" },
+  {
+    key: "heatPumpCoolingMaxPct",
+    label: "Cooling capacity at most, heat pumps where heating exceeds cooling (%)",
+  },
   { key: "heatingMinPct", label: "Heating output at least (% of heating load)" },
   { key: "heatingMaxPct", label: "Furnace output at most (% of heating load)" },
 ] as const;
@@ -16,12 +19,16 @@ const FIELDS = [
 /** The account's equipment sizing limits: defaults (from memory and common practice); an admin may change them. */
 export function SizingLimitsForm({ canEdit }: { canEdit: boolean }) {
   const queryClient = useQueryClient();
-  const query = useQuery({ queryKey: ["sizing-limits"], queryFn: () => api<{ limits: Record<string, number>; custom: boolean }>("/api/account/sizing-limits") });
+  const query = useQuery({
+    queryKey: ["sizing-limits"],
+    queryFn: () => api<{ limits: Record<string, number>; custom: boolean }>("/api/account/sizing-limits"),
+  });
   const [values, setValues] = useState<Record<string, string> | null>(null);
   const [error, setError] = useState<ApiError | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
   const save = useMutation({
-    mutationFn: (limits: Record<string, number>) => api<{ lotsReselected: number }>("/api/account/sizing-limits", { method: "PUT", body: { limits } }),
+    mutationFn: (limits: Record<string, number>) =>
+      api<{ lotsReselected: number }>("/api/account/sizing-limits", { method: "PUT", body: { limits } }),
     onSuccess: (r) => {
       setError(null);
       setNotice(`Saved; ${r.lotsReselected} lots reselected with the new limits.`);
@@ -42,9 +49,16 @@ export function SizingLimitsForm({ canEdit }: { canEdit: boolean }) {
     >
       <h2 className="mb-1 text-sm font-semibold">Sizing limits</h2>
       <p className="mb-2 text-xs text-zinc-600">
-        A system fits when its capacities fall within these limits and its sensible and latent capacities cover the loads. {query.data.custom ? "Set for this account." : "Approximate defaults — verify locally."} Reports state the limits they used.
+        A system fits when its capacities fall within these limits and its sensible and latent capacities
+        cover the loads.{" "}
+        {query.data.custom ? "Set for this account." : "Approximate defaults — verify locally."} Reports state
+        the limits they used.
       </p>
-      {error ? <p className="mb-2 rounded border border-red-200 bg-red-50 px-2 py-1 text-xs text-red-800">{error.message} {error.fieldErrors.map((f) => `${f.field}: ${f.message}`).join("; ")}</p> : null}
+      {error ? (
+        <p className="mb-2 rounded border border-red-200 bg-red-50 px-2 py-1 text-xs text-red-800">
+          {error.message} {error.fieldErrors.map((f) => `${f.field}: ${f.message}`).join("; ")}
+        </p>
+      ) : null}
       {notice ? <p className="mb-2 text-xs text-accent-800">{notice}</p> : null}
       <div className="grid gap-2 sm:grid-cols-2 lg:grid-cols-5">
         {FIELDS.map((f) => (
@@ -52,7 +66,14 @@ export function SizingLimitsForm({ canEdit }: { canEdit: boolean }) {
             <label htmlFor={`limit-${f.key}`} className="mb-1 block text-xs text-zinc-700">
               {f.label}
             </label>
-            <input id={`limit-${f.key}`} className="num w-full rounded border border-zinc-300 px-2 py-1" value={shown[f.key]} disabled={!canEdit} inputMode="decimal" onChange={(e) => setValues({ ...shown, [f.key]: e.target.value })} />
+            <input
+              id={`limit-${f.key}`}
+              className="num w-full rounded border border-zinc-300 px-2 py-1"
+              value={shown[f.key]}
+              disabled={!canEdit}
+              inputMode="decimal"
+              onChange={(e) => setValues({ ...shown, [f.key]: e.target.value })}
+            />
           </div>
         ))}
       </div>

@@ -18,6 +18,9 @@ export const gridTheme = themeQuartz.withParams({
   wrapperBorderRadius: 4,
 });
 
-export const fmtInt = (v: number | null | undefined) => (v === null || v === undefined || !Number.isFinite(v) ? "" : Math.round(v).toLocaleString("en-US"));
+export const fmtInt = (v: number | null | undefined) =>
+  v === null || v === undefined || !Number.isFinite(v) ? "" : Math.round(v).toLocaleString("en-US");
 export const fmtNum = (v: number | null | undefined, digits = 2) =>
-  v === null || v === undefined || !Number.isFinite(v) ? "" : v.toLocaleString("en-US", { maximumFractionDigits: digits, minimumFractionDigits: 0 });
+  v === null || v === undefined || !Number.isFinite(v)
+    ? ""
+    : v.toLocaleString("en-US", { maximumFractionDigits: digits, minimumFractionDigits: 0 });

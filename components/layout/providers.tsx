@@ -11,7 +11,12 @@ import { z } from "zod";
 z.config({ jitless: true });
 
 export function Providers({ children }: { children: React.ReactNode }) {
-  const [client] = useState(() => new QueryClient({ defaultOptions: { queries: { staleTime: 15_000, retry: 1, refetchOnWindowFocus: false } } }));
+  const [client] = useState(
+    () =>
+      new QueryClient({
+        defaultOptions: { queries: { staleTime: 15_000, retry: 1, refetchOnWindowFocus: false } },
+      }),
+  );
   return (
     <SessionProvider>
       <QueryClientProvider client={client}>{children}</QueryClientProvider>

@@ -16,12 +16,17 @@ export function PlanAssemblies({ cells }: { cells: PlanRowCells }) {
   if (!row.ok) return null;
   const assemblies = planAssemblies(row.input);
   return (
-    <section className="rounded border border-zinc-200 bg-white p-3" aria-labelledby="assemblies-heading" data-testid="plan-assemblies">
+    <section
+      className="rounded border border-zinc-200 bg-white p-3"
+      aria-labelledby="assemblies-heading"
+      data-testid="plan-assemblies"
+    >
       <h2 id="assemblies-heading" className="mb-1 text-sm font-semibold">
         Assemblies and the U-factors used
       </h2>
       <p className="mb-2 text-xs text-zinc-500">
-        A direct U-factor (or slab F-factor) entered for the plan replaces the base assembly and added insulation in both seasons. Air leakage as entered:{" "}
+        A direct U-factor (or slab F-factor) entered for the plan replaces the base assembly and added
+        insulation in both seasons. Air leakage as entered:{" "}
         <span className="font-medium text-zinc-700" data-testid="air-leakage-used">
           {airLeakageText(row.input)}
         </span>
@@ -41,12 +46,25 @@ export function PlanAssemblies({ cells }: { cells: PlanRowCells }) {
         </thead>
         <tbody>
           {assemblies.map((a) => (
-            <tr key={`${a.name}-${a.directKey}`} className="border-t border-zinc-100" data-testid={`assembly-${a.directKey}`} data-source={a.source}>
+            <tr
+              key={`${a.name}-${a.directKey}`}
+              className="border-t border-zinc-100"
+              data-testid={`assembly-${a.directKey}`}
+              data-source={a.source}
+            >
               <td className="px-2 py-1">{a.name}</td>
               <td className="px-2 py-1 text-zinc-600">{a.appliesTo}</td>
               <td className="px-2 py-1">
-                {a.source === "direct" ? <span className="rounded bg-accent-50 px-1 font-medium text-accent-800">direct {a.unit.includes("ft²") ? "U-factor" : "F-factor"}</span> : "base assembly + added insulation"}
-                {a.notUsed ? <span className="ml-1 text-red-700">— entered but not used: {a.notUsed}</span> : null}
+                {a.source === "direct" ? (
+                  <span className="rounded bg-accent-50 px-1 font-medium text-accent-800">
+                    direct {a.unit.includes("ft²") ? "U-factor" : "F-factor"}
+                  </span>
+                ) : (
+                  "base assembly + added insulation"
+                )}
+                {a.notUsed ? (
+                  <span className="ml-1 text-red-700">— entered but not used: {a.notUsed}</span>
+                ) : null}
               </td>
               <td className="px-2 py-1 text-zinc-600">{a.description}</td>
               <td className="num px-2 py-1">{fmtU(a.heating)}</td>

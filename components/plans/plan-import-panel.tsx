@@ -11,7 +11,9 @@ export function PlanImportPanel({ onImported }: { onImported: () => void }) {
       endpoint="/api/plans/import"
       inputId="plan-import-file"
       testId="plan-import"
-      describeResult={(r) => `Imported: ${r.createdCount} created, ${r.updatedCount} updated. The import is listed on the Imports page.`}
+      describeResult={(r) =>
+        `Imported: ${r.createdCount} created, ${r.updatedCount} updated. The import is listed on the Imports page.`
+      }
       onImported={onImported}
     />
   );

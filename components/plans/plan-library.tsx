@@ -1,7 +1,16 @@
 "use client";
 
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import type { CellKeyDownEvent, ColDef, ColGroupDef, GridApi, GridReadyEvent, ValueFormatterParams, ValueGetterParams, ValueSetterParams } from "ag-grid-community";
+import type {
+  CellKeyDownEvent,
+  ColDef,
+  ColGroupDef,
+  GridApi,
+  GridReadyEvent,
+  ValueFormatterParams,
+  ValueGetterParams,
+  ValueSetterParams,
+} from "ag-grid-community";
 import { AgGridReact } from "ag-grid-react";
 import Link from "next/link";
 import { useCallback, useMemo, useRef, useState } from "react";
@@ -15,12 +24,18 @@ import type { FacingSummary } from "@/db/queries/plans";
 import { api, ApiError } from "@/lib/client/api";
 import { isFormula } from "@/lib/workbook/formula";
 import { readRowCells } from "@/lib/workbook/columns";
-import { AIR_LEAKAGE_KEYS, PLAN_COLUMN_BY_KEY, PLAN_COLUMN_GROUPS, PLAN_COLUMNS, withOneAirLeakageFigure, type PlanColumnDef } from "@/lib/workbook/plan-columns";
+import {
+  AIR_LEAKAGE_KEYS,
+  PLAN_COLUMN_BY_KEY,
+  PLAN_COLUMN_GROUPS,
+  PLAN_COLUMNS,
+  withOneAirLeakageFigure,
+  type PlanColumnDef,
+} from "@/lib/workbook/plan-columns";
 import { parsePastedBlock, placePastedBlock } from "@/lib/workbook/table-io";
 import { PlanImportPanel } from "./plan-import-panel";
 
 type Cells = Record<string, string | number | boolean | null>;
-
 
 export interface LibraryPlan {
   id: number;
@@ -66,20 +81,30 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
   const queryClient = useQueryClient();
   const [communityId, setCommunityId] = useState<number | null>(null);
   const queryKey = useMemo(() => ["plans", communityId ?? "default"], [communityId]);
-  const library = useQuery({ queryKey, queryFn: () => api<Library>(`/api/plans${communityId ? `?communityId=${communityId}` : ""}`) });
+  const library = useQuery({
+    queryKey,
+    queryFn: () => api<Library>(`/api/plans${communityId ? `?communityId=${communityId}` : ""}`),
+  });
   const gridApi = useRef<GridApi<LibraryPlan> | null>(null);
-  const [banner, setBanner] = useState<{ kind: "error" | "info"; text: string; details?: string[] } | null>(null);
+  const [banner, setBanner] = useState<{ kind: "error" | "info"; text: string; details?: string[] } | null>(
+    null,
+  );
   const [cellErrors, setCellErrors] = useState<Map<string, { text: string; reason: string }>>(new Map());
   const [undoStack, setUndoStack] = useState<number[]>([]);
   const [selectedIds, setSelectedIds] = useState<number[]>([]);
   const [bulkKey, setBulkKey] = useState("ceiling_cavity_r");
   const [bulkValue, setBulkValue] = useState("");
   // All four facings pinned right take about 800 px: on narrower screens start with the worst facing only.
-  const [allFacings, setAllFacings] = useState(() => typeof window === "undefined" || window.innerWidth >= 1600);
+  const [allFacings, setAllFacings] = useState(
+    () => typeof window === "undefined" || window.innerWidth >= 1600,
+  );
 
   const save = useMutation({
     mutationFn: ({ changes, action }: { changes: CellChange[]; action: EditAction }) =>
-      api<{ changed: number; entryId: number | null }>("/api/plans", { method: "PATCH", body: { changes, action } }),
+      api<{ changed: number; entryId: number | null }>("/api/plans", {
+        method: "PATCH",
+        body: { changes, action },
+      }),
     onMutate: async ({ changes }) => {
       await queryClient.cancelQueries({ queryKey });
       const previous = queryClient.getQueryData<Library>(queryKey);
@@ -102,10 +127,17 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
         const key = fe.field.slice(fe.field.lastIndexOf(".") + 1);
         const planId = fe.row ?? 0;
         const change = changes.find((c) => c.planId === planId);
-        if (change && key in change.cells) next.set(errorKey(planId, key), { text: text(change.cells[key]), reason: fe.message });
+        if (change && key in change.cells)
+          next.set(errorKey(planId, key), { text: text(change.cells[key]), reason: fe.message });
       }
       setCellErrors(next);
-      setBanner({ kind: "error", text: error.message, details: apiError?.fieldErrors.map((f) => `${f.field.replace(/\.[^.]+$/, "")} · ${f.column ?? f.field}: ${f.message}`) });
+      setBanner({
+        kind: "error",
+        text: error.message,
+        details: apiError?.fieldErrors.map(
+          (f) => `${f.field.replace(/\.[^.]+$/, "")} · ${f.column ?? f.field}: ${f.message}`,
+        ),
+      });
     },
     onSuccess: (result, { changes }) => {
       const next = new Map(cellErrors);
@@ -115,16 +147,27 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
       const current = queryClient.getQueryData<Library>(queryKey);
       if (current && result.changed > 0) {
         const ids = new Set(changes.map((c) => c.planId));
-        queryClient.setQueryData<Library>(queryKey, { ...current, plans: current.plans.map((p) => (ids.has(p.id) ? { ...p, version: p.version + 1 } : p)) });
+        queryClient.setQueryData<Library>(queryKey, {
+          ...current,
+          plans: current.plans.map((p) => (ids.has(p.id) ? { ...p, version: p.version + 1 } : p)),
+        });
       }
       if (result.entryId) setUndoStack((s) => [...s, result.entryId!]);
-      setBanner(result.changed > 0 ? { kind: "info", text: `Saved ${result.changed} plan model${result.changed === 1 ? "" : "s"}; loads recomputed.` } : null);
+      setBanner(
+        result.changed > 0
+          ? {
+              kind: "info",
+              text: `Saved ${result.changed} plan model${result.changed === 1 ? "" : "s"}; loads recomputed.`,
+            }
+          : null,
+      );
     },
     onSettled: () => queryClient.invalidateQueries({ queryKey: ["plans"] }),
   });
 
   const undo = useMutation({
-    mutationFn: (entryId: number) => api<{ changed: number }>("/api/plans/undo", { method: "POST", body: { entryId } }),
+    mutationFn: (entryId: number) =>
+      api<{ changed: number }>("/api/plans/undo", { method: "POST", body: { entryId } }),
     onSuccess: () => {
       setUndoStack((s) => s.slice(0, -1));
       setBanner({ kind: "info", text: "The last change was undone." });
@@ -136,13 +179,25 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
   const [copyCode, setCopyCode] = useState("");
   const [copyName, setCopyName] = useState("");
   const copyModel = useMutation({
-    mutationFn: (fromPlanId: number) => api<{ planId: number }>("/api/plans", { method: "POST", body: { fromPlanId, planCode: copyCode, name: copyName } }),
+    mutationFn: (fromPlanId: number) =>
+      api<{ planId: number }>("/api/plans", {
+        method: "POST",
+        body: { fromPlanId, planCode: copyCode, name: copyName },
+      }),
     onSuccess: () => {
       setBanner({ kind: "info", text: `Created ${copyCode} as a copy; edit its cells in the grid.` });
       setCopyCode("");
       setCopyName("");
     },
-    onError: (error: Error) => setBanner({ kind: "error", text: error.message + (error instanceof ApiError && error.fieldErrors.length ? ` ${error.fieldErrors.map((f) => `${f.column ?? f.field}: ${f.message}`).join("; ")}` : "") }),
+    onError: (error: Error) =>
+      setBanner({
+        kind: "error",
+        text:
+          error.message +
+          (error instanceof ApiError && error.fieldErrors.length
+            ? ` ${error.fieldErrors.map((f) => `${f.column ?? f.field}: ${f.message}`).join("; ")}`
+            : ""),
+      }),
     onSettled: () => queryClient.invalidateQueries({ queryKey: ["plans"] }),
   });
 
@@ -161,7 +216,8 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
       width: c.value.type === "enum" ? 170 : c.key === "plan_name" ? 130 : 118,
       editable: canEdit,
       pinned: c.key === "plan_code" ? "left" : undefined,
-      valueGetter: (p: ValueGetterParams<LibraryPlan>) => (p.data ? (cellErrors.get(errorKey(p.data.id, c.key))?.text ?? text(p.data.cells[c.key])) : ""),
+      valueGetter: (p: ValueGetterParams<LibraryPlan>) =>
+        p.data ? (cellErrors.get(errorKey(p.data.id, c.key))?.text ?? text(p.data.cells[c.key])) : "",
       valueFormatter: (p: ValueFormatterParams<LibraryPlan>) => {
         if (!p.data) return "";
         if (cellErrors.has(errorKey(p.data.id, c.key))) return String(p.value ?? "");
@@ -173,11 +229,23 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
         if (!p.data) return false;
         const next = text(p.newValue);
         if (next === text(p.oldValue)) return false;
-        saveCells([{ planId: p.data.id, version: p.data.version, cells: withOneAirLeakageFigure(p.data.cells, { [c.key]: next }) }], "edit");
+        saveCells(
+          [
+            {
+              planId: p.data.id,
+              version: p.data.version,
+              cells: withOneAirLeakageFigure(p.data.cells, { [c.key]: next }),
+            },
+          ],
+          "edit",
+        );
         return false;
       },
       cellEditor: c.value.type === "enum" ? "agSelectCellEditor" : "agTextCellEditor",
-      cellEditorParams: c.value.type === "enum" ? { values: c.required ? [...c.value.choices] : ["", ...c.value.choices] } : undefined,
+      cellEditorParams:
+        c.value.type === "enum"
+          ? { values: c.required ? [...c.value.choices] : ["", ...c.value.choices] }
+          : undefined,
       tooltipValueGetter: (p) => {
         if (!p.data) return undefined;
         const err = cellErrors.get(errorKey(p.data.id, c.key));
@@ -203,19 +271,88 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
       return {
         headerName: `Front to ${facing} (Btu/h)`,
         children: [
-          { colId: `heat_${facing}`, headerName: "Heat", headerTooltip: `Heating load with the front facing ${facing}, Btu/h`, width: 68, pinned: "right", editable: false, filter: false, suppressHeaderMenuButton: true, valueGetter: (p) => f(p)?.heatingBtuh ?? null, valueFormatter: (p) => fmtInt(p.value), cellClass: "num cell-computed cell-heat" },
-          { colId: `cool_${facing}`, headerName: "Cool", headerTooltip: `Cooling total (sensible + latent) at the design peak with the front facing ${facing}, Btu/h`, width: 68, pinned: "right", editable: false, filter: false, suppressHeaderMenuButton: true, valueGetter: (p) => f(p)?.coolingTotalBtuh ?? null, valueFormatter: (p) => fmtInt(p.value), cellClass: (p) => ["num", "cell-computed", "cell-cool", ...(worst(p) ? ["cell-worst"] : [])] },
-          { colId: `tons_${facing}`, headerName: "Tons", headerTooltip: "Cooling total ÷ 12,000 Btu/h", width: 52, pinned: "right", editable: false, filter: false, suppressHeaderMenuButton: true, valueGetter: (p) => f(p)?.tons ?? null, valueFormatter: (p) => (p.value === null ? "" : Number(p.value).toFixed(2)), cellClass: "num cell-computed" },
+          {
+            colId: `heat_${facing}`,
+            headerName: "Heat",
+            headerTooltip: `Heating load with the front facing ${facing}, Btu/h`,
+            width: 68,
+            pinned: "right",
+            editable: false,
+            filter: false,
+            suppressHeaderMenuButton: true,
+            valueGetter: (p) => f(p)?.heatingBtuh ?? null,
+            valueFormatter: (p) => fmtInt(p.value),
+            cellClass: "num cell-computed cell-heat",
+          },
+          {
+            colId: `cool_${facing}`,
+            headerName: "Cool",
+            headerTooltip: `Cooling total (sensible + latent) at the design peak with the front facing ${facing}, Btu/h`,
+            width: 68,
+            pinned: "right",
+            editable: false,
+            filter: false,
+            suppressHeaderMenuButton: true,
+            valueGetter: (p) => f(p)?.coolingTotalBtuh ?? null,
+            valueFormatter: (p) => fmtInt(p.value),
+            cellClass: (p) => ["num", "cell-computed", "cell-cool", ...(worst(p) ? ["cell-worst"] : [])],
+          },
+          {
+            colId: `tons_${facing}`,
+            headerName: "Tons",
+            headerTooltip: "Cooling total ÷ 12,000 Btu/h",
+            width: 52,
+            pinned: "right",
+            editable: false,
+            filter: false,
+            suppressHeaderMenuButton: true,
+            valueGetter: (p) => f(p)?.tons ?? null,
+            valueFormatter: (p) => (p.value === null ? "" : Number(p.value).toFixed(2)),
+            cellClass: "num cell-computed",
+          },
         ],
       };
     };
-    const worstOf = (p: { data?: LibraryPlan }) => p.data?.loads?.facings.find((x) => x.label === p.data?.loads?.worst.label);
+    const worstOf = (p: { data?: LibraryPlan }) =>
+      p.data?.loads?.facings.find((x) => x.label === p.data?.loads?.worst.label);
     const worstGroup: ColGroupDef<LibraryPlan> = {
       headerName: "Worst facing (Btu/h)",
       children: [
-        { colId: "heat_worst", headerName: "Heat", headerTooltip: "Heating load (the same for every facing), Btu/h", width: 68, pinned: "right", editable: false, filter: false, valueGetter: (p) => worstOf(p)?.heatingBtuh ?? null, valueFormatter: (p) => fmtInt(p.value), cellClass: "num cell-computed cell-heat" },
-        { colId: "cool_worst", headerName: "Cool", headerTooltip: "Cooling total at the worst facing, Btu/h", width: 68, pinned: "right", editable: false, filter: false, valueGetter: (p) => worstOf(p)?.coolingTotalBtuh ?? null, valueFormatter: (p) => fmtInt(p.value), cellClass: "num cell-computed cell-cool cell-worst" },
-        { colId: "tons_worst", headerName: "Tons", width: 52, pinned: "right", editable: false, filter: false, valueGetter: (p) => worstOf(p)?.tons ?? null, valueFormatter: (p) => (p.value === null ? "" : Number(p.value).toFixed(2)), cellClass: "num cell-computed" },
+        {
+          colId: "heat_worst",
+          headerName: "Heat",
+          headerTooltip: "Heating load (the same for every facing), Btu/h",
+          width: 68,
+          pinned: "right",
+          editable: false,
+          filter: false,
+          valueGetter: (p) => worstOf(p)?.heatingBtuh ?? null,
+          valueFormatter: (p) => fmtInt(p.value),
+          cellClass: "num cell-computed cell-heat",
+        },
+        {
+          colId: "cool_worst",
+          headerName: "Cool",
+          headerTooltip: "Cooling total at the worst facing, Btu/h",
+          width: 68,
+          pinned: "right",
+          editable: false,
+          filter: false,
+          valueGetter: (p) => worstOf(p)?.coolingTotalBtuh ?? null,
+          valueFormatter: (p) => fmtInt(p.value),
+          cellClass: "num cell-computed cell-cool cell-worst",
+        },
+        {
+          colId: "tons_worst",
+          headerName: "Tons",
+          width: 52,
+          pinned: "right",
+          editable: false,
+          filter: false,
+          valueGetter: (p) => worstOf(p)?.tons ?? null,
+          valueFormatter: (p) => (p.value === null ? "" : Number(p.value).toFixed(2)),
+          cellClass: "num cell-computed",
+        },
       ],
     };
     return [
@@ -229,7 +366,11 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
         filter: false,
         cellRenderer: (p: { data?: LibraryPlan }) =>
           p.data ? (
-            <Link href={`/plans/${p.data.id}${communityId ? `?communityId=${communityId}` : ""}`} className="text-accent-700 hover:underline" data-testid={`open-${p.data.planCode}`}>
+            <Link
+              href={`/plans/${p.data.id}${communityId ? `?communityId=${communityId}` : ""}`}
+              className="text-accent-700 hover:underline"
+              data-testid={`open-${p.data.planCode}`}
+            >
               Sheet
             </Link>
           ) : null,
@@ -240,7 +381,8 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
         width: 76,
         pinned: "left",
         editable: false,
-        valueGetter: (p) => (p.data ? `${p.data.revisionNumber} ${p.data.revisionStatus === "approved" ? "✓" : "draft"}` : ""),
+        valueGetter: (p) =>
+          p.data ? `${p.data.revisionNumber} ${p.data.revisionStatus === "approved" ? "✓" : "draft"}` : "",
         headerTooltip: "Revision number; ✓ approved (locked: an edit starts a new draft)",
       },
       ...groups,
@@ -248,8 +390,33 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
       {
         headerName: "All facings (Btu/h)",
         children: [
-          { colId: "worst", headerName: "Worst", headerTooltip: "The facing with the largest cooling total", width: 62, pinned: "right", editable: false, filter: false, suppressHeaderMenuButton: true, valueGetter: (p) => (p.data?.loads ? p.data.loads.worst.label : (p.data?.loadsError ? "error" : "")), tooltipValueGetter: (p) => p.data?.loadsError ?? undefined, cellClass: "cell-computed" },
-          { colId: "spread", headerName: "Spread", headerTooltip: "Largest minus smallest cooling total over the four facings, Btu/h", width: 66, pinned: "right", editable: false, filter: false, suppressHeaderMenuButton: true, valueGetter: (p) => p.data?.loads?.coolingSpreadBtuh ?? null, valueFormatter: (p) => fmtInt(p.value), cellClass: "num cell-computed" },
+          {
+            colId: "worst",
+            headerName: "Worst",
+            headerTooltip: "The facing with the largest cooling total",
+            width: 62,
+            pinned: "right",
+            editable: false,
+            filter: false,
+            suppressHeaderMenuButton: true,
+            valueGetter: (p) =>
+              p.data?.loads ? p.data.loads.worst.label : p.data?.loadsError ? "error" : "",
+            tooltipValueGetter: (p) => p.data?.loadsError ?? undefined,
+            cellClass: "cell-computed",
+          },
+          {
+            colId: "spread",
+            headerName: "Spread",
+            headerTooltip: "Largest minus smallest cooling total over the four facings, Btu/h",
+            width: 66,
+            pinned: "right",
+            editable: false,
+            filter: false,
+            suppressHeaderMenuButton: true,
+            valueGetter: (p) => p.data?.loads?.coolingSpreadBtuh ?? null,
+            valueFormatter: (p) => fmtInt(p.value),
+            cellClass: "num cell-computed",
+          },
         ],
       },
     ];
@@ -262,12 +429,27 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
       if ((e.ctrlKey || e.metaKey) && e.key.toLowerCase() === "c" && !event.api.getEditingCells().length) {
         // AG Grid Community has no clipboard module: copy the selected rows' visible cells (as entered,
         // formulas kept) as tab-separated lines, or the focused cell alone, for pasting into a spreadsheet.
-        const keys = event.api.getAllDisplayedColumns().map((c) => c.getColId()).filter((k) => PLAN_COLUMN_BY_KEY.has(k));
+        const keys = event.api
+          .getAllDisplayedColumns()
+          .map((c) => c.getColId())
+          .filter((k) => PLAN_COLUMN_BY_KEY.has(k));
         const rows = event.api.getSelectedRows();
         const key = event.column.getColId();
-        const textOut = rows.length > 0 ? rows.map((r) => keys.map((k) => text(r.cells[k])).join("\t")).join("\n") : PLAN_COLUMN_BY_KEY.has(key) ? text(event.data.cells[key]) : String(event.value ?? "");
+        const textOut =
+          rows.length > 0
+            ? rows.map((r) => keys.map((k) => text(r.cells[k])).join("\t")).join("\n")
+            : PLAN_COLUMN_BY_KEY.has(key)
+              ? text(event.data.cells[key])
+              : String(event.value ?? "");
         void navigator.clipboard?.writeText(textOut).then(
-          () => setBanner({ kind: "info", text: rows.length > 0 ? `Copied ${rows.length} model(s) × ${keys.length} columns.` : "Copied the cell." }),
+          () =>
+            setBanner({
+              kind: "info",
+              text:
+                rows.length > 0
+                  ? `Copied ${rows.length} model(s) × ${keys.length} columns.`
+                  : "Copied the cell.",
+            }),
           () => setBanner({ kind: "error", text: "The browser did not allow copying to the clipboard." }),
         );
         return;
@@ -279,7 +461,12 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
         return;
       }
       const key = event.column.getColId();
-      if (e.key === "Delete" && canEdit && PLAN_COLUMN_BY_KEY.has(key) && !event.api.getEditingCells().length) {
+      if (
+        e.key === "Delete" &&
+        canEdit &&
+        PLAN_COLUMN_BY_KEY.has(key) &&
+        !event.api.getEditingCells().length
+      ) {
         const column = PLAN_COLUMN_BY_KEY.get(key)!;
         if (column.required) {
           setBanner({ kind: "error", text: `${column.header} is required and cannot be cleared.` });
@@ -304,7 +491,12 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
       const visibleKeys = grid.getAllDisplayedColumns().map((c) => c.getColId());
       let placed;
       try {
-        placed = placePastedBlock(block, visibleKeys, focused.column.getColId(), new Set(PLAN_COLUMNS.map((c) => c.key)));
+        placed = placePastedBlock(
+          block,
+          visibleKeys,
+          focused.column.getColId(),
+          new Set(PLAN_COLUMNS.map((c) => c.key)),
+        );
       } catch (error) {
         setBanner({ kind: "error", text: (error as Error).message });
         return;
@@ -317,13 +509,20 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
           rowsPastEnd++;
           continue;
         }
-        const change = byPlan.get(node.data.id) ?? { planId: node.data.id, version: node.data.version, cells: {} };
+        const change = byPlan.get(node.data.id) ?? {
+          planId: node.data.id,
+          version: node.data.version,
+          cells: {},
+        };
         change.cells[cell.key] = cell.text;
         byPlan.set(node.data.id, change);
       }
       const skipped = placed.droppedCells + placed.readOnlyCells + rowsPastEnd;
       if (skipped > 0 && byPlan.size === 0) {
-        setBanner({ kind: "error", text: `Nothing pasted: all ${skipped} cells fall outside the editable grid.` });
+        setBanner({
+          kind: "error",
+          text: `Nothing pasted: all ${skipped} cells fall outside the editable grid.`,
+        });
         return;
       }
       const pasted = [...byPlan.values()].map((change) => {
@@ -331,7 +530,11 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
         return plan ? { ...change, cells: withOneAirLeakageFigure(plan.cells, change.cells) } : change;
       });
       saveCells(pasted, "paste");
-      if (skipped > 0) setBanner({ kind: "info", text: `${skipped} pasted cell(s) fell outside the editable grid and were left out.` });
+      if (skipped > 0)
+        setBanner({
+          kind: "info",
+          text: `${skipped} pasted cell(s) fell outside the editable grid and were left out.`,
+        });
     },
     [canEdit, saveCells, library.data],
   );
@@ -342,7 +545,14 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
       setBanner({ kind: "error", text: "Select the plan models to change first (tick their boxes)." });
       return;
     }
-    saveCells(plans.map((p) => ({ planId: p.id, version: p.version, cells: withOneAirLeakageFigure(p.cells, { [bulkKey]: bulkValue }) })), "bulk_edit");
+    saveCells(
+      plans.map((p) => ({
+        planId: p.id,
+        version: p.version,
+        cells: withOneAirLeakageFigure(p.cells, { [bulkKey]: bulkValue }),
+      })),
+      "bulk_edit",
+    );
   };
 
   if (library.isPending) return <p className="text-zinc-500">Loading the plan library…</p>;
@@ -370,8 +580,14 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
             ))}
           </select>
         </div>
-        <p className="max-w-64 text-xs text-zinc-600" data-testid="library-procedure" title={data.procedureLabel}>
-          Computed columns by <span className="font-medium text-zinc-800">{PROCEDURE_SHORT_LABELS[data.procedure]}</span>, the account&apos;s procedure (open a sheet to compare both)
+        <p
+          className="max-w-64 text-xs text-zinc-600"
+          data-testid="library-procedure"
+          title={data.procedureLabel}
+        >
+          Computed columns by{" "}
+          <span className="font-medium text-zinc-800">{PROCEDURE_SHORT_LABELS[data.procedure]}</span>, the
+          account&apos;s procedure (open a sheet to compare both)
         </p>
         <div>
           <label htmlFor="jump-column" className="block text-xs font-medium text-zinc-600">
@@ -408,7 +624,12 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
               <label htmlFor="bulk-column" className="block text-xs font-medium text-zinc-600">
                 Set on {selectedIds.length} selected
               </label>
-              <select id="bulk-column" className="max-w-64 rounded border border-zinc-300 bg-white px-2 py-1" value={bulkKey} onChange={(e) => setBulkKey(e.target.value)}>
+              <select
+                id="bulk-column"
+                className="max-w-64 rounded border border-zinc-300 bg-white px-2 py-1"
+                value={bulkKey}
+                onChange={(e) => setBulkKey(e.target.value)}
+              >
                 {PLAN_COLUMN_GROUPS.map((g) => (
                   <optgroup key={g} label={g}>
                     {PLAN_COLUMNS.filter((c) => c.group === g && c.key !== "plan_code").map((c) => (
@@ -424,12 +645,24 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
               <label htmlFor="bulk-value" className="block text-xs font-medium text-zinc-600">
                 Value or formula
               </label>
-              <input id="bulk-value" className="w-32 rounded border border-zinc-300 px-2 py-1" value={bulkValue} onChange={(e) => setBulkValue(e.target.value)} placeholder="R-49" />
+              <input
+                id="bulk-value"
+                className="w-32 rounded border border-zinc-300 px-2 py-1"
+                value={bulkValue}
+                onChange={(e) => setBulkValue(e.target.value)}
+                placeholder="R-49"
+              />
             </div>
             <Button type="button" onClick={applyBulk} disabled={save.isPending}>
               Apply
             </Button>
-            <Button type="button" variant="secondary" disabled={undoStack.length === 0 || undo.isPending} onClick={() => undo.mutate(undoStack.at(-1)!)} title="Ctrl+Z in the grid">
+            <Button
+              type="button"
+              variant="secondary"
+              disabled={undoStack.length === 0 || undo.isPending}
+              onClick={() => undo.mutate(undoStack.at(-1)!)}
+              title="Ctrl+Z in the grid"
+            >
               Undo last change
             </Button>
           </div>
@@ -440,21 +673,43 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
               <label htmlFor="copy-code" className="block text-xs font-medium text-zinc-600">
                 New model from the selected one: code
               </label>
-              <input id="copy-code" className="w-28 rounded border border-zinc-300 px-2 py-1" value={copyCode} onChange={(e) => setCopyCode(e.target.value)} placeholder="AS-1450X" />
+              <input
+                id="copy-code"
+                className="w-28 rounded border border-zinc-300 px-2 py-1"
+                value={copyCode}
+                onChange={(e) => setCopyCode(e.target.value)}
+                placeholder="AS-1450X"
+              />
             </div>
             <div>
               <label htmlFor="copy-name" className="block text-xs font-medium text-zinc-600">
                 name
               </label>
-              <input id="copy-name" className="w-32 rounded border border-zinc-300 px-2 py-1" value={copyName} onChange={(e) => setCopyName(e.target.value)} placeholder="Aster with loft" />
+              <input
+                id="copy-name"
+                className="w-32 rounded border border-zinc-300 px-2 py-1"
+                value={copyName}
+                onChange={(e) => setCopyName(e.target.value)}
+                placeholder="Aster with loft"
+              />
             </div>
-            <Button type="button" variant="secondary" disabled={copyModel.isPending} onClick={() => copyModel.mutate(selectedIds[0])}>
+            <Button
+              type="button"
+              variant="secondary"
+              disabled={copyModel.isPending}
+              onClick={() => copyModel.mutate(selectedIds[0])}
+            >
               Create copy
             </Button>
           </div>
         ) : null}
         <label className="flex items-center gap-1.5 text-xs text-zinc-700">
-          <input type="checkbox" checked={allFacings} onChange={(e) => setAllFacings(e.target.checked)} data-testid="toggle-facings" />
+          <input
+            type="checkbox"
+            checked={allFacings}
+            onChange={(e) => setAllFacings(e.target.checked)}
+            data-testid="toggle-facings"
+          />
           Show all four facings
         </label>
         <div className="ml-auto">
@@ -485,7 +740,12 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
           columnDefs={columnDefs}
           getRowId={(p) => String(p.data.id)}
           defaultColDef={{ sortable: true, filter: true, resizable: true, suppressHeaderMenuButton: false }}
-          rowSelection={{ mode: "multiRow", checkboxes: true, headerCheckbox: true, enableClickSelection: false }}
+          rowSelection={{
+            mode: "multiRow",
+            checkboxes: true,
+            headerCheckbox: true,
+            enableClickSelection: false,
+          }}
           selectionColumnDef={{ pinned: "left", width: 40 }}
           onSelectionChanged={(e) => setSelectedIds(e.api.getSelectedRows().map((r) => r.id))}
           onGridReady={(e: GridReadyEvent<LibraryPlan>) => {
@@ -501,11 +761,15 @@ export function PlanLibrary({ canEdit }: { canEdit: boolean }) {
         />
       </div>
       <p className="text-xs text-zinc-500">
-        Enter edits and moves down, Tab moves right, Escape cancels, Delete clears, Ctrl+C copies the selected models (or the cell), Ctrl+Z undoes the last saved change. Cells take numbers with units
-        (&quot;R-19&quot;, &quot;1,250 sf&quot;) or formulas (<code>=38*9-2*15</code>, <code>=front_wall_ft2*0.15</code>; hover a header for its formula name).
-        Computed columns (tinted) are read-only. Paste a block copied from a spreadsheet into the focused cell.
+        Enter edits and moves down, Tab moves right, Escape cancels, Delete clears, Ctrl+C copies the selected
+        models (or the cell), Ctrl+Z undoes the last saved change. Cells take numbers with units
+        (&quot;R-19&quot;, &quot;1,250 sf&quot;) or formulas (<code>=38*9-2*15</code>,{" "}
+        <code>=front_wall_ft2*0.15</code>; hover a header for its formula name). Computed columns (tinted) are
+        read-only. Paste a block copied from a spreadsheet into the focused cell.
       </p>
-      {canEdit ? <PlanImportPanel onImported={() => queryClient.invalidateQueries({ queryKey: ["plans"] })} /> : null}
+      {canEdit ? (
+        <PlanImportPanel onImported={() => queryClient.invalidateQueries({ queryKey: ["plans"] })} />
+      ) : null}
       <Caution />
     </div>
   );

@@ -3,7 +3,18 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import Link from "next/link";
 import { useState } from "react";
-import { Bar, BarChart, CartesianGrid, Legend, Line, LineChart, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
+import {
+  Bar,
+  BarChart,
+  CartesianGrid,
+  Legend,
+  Line,
+  LineChart,
+  ResponsiveContainer,
+  Tooltip,
+  XAxis,
+  YAxis,
+} from "recharts";
 import { fmtInt } from "@/components/grid/grid-theme";
 import { ProcedureComparison, type ProcedureFacings } from "@/components/plans/procedure-comparison";
 import { Caution } from "@/components/ui/caution";
@@ -19,9 +30,31 @@ import { PlanAssemblies } from "./plan-assemblies";
 interface Sheet {
   plan: { id: number; planCode: string; name: string; version: number; updatedAt: string };
   reference: { communities: { id: number; name: string }[]; community: { id: number; name: string } | null };
-  current: { id: number; number: number; status: "draft" | "approved"; cells: Record<string, string | number | boolean | null> };
-  revisions: { id: number; number: number; status: string; createdAt: string; createdBy: string | null; approverName: string | null; approverCredential: string | null; approvedOn: string | null }[];
-  history: { id: number; action: string; summary: string; before: unknown; after: unknown; createdAt: string; userName: string | null }[];
+  current: {
+    id: number;
+    number: number;
+    status: "draft" | "approved";
+    cells: Record<string, string | number | boolean | null>;
+  };
+  revisions: {
+    id: number;
+    number: number;
+    status: string;
+    createdAt: string;
+    createdBy: string | null;
+    approverName: string | null;
+    approverCredential: string | null;
+    approvedOn: string | null;
+  }[];
+  history: {
+    id: number;
+    action: string;
+    summary: string;
+    before: unknown;
+    after: unknown;
+    createdAt: string;
+    userName: string | null;
+  }[];
   /** The account's procedure's result: the one that sizes equipment. */
   result: PlanFacings | null;
   loadsError: string | null;
@@ -50,7 +83,19 @@ const COMPONENT_LABELS: Record<string, string> = {
   temperatureSwing: "Indoor swing credit",
 };
 
-export function PlanSheet({ planId, canEdit, canApprove, memberName, initialCommunityId }: { planId: number; canEdit: boolean; canApprove: boolean; memberName: string; initialCommunityId: number | null }) {
+export function PlanSheet({
+  planId,
+  canEdit,
+  canApprove,
+  memberName,
+  initialCommunityId,
+}: {
+  planId: number;
+  canEdit: boolean;
+  canApprove: boolean;
+  memberName: string;
+  initialCommunityId: number | null;
+}) {
   const [communityId, setCommunityId] = useState<number | null>(initialCommunityId);
   const sheet = useQuery({
     queryKey: ["plan", planId, communityId ?? "default"],
@@ -62,8 +107,10 @@ export function PlanSheet({ planId, canEdit, canApprove, memberName, initialComm
   const result = s.result;
   const worst = result?.facings.find((f) => f.label === result.worst.label) ?? null;
   // The 24-hour profile comes from a procedure that gives one: the account's, else the other one's for comparison.
-  const hasProfile = (p: ProcedureFacings) => !!p.result && p.result.facings.every((f) => f.cooling.hourlySensibleBtuh.length === 24);
-  const profileSource = s.procedures.find((p) => p.sizesEquipment && hasProfile(p)) ?? s.procedures.find(hasProfile) ?? null;
+  const hasProfile = (p: ProcedureFacings) =>
+    !!p.result && p.result.facings.every((f) => f.cooling.hourlySensibleBtuh.length === 24);
+  const profileSource =
+    s.procedures.find((p) => p.sizesEquipment && hasProfile(p)) ?? s.procedures.find(hasProfile) ?? null;
 
   return (
     <div className="flex flex-col gap-5" data-testid="plan-sheet">
@@ -76,14 +123,20 @@ export function PlanSheet({ planId, canEdit, canApprove, memberName, initialComm
             {s.plan.planCode} · {s.plan.name}
           </h1>
           <p className="text-zinc-600" data-testid="revision-state">
-            Revision {s.current.number} — {s.current.status === "approved" ? "approved (locked; an edit starts a new draft)" : "draft"}
+            Revision {s.current.number} —{" "}
+            {s.current.status === "approved" ? "approved (locked; an edit starts a new draft)" : "draft"}
           </p>
         </div>
         <div>
           <label htmlFor="sheet-community" className="block text-xs font-medium text-zinc-600">
             Design conditions from
           </label>
-          <select id="sheet-community" className="rounded border border-zinc-300 bg-white px-2 py-1" value={s.reference.community?.id ?? ""} onChange={(e) => setCommunityId(Number(e.target.value) || null)}>
+          <select
+            id="sheet-community"
+            className="rounded border border-zinc-300 bg-white px-2 py-1"
+            value={s.reference.community?.id ?? ""}
+            onChange={(e) => setCommunityId(Number(e.target.value) || null)}
+          >
             {s.reference.communities.map((c) => (
               <option key={c.id} value={c.id}>
                 {c.name}
@@ -98,7 +151,9 @@ export function PlanSheet({ planId, canEdit, canApprove, memberName, initialComm
       {result ? (
         <section aria-labelledby="facing-heading" className="rounded border border-zinc-200 bg-white p-3">
           <h2 id="facing-heading" className="mb-2 text-sm font-semibold">
-            Loads by facing — <span data-testid="facing-procedure">{PROCEDURE_SHORT_LABELS[result.procedure]}</span>, the procedure that sizes equipment
+            Loads by facing —{" "}
+            <span data-testid="facing-procedure">{PROCEDURE_SHORT_LABELS[result.procedure]}</span>, the
+            procedure that sizes equipment
           </h2>
           <table className="w-full border-collapse text-sm" data-testid="facing-matrix">
             <thead className="bg-zinc-100 text-xs text-zinc-600">
@@ -117,10 +172,16 @@ export function PlanSheet({ planId, canEdit, canApprove, memberName, initialComm
             </thead>
             <tbody>
               {result.facings.map((f) => (
-                <tr key={f.label} className={`border-t border-zinc-200 ${f.label === result.worst.label ? "font-semibold" : ""}`} data-testid={`facing-${f.label}`}>
+                <tr
+                  key={f.label}
+                  className={`border-t border-zinc-200 ${f.label === result.worst.label ? "font-semibold" : ""}`}
+                  data-testid={`facing-${f.label}`}
+                >
                   <td className="px-2 py-1">
                     {f.label}
-                    {f.label === result.worst.label ? <span className="ml-1 text-xs font-normal text-zinc-500">(worst)</span> : null}
+                    {f.label === result.worst.label ? (
+                      <span className="ml-1 text-xs font-normal text-zinc-500">(worst)</span>
+                    ) : null}
                   </td>
                   <td className="num px-2 py-1 text-heat-700">{fmtInt(f.heating.totalBtuh)}</td>
                   <td className="num px-2 py-1 text-cool-700">{fmtInt(f.cooling.sensibleBtuh)}</td>
@@ -129,7 +190,10 @@ export function PlanSheet({ planId, canEdit, canApprove, memberName, initialComm
                   <td className="num px-2 py-1">{f.cooling.tons.toFixed(2)}</td>
                   <td className="num px-2 py-1">{fmtInt(f.cooling.floorAreaPerTonFt2)}</td>
                   <td className="num px-2 py-1">{f.cooling.sensibleHeatRatio.toFixed(2)}</td>
-                  <td className="num px-2 py-1" title={f.cooling.peakHour === null ? PEAK_ONLY_NOTE : undefined}>
+                  <td
+                    className="num px-2 py-1"
+                    title={f.cooling.peakHour === null ? PEAK_ONLY_NOTE : undefined}
+                  >
                     {f.cooling.peakHour === null ? "peak only" : `${f.cooling.peakHour}:00`}
                   </td>
                   <td className="num px-2 py-1">{fmtInt(f.cooling.airflowCfm)}</td>
@@ -138,17 +202,28 @@ export function PlanSheet({ planId, canEdit, canApprove, memberName, initialComm
             </tbody>
           </table>
           <p className="mt-2 text-xs text-zinc-600">
-            Spread between facings: {fmtInt(result.coolingSpreadBtuh)} Btu/h of cooling. Engine {result.engineVersion}.
+            Spread between facings: {fmtInt(result.coolingSpreadBtuh)} Btu/h of cooling. Engine{" "}
+            {result.engineVersion}.
           </p>
         </section>
       ) : null}
 
-      <ProcedureComparison procedures={s.procedures} componentLabels={COMPONENT_LABELS} initialFacing={result?.worst.label ?? null} />
+      <ProcedureComparison
+        procedures={s.procedures}
+        componentLabels={COMPONENT_LABELS}
+        initialFacing={result?.worst.label ?? null}
+      />
 
       {result && worst ? (
         <div className="grid gap-4 xl:grid-cols-3">
           <ChartCard title="Load by facing" testId="chart-facing">
-            <BarChart data={result.facings.map((f) => ({ facing: `Front ${f.label}`, Heating: Math.round(f.heating.totalBtuh), Cooling: Math.round(f.cooling.totalBtuh) }))}>
+            <BarChart
+              data={result.facings.map((f) => ({
+                facing: `Front ${f.label}`,
+                Heating: Math.round(f.heating.totalBtuh),
+                Cooling: Math.round(f.cooling.totalBtuh),
+              }))}
+            >
               <CartesianGrid strokeDasharray="3 3" vertical={false} />
               <XAxis dataKey="facing" fontSize={11} />
               <YAxis fontSize={11} tickFormatter={(v: number) => `${Math.round(v / 1000)}k`} />
@@ -158,14 +233,19 @@ export function PlanSheet({ planId, canEdit, canApprove, memberName, initialComm
               <Bar dataKey="Cooling" fill={COOL} />
             </BarChart>
           </ChartCard>
-          <ChartCard title={`Load by component (front ${worst.label}, the worst facing)`} testId="chart-component">
+          <ChartCard
+            title={`Load by component (front ${worst.label}, the worst facing)`}
+            testId="chart-component"
+          >
             <BarChart
               layout="vertical"
               data={Object.keys(COMPONENT_LABELS)
                 .map((k) => ({
                   component: COMPONENT_LABELS[k],
                   Heating: Math.round((worst.heating.byComponent as Record<string, number>)[k] ?? 0),
-                  "Cooling sensible": Math.round((worst.cooling.sensibleByComponent as Record<string, number>)[k] ?? 0),
+                  "Cooling sensible": Math.round(
+                    (worst.cooling.sensibleByComponent as Record<string, number>)[k] ?? 0,
+                  ),
                 }))
                 .filter((r) => r.Heating !== 0 || r["Cooling sensible"] !== 0)}
             >
@@ -178,7 +258,9 @@ export function PlanSheet({ planId, canEdit, canApprove, memberName, initialComm
               <Bar dataKey="Cooling sensible" fill={COOL} />
             </BarChart>
           </ChartCard>
-          {profileSource?.result ? <ProfileChart source={profileSource.result} sizing={profileSource.sizesEquipment} /> : null}
+          {profileSource?.result ? (
+            <ProfileChart source={profileSource.result} sizing={profileSource.sizesEquipment} />
+          ) : null}
         </div>
       ) : null}
 
@@ -218,22 +300,40 @@ export function PlanSheet({ planId, canEdit, canApprove, memberName, initialComm
                   <td className="py-1">
                     {r.createdAt.slice(0, 10)} {r.createdBy ? `· ${r.createdBy}` : ""}
                   </td>
-                  <td className="py-1" data-testid={r.status === "approved" ? `approval-${r.number}` : undefined}>
+                  <td
+                    className="py-1"
+                    data-testid={r.status === "approved" ? `approval-${r.number}` : undefined}
+                  >
                     {r.approverName ? `${r.approverName}, ${r.approverCredential}, ${r.approvedOn}` : "—"}
                   </td>
                 </tr>
               ))}
             </tbody>
           </table>
-          {canApprove && s.current.status === "draft" ? <ApproveForm planId={s.plan.id} revisionId={s.current.id} revisionNumber={s.current.number} memberName={memberName} /> : null}
-          {!canApprove && s.current.status === "draft" ? <p className="mt-2 text-xs text-zinc-500">A reviewer approves revisions.</p> : null}
-          {canEdit && s.current.status === "approved" ? <p className="mt-2 text-xs text-zinc-500">Editing this plan in the library starts revision {s.current.number + 1} as a draft.</p> : null}
+          {canApprove && s.current.status === "draft" ? (
+            <ApproveForm
+              planId={s.plan.id}
+              revisionId={s.current.id}
+              revisionNumber={s.current.number}
+              memberName={memberName}
+            />
+          ) : null}
+          {!canApprove && s.current.status === "draft" ? (
+            <p className="mt-2 text-xs text-zinc-500">A reviewer approves revisions.</p>
+          ) : null}
+          {canEdit && s.current.status === "approved" ? (
+            <p className="mt-2 text-xs text-zinc-500">
+              Editing this plan in the library starts revision {s.current.number + 1} as a draft.
+            </p>
+          ) : null}
         </section>
         <section className="rounded border border-zinc-200 bg-white p-3" aria-labelledby="history-heading">
           <h2 id="history-heading" className="mb-2 text-sm font-semibold">
             Change history
           </h2>
-          {s.history.length === 0 ? <p className="text-xs text-zinc-500">No changes since the plan was created.</p> : null}
+          {s.history.length === 0 ? (
+            <p className="text-xs text-zinc-500">No changes since the plan was created.</p>
+          ) : null}
           <ul className="max-h-80 space-y-2 overflow-y-auto text-xs" data-testid="plan-history">
             {s.history.map((h) => (
               <li key={h.id} className="border-t border-zinc-100 pt-1">
@@ -259,21 +359,47 @@ function ProfileChart({ source, sizing }: { source: PlanFacings; sizing: boolean
   const title = `24-hour cooling profile (sensible, Btu/h) — ${PROCEDURE_SHORT_LABELS[source.procedure]}${sizing ? "" : ", for comparison: the sizing procedure gives the peak only"}`;
   return (
     <ChartCard title={title} testId="chart-profile">
-      <LineChart data={Array.from({ length: 24 }, (_, h) => Object.fromEntries([["hour", h + 1], ...source.facings.map((f) => [`Front ${f.label}`, Math.round(f.cooling.hourlySensibleBtuh[h])])]))}>
+      <LineChart
+        data={Array.from({ length: 24 }, (_, h) =>
+          Object.fromEntries([
+            ["hour", h + 1],
+            ...source.facings.map((f) => [`Front ${f.label}`, Math.round(f.cooling.hourlySensibleBtuh[h])]),
+          ]),
+        )}
+      >
         <CartesianGrid strokeDasharray="3 3" />
-        <XAxis dataKey="hour" fontSize={11} label={{ value: "solar hour", position: "insideBottomRight", offset: -2, fontSize: 11 }} />
+        <XAxis
+          dataKey="hour"
+          fontSize={11}
+          label={{ value: "solar hour", position: "insideBottomRight", offset: -2, fontSize: 11 }}
+        />
         <YAxis fontSize={11} tickFormatter={(v: number) => `${Math.round(v / 1000)}k`} />
         <Tooltip formatter={(v) => `${fmtInt(Number(v))} Btu/h`} />
         <Legend />
         {source.facings.map((f) => (
-          <Line key={f.label} type="monotone" dataKey={`Front ${f.label}`} stroke={FACING_COLORS[f.label]} dot={false} strokeWidth={f.label === source.worst.label ? 2.5 : 1.5} />
+          <Line
+            key={f.label}
+            type="monotone"
+            dataKey={`Front ${f.label}`}
+            stroke={FACING_COLORS[f.label]}
+            dot={false}
+            strokeWidth={f.label === source.worst.label ? 2.5 : 1.5}
+          />
         ))}
       </LineChart>
     </ChartCard>
   );
 }
 
-function ChartCard({ title, testId, children }: { title: string; testId: string; children: React.ReactElement }) {
+function ChartCard({
+  title,
+  testId,
+  children,
+}: {
+  title: string;
+  testId: string;
+  children: React.ReactElement;
+}) {
   return (
     <section className="rounded border border-zinc-200 bg-white p-3" data-testid={testId}>
       <h2 className="mb-2 text-sm font-semibold">{title}</h2>
@@ -287,7 +413,10 @@ function ChartCard({ title, testId, children }: { title: string; testId: string;
 }
 
 function ChangeDetail({ planId, before, after }: { planId: number; before: unknown; after: unknown }) {
-  const pick = (v: unknown) => (Array.isArray(v) ? (v as { planId: number; cells?: Record<string, unknown> }[]).find((e) => e.planId === planId)?.cells : undefined);
+  const pick = (v: unknown) =>
+    Array.isArray(v)
+      ? (v as { planId: number; cells?: Record<string, unknown> }[]).find((e) => e.planId === planId)?.cells
+      : undefined;
   const b = pick(before);
   const a = pick(after);
   if (!a) return null;
@@ -296,23 +425,39 @@ function ChangeDetail({ planId, before, after }: { planId: number; before: unkno
     <ul className="ml-3 text-zinc-600">
       {keys.map((k) => (
         <li key={k}>
-          {PLAN_COLUMN_BY_KEY.get(k)?.header ?? k}: {b ? <span className="line-through">{String(b[k] ?? "blank") || "blank"}</span> : null} → {String(a[k] ?? "") || "blank"}
+          {PLAN_COLUMN_BY_KEY.get(k)?.header ?? k}:{" "}
+          {b ? <span className="line-through">{String(b[k] ?? "blank") || "blank"}</span> : null} →{" "}
+          {String(a[k] ?? "") || "blank"}
         </li>
       ))}
-      {Object.keys(a).length > keys.length ? <li>… and {Object.keys(a).length - keys.length} more cells</li> : null}
+      {Object.keys(a).length > keys.length ? (
+        <li>… and {Object.keys(a).length - keys.length} more cells</li>
+      ) : null}
     </ul>
   );
 }
 
 function InputsSection({ cells }: { cells: Record<string, string | number | boolean | null> }) {
-  const entered = Object.fromEntries(PLAN_COLUMNS.map((c) => [c.key, cells[c.key] === null || cells[c.key] === undefined ? "" : String(cells[c.key])]));
+  const entered = Object.fromEntries(
+    PLAN_COLUMNS.map((c) => [
+      c.key,
+      cells[c.key] === null || cells[c.key] === undefined ? "" : String(cells[c.key]),
+    ]),
+  );
   const { values } = readRowCells(PLAN_COLUMNS, entered);
   return (
-    <section className="rounded border border-zinc-200 bg-white p-3" aria-labelledby="inputs-heading" data-testid="plan-inputs">
+    <section
+      className="rounded border border-zinc-200 bg-white p-3"
+      aria-labelledby="inputs-heading"
+      data-testid="plan-inputs"
+    >
       <h2 id="inputs-heading" className="mb-2 text-sm font-semibold">
         Envelope and inputs
       </h2>
-      <p className="mb-2 text-xs text-zinc-500">Insulation values are the R-values added to the base assembly, as they are to be installed; a direct U-factor replaces both (see the assemblies below). Grey values are defaults.</p>
+      <p className="mb-2 text-xs text-zinc-500">
+        Insulation values are the R-values added to the base assembly, as they are to be installed; a direct
+        U-factor replaces both (see the assemblies below). Grey values are defaults.
+      </p>
       <div className="grid gap-x-6 gap-y-3 md:grid-cols-2 xl:grid-cols-4">
         {PLAN_COLUMN_GROUPS.map((group) => (
           <div key={group}>
@@ -325,8 +470,13 @@ function InputsSection({ cells }: { cells: Record<string, string | number | bool
                 return (
                   <div key={c.key} className="flex justify-between gap-2 border-b border-zinc-100 py-0.5">
                     <dt className="text-zinc-600">{c.header}</dt>
-                    <dd className={raw === "" ? "text-zinc-400" : "font-medium"} title={isFormula(raw) ? raw : undefined}>
-                      {typeof shown === "number" ? shown.toLocaleString("en-US", { maximumFractionDigits: 3 }) : String(shown ?? "")}
+                    <dd
+                      className={raw === "" ? "text-zinc-400" : "font-medium"}
+                      title={isFormula(raw) ? raw : undefined}
+                    >
+                      {typeof shown === "number"
+                        ? shown.toLocaleString("en-US", { maximumFractionDigits: 3 })
+                        : String(shown ?? "")}
                     </dd>
                   </div>
                 );
@@ -339,14 +489,28 @@ function InputsSection({ cells }: { cells: Record<string, string | number | bool
   );
 }
 
-function ApproveForm({ planId, revisionId, revisionNumber, memberName }: { planId: number; revisionId: number; revisionNumber: number; memberName: string }) {
+function ApproveForm({
+  planId,
+  revisionId,
+  revisionNumber,
+  memberName,
+}: {
+  planId: number;
+  revisionId: number;
+  revisionNumber: number;
+  memberName: string;
+}) {
   const queryClient = useQueryClient();
   const [name, setName] = useState(memberName);
   const [credential, setCredential] = useState("");
   const [date, setDate] = useState(new Date().toISOString().slice(0, 10));
   const [error, setError] = useState<ApiError | null>(null);
   const approve = useMutation({
-    mutationFn: () => api(`/api/plans/${planId}/approve`, { method: "POST", body: { revisionId, approverName: name, approverCredential: credential, approvedOn: date } }),
+    mutationFn: () =>
+      api(`/api/plans/${planId}/approve`, {
+        method: "POST",
+        body: { revisionId, approverName: name, approverCredential: credential, approvedOn: date },
+      }),
     onSuccess: () => {
       setError(null);
       void queryClient.invalidateQueries({ queryKey: ["plan", planId] });
@@ -366,11 +530,32 @@ function ApproveForm({ planId, revisionId, revisionNumber, memberName }: { planI
       noValidate
     >
       <h3 className="mb-2 text-xs font-semibold">Approve revision {revisionNumber}</h3>
-      <p className="mb-2 text-xs text-zinc-600">Approval records who checked this calculation. The approved revision is locked.</p>
+      <p className="mb-2 text-xs text-zinc-600">
+        Approval records who checked this calculation. The approved revision is locked.
+      </p>
       <FormError message={error && error.fieldErrors.length === 0 ? error.message : null} />
-      <TextField label="Approver name" name="approver-name" value={name} onChange={setName} error={fieldError("approverName")} />
-      <TextField label="Credential" name="approver-credential" value={credential} onChange={setCredential} error={fieldError("approverCredential")} />
-      <TextField label="Date" name="approved-on" type="date" value={date} onChange={setDate} error={fieldError("approvedOn")} />
+      <TextField
+        label="Approver name"
+        name="approver-name"
+        value={name}
+        onChange={setName}
+        error={fieldError("approverName")}
+      />
+      <TextField
+        label="Credential"
+        name="approver-credential"
+        value={credential}
+        onChange={setCredential}
+        error={fieldError("approverCredential")}
+      />
+      <TextField
+        label="Date"
+        name="approved-on"
+        type="date"
+        value={date}
+        onChange={setDate}
+        error={fieldError("approvedOn")}
+      />
       <Button type="submit" disabled={approve.isPending}>
         Approve revision {revisionNumber}
       </Button>

@@ -5,7 +5,11 @@ import { Bar, BarChart, CartesianGrid, Legend, ResponsiveContainer, Tooltip, XAx
 import { fmtInt } from "@/components/grid/grid-theme";
 import { FormError } from "@/components/ui/field";
 import type { LoadProcedure, PlanFacings } from "@/lib/load/results";
-import { compareProcedures, type ComponentDifference, type LoadDifference } from "@/lib/reports/procedure-compare";
+import {
+  compareProcedures,
+  type ComponentDifference,
+  type LoadDifference,
+} from "@/lib/reports/procedure-compare";
 
 /** One procedure's four facings as the plan sheet route answers them. */
 export interface ProcedureFacings {
@@ -22,13 +26,22 @@ const SIZING_COLOR = "#2360a8";
 const OTHER_COLOR = "#8a6d1f";
 
 const signed = (v: number) => `${v > 0 ? "+" : v < 0 ? "−" : ""}${fmtInt(Math.abs(v))}`;
-const pct = (v: number | null) => (v === null ? "—" : `${v > 0 ? "+" : v < 0 ? "−" : ""}${Math.abs(v).toFixed(1)} %`);
+const pct = (v: number | null) =>
+  v === null ? "—" : `${v > 0 ? "+" : v < 0 ? "−" : ""}${Math.abs(v).toFixed(1)} %`;
 
 /**
  * Both procedures side by side, per facing and per component, with their difference (the other
  * procedure minus the one that sizes equipment, in Btu/h and in % of the sizing one).
  */
-export function ProcedureComparison({ procedures, componentLabels, initialFacing }: { procedures: ProcedureFacings[]; componentLabels: Record<string, string>; initialFacing: string | null }) {
+export function ProcedureComparison({
+  procedures,
+  componentLabels,
+  initialFacing,
+}: {
+  procedures: ProcedureFacings[];
+  componentLabels: Record<string, string>;
+  initialFacing: string | null;
+}) {
   const sizing = procedures.find((p) => p.sizesEquipment);
   const other = procedures.find((p) => !p.sizesEquipment);
   const [facing, setFacing] = useState<string | null>(initialFacing);
@@ -39,7 +52,11 @@ export function ProcedureComparison({ procedures, componentLabels, initialFacing
   const b = TAG[other.procedure];
 
   return (
-    <section aria-labelledby="compare-heading" className="rounded border border-zinc-200 bg-white p-3" data-testid="procedure-comparison">
+    <section
+      aria-labelledby="compare-heading"
+      className="rounded border border-zinc-200 bg-white p-3"
+      data-testid="procedure-comparison"
+    >
       <h2 id="compare-heading" className="mb-1 text-sm font-semibold">
         Both procedures side by side
       </h2>
@@ -47,12 +64,17 @@ export function ProcedureComparison({ procedures, componentLabels, initialFacing
         <span className="font-medium text-zinc-800" data-testid="sizing-procedure">
           {sizing.label}
         </span>{" "}
-        sizes equipment (the account&apos;s procedure); shown beside it: {other.label}. Difference = {b} − {a}, in Btu/h and in % of {a}.
+        sizes equipment (the account&apos;s procedure); shown beside it: {other.label}. Difference = {b} − {a}
+        , in Btu/h and in % of {a}.
       </p>
       {procedures
         .filter((p) => p.error)
         .map((p) => (
-          <FormError key={p.procedure} testId={`procedure-error-${p.procedure}`} message={`${p.label}: not computed. ${p.error}`} />
+          <FormError
+            key={p.procedure}
+            testId={`procedure-error-${p.procedure}`}
+            message={`${p.label}: not computed. ${p.error}`}
+          />
         ))}
       {comparison && shownFacing ? (
         <div className="flex flex-col gap-4">
@@ -65,7 +87,12 @@ export function ProcedureComparison({ procedures, componentLabels, initialFacing
                     Front faces
                   </th>
                   {["Heating", "Cooling sensible", "Cooling latent", "Cooling total"].map((h) => (
-                    <th key={h} scope="colgroup" colSpan={4} className="border-l border-zinc-200 px-2 py-1 text-center font-medium">
+                    <th
+                      key={h}
+                      scope="colgroup"
+                      colSpan={4}
+                      className="border-l border-zinc-200 px-2 py-1 text-center font-medium"
+                    >
                       {h} (Btu/h)
                     </th>
                   ))}
@@ -78,7 +105,11 @@ export function ProcedureComparison({ procedures, componentLabels, initialFacing
               </thead>
               <tbody>
                 {comparison.facings.map((f) => (
-                  <tr key={f.label} className="border-t border-zinc-200" data-testid={`compare-facing-${f.label}`}>
+                  <tr
+                    key={f.label}
+                    className="border-t border-zinc-200"
+                    data-testid={`compare-facing-${f.label}`}
+                  >
                     <th scope="row" className="px-2 py-1 text-left font-medium">
                       {f.label}
                     </th>
@@ -99,7 +130,12 @@ export function ProcedureComparison({ procedures, componentLabels, initialFacing
                 <label htmlFor="compare-facing" className="block text-xs text-zinc-600">
                   Front facing
                 </label>
-                <select id="compare-facing" className="rounded border border-zinc-300 bg-white px-2 py-0.5 text-xs" value={shownFacing.label} onChange={(e) => setFacing(e.target.value)}>
+                <select
+                  id="compare-facing"
+                  className="rounded border border-zinc-300 bg-white px-2 py-0.5 text-xs"
+                  value={shownFacing.label}
+                  onChange={(e) => setFacing(e.target.value)}
+                >
                   {comparison.facings.map((f) => (
                     <option key={f.label} value={f.label}>
                       {f.label}
@@ -109,21 +145,60 @@ export function ProcedureComparison({ procedures, componentLabels, initialFacing
               </div>
             </div>
             <div className="grid gap-4 xl:grid-cols-3">
-              <ComponentTable testId="compare-heating-components" title="Heating" rows={shownFacing.heatingByComponent} total={shownFacing.heating} a={a} b={b} labels={componentLabels} heat />
-              <ComponentTable testId="compare-sensible-components" title="Cooling sensible" rows={shownFacing.coolingSensibleByComponent} total={shownFacing.coolingSensible} a={a} b={b} labels={componentLabels} />
-              <ComponentTable testId="compare-latent-components" title="Cooling latent" rows={shownFacing.coolingLatentByComponent} total={shownFacing.coolingLatent} a={a} b={b} labels={componentLabels} />
+              <ComponentTable
+                testId="compare-heating-components"
+                title="Heating"
+                rows={shownFacing.heatingByComponent}
+                total={shownFacing.heating}
+                a={a}
+                b={b}
+                labels={componentLabels}
+                heat
+              />
+              <ComponentTable
+                testId="compare-sensible-components"
+                title="Cooling sensible"
+                rows={shownFacing.coolingSensibleByComponent}
+                total={shownFacing.coolingSensible}
+                a={a}
+                b={b}
+                labels={componentLabels}
+              />
+              <ComponentTable
+                testId="compare-latent-components"
+                title="Cooling latent"
+                rows={shownFacing.coolingLatentByComponent}
+                total={shownFacing.coolingLatent}
+                a={a}
+                b={b}
+                labels={componentLabels}
+              />
             </div>
           </div>
 
           <div className="grid gap-4 xl:grid-cols-2">
-            <CompareChart title="Cooling total by facing" testId="chart-compare-facing" a={a} b={b} data={comparison.facings.map((f) => ({ name: `Front ${f.label}`, [a]: Math.round(f.coolingTotal.sizingBtuh), [b]: Math.round(f.coolingTotal.otherBtuh) }))} />
+            <CompareChart
+              title="Cooling total by facing"
+              testId="chart-compare-facing"
+              a={a}
+              b={b}
+              data={comparison.facings.map((f) => ({
+                name: `Front ${f.label}`,
+                [a]: Math.round(f.coolingTotal.sizingBtuh),
+                [b]: Math.round(f.coolingTotal.otherBtuh),
+              }))}
+            />
             <CompareChart
               title={`Cooling sensible by component (front ${shownFacing.label})`}
               testId="chart-compare-component"
               a={a}
               b={b}
               vertical
-              data={shownFacing.coolingSensibleByComponent.map((c) => ({ name: componentLabels[c.component] ?? c.component, [a]: Math.round(c.sizingBtuh), [b]: Math.round(c.otherBtuh) }))}
+              data={shownFacing.coolingSensibleByComponent.map((c) => ({
+                name: componentLabels[c.component] ?? c.component,
+                [a]: Math.round(c.sizingBtuh),
+                [b]: Math.round(c.otherBtuh),
+              }))}
             />
           </div>
         </div>
@@ -155,7 +230,9 @@ function DifferenceCells({ d, heat = false }: { d: LoadDifference; heat?: boolea
   const tone = heat ? "text-heat-700" : "text-cool-700";
   return (
     <>
-      <td className={`num border-l border-zinc-200 px-2 py-1 font-semibold ${tone}`}>{fmtInt(d.sizingBtuh)}</td>
+      <td className={`num border-l border-zinc-200 px-2 py-1 font-semibold ${tone}`}>
+        {fmtInt(d.sizingBtuh)}
+      </td>
       <td className={`num px-2 py-1 ${tone}`}>{fmtInt(d.otherBtuh)}</td>
       <td className="num px-2 py-1 text-zinc-700">{signed(d.differenceBtuh)}</td>
       <td className="num px-2 py-1 text-zinc-700">{pct(d.differencePct)}</td>
@@ -163,7 +240,25 @@ function DifferenceCells({ d, heat = false }: { d: LoadDifference; heat?: boolea
   );
 }
 
-function ComponentTable({ testId, title, rows, total, a, b, labels, heat = false }: { testId: string; title: string; rows: ComponentDifference[]; total: LoadDifference; a: string; b: string; labels: Record<string, string>; heat?: boolean }) {
+function ComponentTable({
+  testId,
+  title,
+  rows,
+  total,
+  a,
+  b,
+  labels,
+  heat = false,
+}: {
+  testId: string;
+  title: string;
+  rows: ComponentDifference[];
+  total: LoadDifference;
+  a: string;
+  b: string;
+  labels: Record<string, string>;
+  heat?: boolean;
+}) {
   return (
     <table className="w-full border-collapse text-xs" data-testid={testId}>
       <caption className="mb-1 text-left text-xs font-medium text-zinc-700">{title} (Btu/h)</caption>
@@ -195,7 +290,21 @@ function ComponentTable({ testId, title, rows, total, a, b, labels, heat = false
   );
 }
 
-function CompareChart({ title, testId, a, b, data, vertical = false }: { title: string; testId: string; a: string; b: string; data: Record<string, string | number>[]; vertical?: boolean }) {
+function CompareChart({
+  title,
+  testId,
+  a,
+  b,
+  data,
+  vertical = false,
+}: {
+  title: string;
+  testId: string;
+  a: string;
+  b: string;
+  data: Record<string, string | number>[];
+  vertical?: boolean;
+}) {
   return (
     <div data-testid={testId}>
       <h3 className="mb-1 text-xs font-semibold text-zinc-700">{title}</h3>

@@ -18,12 +18,33 @@ export interface ScheduleData {
   schedule: {
     systemTotals: SystemCount[];
     byMonth: (SystemCount & { month: string | null })[];
-    totals: { lotCount: number; lotsWithSystem: number; lotsWithoutSystem: number; costUsd: number; unpricedSystemCount: number };
+    totals: {
+      lotCount: number;
+      lotsWithSystem: number;
+      lotsWithoutSystem: number;
+      costUsd: number;
+      unpricedSystemCount: number;
+    };
     lotsWithoutSystem: { lotNumber: string; plannedStart: string | null; reason: string }[];
     caution: string;
   };
-  limits: { coolingMinPct: number; coolingMaxPct: number; heatPumpCoolingMaxPct: number; heatingMinPct: number; heatingMaxPct: number };
-  lots: { lotId: number; lotNumber: string; status: string; plannedStart: string | null; systemCode: string | null; overridden: boolean; reason: string | null; procedure: LoadProcedure | null }[];
+  limits: {
+    coolingMinPct: number;
+    coolingMaxPct: number;
+    heatPumpCoolingMaxPct: number;
+    heatingMinPct: number;
+    heatingMaxPct: number;
+  };
+  lots: {
+    lotId: number;
+    lotNumber: string;
+    status: string;
+    plannedStart: string | null;
+    systemCode: string | null;
+    overridden: boolean;
+    reason: string | null;
+    procedure: LoadProcedure | null;
+  }[];
   accountProcedure: LoadProcedure;
   procedures: { procedure: LoadProcedure; label: string; lotCount: number }[];
 }
@@ -35,7 +56,8 @@ const SYSTEM_TYPE_LABELS: Record<string, string> = {
   furnace: "Furnace only",
 };
 
-const usd = (value: number | null) => (value === null ? "no price" : value.toLocaleString("en-US", { style: "currency", currency: "USD" }));
+const usd = (value: number | null) =>
+  value === null ? "no price" : value.toLocaleString("en-US", { style: "currency", currency: "USD" });
 const int = (value: number) => value.toLocaleString("en-US");
 
 /** Counts per system, by month of planned start, totals and cost, lots without a system, the limits used. */
@@ -43,15 +65,19 @@ export function EquipmentScheduleView({ data }: { data: ScheduleData }) {
   const { schedule, limits } = data;
   const months = [...new Set(schedule.byMonth.map((l) => l.month ?? "no date"))];
   const codes = schedule.systemTotals.map((s) => s.systemCode);
-  const monthCount = (month: string, code: string) => schedule.byMonth.find((l) => (l.month ?? "no date") === month && l.systemCode === code)?.count ?? 0;
+  const monthCount = (month: string, code: string) =>
+    schedule.byMonth.find((l) => (l.month ?? "no date") === month && l.systemCode === code)?.count ?? 0;
 
   return (
     <section className="flex flex-col gap-4" data-testid="equipment-schedule">
       <div className="flex flex-wrap items-baseline justify-between gap-2">
         <h2 className="text-sm font-semibold">Equipment schedule — {data.community.name}</h2>
         <p className="text-xs text-zinc-600" data-testid="schedule-totals">
-          {int(schedule.totals.lotCount)} lots · {int(schedule.totals.lotsWithSystem)} with a system · {int(schedule.totals.lotsWithoutSystem)} without · total cost {usd(schedule.totals.costUsd)}
-          {schedule.totals.unpricedSystemCount > 0 ? ` (${schedule.totals.unpricedSystemCount} systems without a price not included)` : ""}
+          {int(schedule.totals.lotCount)} lots · {int(schedule.totals.lotsWithSystem)} with a system ·{" "}
+          {int(schedule.totals.lotsWithoutSystem)} without · total cost {usd(schedule.totals.costUsd)}
+          {schedule.totals.unpricedSystemCount > 0
+            ? ` (${schedule.totals.unpricedSystemCount} systems without a price not included)`
+            : ""}
         </p>
       </div>
 
@@ -61,11 +87,22 @@ export function EquipmentScheduleView({ data }: { data: ScheduleData }) {
         rowKey={(s) => s.systemCode}
         empty="No lot has a system yet."
         columns={[
-          { header: "System", cell: (s) => <span data-testid={`system-code-${s.systemCode}`}>{s.systemCode}</span> },
+          {
+            header: "System",
+            cell: (s) => <span data-testid={`system-code-${s.systemCode}`}>{s.systemCode}</span>,
+          },
           { header: "Type", cell: (s) => SYSTEM_TYPE_LABELS[s.systemType] ?? s.systemType },
           { header: "Model numbers", cell: (s) => s.modelNumber },
-          { header: "Nominal tons", numeric: true, cell: (s) => (s.nominalTons === null ? "—" : s.nominalTons.toFixed(1)) },
-          { header: "Count", numeric: true, cell: (s) => <span data-testid={`system-count-${s.systemCode}`}>{int(s.count)}</span> },
+          {
+            header: "Nominal tons",
+            numeric: true,
+            cell: (s) => (s.nominalTons === null ? "—" : s.nominalTons.toFixed(1)),
+          },
+          {
+            header: "Count",
+            numeric: true,
+            cell: (s) => <span data-testid={`system-count-${s.systemCode}`}>{int(s.count)}</span>,
+          },
           { header: "Unit price", numeric: true, cell: (s) => usd(s.unitPriceUsd) },
           { header: "Extended cost", numeric: true, cell: (s) => usd(s.extendedCostUsd) },
         ]}
@@ -81,8 +118,16 @@ export function EquipmentScheduleView({ data }: { data: ScheduleData }) {
             empty=""
             columns={[
               { header: "Month", cell: (m) => m },
-              ...codes.map((code) => ({ header: code, numeric: true, cell: (m: string) => int(monthCount(m, code)) })),
-              { header: "Lots", numeric: true, cell: (m: string) => int(codes.reduce((sum, code) => sum + monthCount(m, code), 0)) },
+              ...codes.map((code) => ({
+                header: code,
+                numeric: true,
+                cell: (m: string) => int(monthCount(m, code)),
+              })),
+              {
+                header: "Lots",
+                numeric: true,
+                cell: (m: string) => int(codes.reduce((sum, code) => sum + monthCount(m, code), 0)),
+              },
             ]}
           />
         </div>
@@ -105,12 +150,25 @@ export function EquipmentScheduleView({ data }: { data: ScheduleData }) {
 
       <p className="text-xs text-zinc-600" data-testid="schedule-procedures">
         Systems chosen for loads by{" "}
-        {data.procedures.length === 0 ? "no procedure yet (no lot has loads)" : data.procedures.map((p) => `${PROCEDURE_SHORT_LABELS[p.procedure]} (${int(p.lotCount)} lot${p.lotCount === 1 ? "" : "s"})`).join("; ")}. The account sizes equipment by {PROCEDURE_SHORT_LABELS[data.accountProcedure]}
-        {data.procedures.some((p) => p.procedure !== data.accountProcedure) ? "; lots frozen for permit keep the procedure of their snapshot" : ""}.
+        {data.procedures.length === 0
+          ? "no procedure yet (no lot has loads)"
+          : data.procedures
+              .map(
+                (p) =>
+                  `${PROCEDURE_SHORT_LABELS[p.procedure]} (${int(p.lotCount)} lot${p.lotCount === 1 ? "" : "s"})`,
+              )
+              .join("; ")}
+        . The account sizes equipment by {PROCEDURE_SHORT_LABELS[data.accountProcedure]}
+        {data.procedures.some((p) => p.procedure !== data.accountProcedure)
+          ? "; lots frozen for permit keep the procedure of their snapshot"
+          : ""}
+        .
       </p>
       <p className="text-xs text-zinc-600" data-testid="limits-used">
-        Sizing limits used: cooling capacity {limits.coolingMinPct}–{limits.coolingMaxPct} % of the cooling total load (a heat pump where the heating load is the larger, up to {limits.heatPumpCoolingMaxPct} %); heating capacity at least {limits.heatingMinPct} % of the heating load, furnace
-        output at most {limits.heatingMaxPct} %.
+        Sizing limits used: cooling capacity {limits.coolingMinPct}–{limits.coolingMaxPct} % of the cooling
+        total load (a heat pump where the heating load is the larger, up to {limits.heatPumpCoolingMaxPct} %);
+        heating capacity at least {limits.heatingMinPct} % of the heating load, furnace output at most{" "}
+        {limits.heatingMaxPct} %.
       </p>
       <p className="text-xs text-zinc-500">{schedule.caution}</p>
     </section>

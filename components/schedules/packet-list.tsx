@@ -17,13 +17,21 @@ interface PacketRow {
   createdByName: string;
 }
 
-const KIND_LABELS: Record<PacketRow["kind"], string> = { "permit-packet": "Permit packet", "equipment-schedule": "Equipment schedule", "permit-schedule": "Permit schedule" };
+const KIND_LABELS: Record<PacketRow["kind"], string> = {
+  "permit-packet": "Permit packet",
+  "equipment-schedule": "Equipment schedule",
+  "permit-schedule": "Permit schedule",
+};
 
-const when = (iso: string) => new Date(iso).toLocaleString("en-US", { dateStyle: "medium", timeStyle: "short" });
+const when = (iso: string) =>
+  new Date(iso).toLocaleString("en-US", { dateStyle: "medium", timeStyle: "short" });
 
 /** The files kept for a community: permit packets and e-mailed schedules, with who made them and when. */
 export function PacketList({ communityId }: { communityId: number }) {
-  const list = useQuery({ queryKey: ["packets", communityId], queryFn: () => api<{ packets: PacketRow[] }>(`/api/communities/${communityId}/packets`) });
+  const list = useQuery({
+    queryKey: ["packets", communityId],
+    queryFn: () => api<{ packets: PacketRow[] }>(`/api/communities/${communityId}/packets`),
+  });
   return (
     <section>
       <h2 className="mb-2 text-sm font-semibold">Kept files</h2>
@@ -41,18 +49,34 @@ export function PacketList({ communityId }: { communityId: number }) {
             { header: "What", cell: (p) => KIND_LABELS[p.kind] },
             { header: "Lots", numeric: true, cell: (p) => p.lotCount.toLocaleString("en-US") },
             { header: "Sent to", cell: (p) => (p.sentTo && p.sentTo.length > 0 ? p.sentTo.join(", ") : "—") },
-            { header: "Size", numeric: true, cell: (p) => (p.state === "ready" ? `${(p.sizeBytes / 1e6).toFixed(2)} MB` : "") },
+            {
+              header: "Size",
+              numeric: true,
+              cell: (p) => (p.state === "ready" ? `${(p.sizeBytes / 1e6).toFixed(2)} MB` : ""),
+            },
             {
               header: "File",
               cell: (p) =>
                 p.state === "failed" ? (
                   <span className="text-red-700">not made: {p.error}</span>
                 ) : p.state !== "ready" ? (
-                  <span className="text-zinc-500">{p.state === "queued" ? "waiting to be made…" : p.state === "sending" ? "sending…" : "being made…"}</span>
+                  <span className="text-zinc-500">
+                    {p.state === "queued"
+                      ? "waiting to be made…"
+                      : p.state === "sending"
+                        ? "sending…"
+                        : "being made…"}
+                  </span>
                 ) : (
-                <a className="text-accent-700 hover:underline" href={`/api/packets/${p.id}`} target="_blank" rel="noopener" data-testid={`packet-download-${p.id}`}>
-                  {p.fileName}
-                </a>
+                  <a
+                    className="text-accent-700 hover:underline"
+                    href={`/api/packets/${p.id}`}
+                    target="_blank"
+                    rel="noopener"
+                    data-testid={`packet-download-${p.id}`}
+                  >
+                    {p.fileName}
+                  </a>
                 ),
             },
           ]}

@@ -17,17 +17,32 @@ interface CommunityItem {
   locality: string;
 }
 
-const STATUS_LABELS: Record<string, string> = { planned: "Planned", permit_submitted: "Permit submitted", permitted: "Permitted", built: "Built" };
+const STATUS_LABELS: Record<string, string> = {
+  planned: "Planned",
+  permit_submitted: "Permit submitted",
+  permitted: "Permitted",
+  built: "Built",
+};
 
 /** The Schedules page: one community at a time; generate and send controls only for roles that may. */
-export function SchedulesWorkspace({ initialCommunityId, canExport }: { initialCommunityId: number | null; canExport: boolean }) {
+export function SchedulesWorkspace({
+  initialCommunityId,
+  canExport,
+}: {
+  initialCommunityId: number | null;
+  canExport: boolean;
+}) {
   const router = useRouter();
   const queryClient = useQueryClient();
-  const list = useQuery({ queryKey: ["communities"], queryFn: () => api<{ communities: CommunityItem[] }>("/api/communities") });
+  const list = useQuery({
+    queryKey: ["communities"],
+    queryFn: () => api<{ communities: CommunityItem[] }>("/api/communities"),
+  });
   const [communityId, setCommunityId] = useState<number | null>(initialCommunityId);
 
   useEffect(() => {
-    if (communityId === null && list.data && list.data.communities.length > 0) setCommunityId(list.data.communities[0].id);
+    if (communityId === null && list.data && list.data.communities.length > 0)
+      setCommunityId(list.data.communities[0].id);
   }, [communityId, list.data]);
 
   const schedule = useQuery({
@@ -42,7 +57,9 @@ export function SchedulesWorkspace({ initialCommunityId, canExport }: { initialC
   if (list.data.communities.length === 0) {
     return (
       <>
-        <p className="rounded border border-dashed border-zinc-300 bg-white px-4 py-6 text-center text-zinc-500">There are no communities yet; add one on the Communities page.</p>
+        <p className="rounded border border-dashed border-zinc-300 bg-white px-4 py-6 text-center text-zinc-500">
+          There are no communities yet; add one on the Communities page.
+        </p>
         <Caution className="mt-4" />
       </>
     );
@@ -80,19 +97,39 @@ export function SchedulesWorkspace({ initialCommunityId, canExport }: { initialC
         {communityId !== null ? (
           <div className="flex flex-wrap gap-x-4 gap-y-1 text-xs" data-testid="schedule-exports">
             <span className="font-medium text-zinc-700">Export:</span>
-            <a className="text-accent-700 hover:underline" data-testid="equipment-schedule-xlsx" href={`/api/communities/${communityId}/equipment-schedule?format=xlsx`}>
+            <a
+              className="text-accent-700 hover:underline"
+              data-testid="equipment-schedule-xlsx"
+              href={`/api/communities/${communityId}/equipment-schedule?format=xlsx`}
+            >
               Equipment schedule XLSX
             </a>
-            <a className="text-accent-700 hover:underline" data-testid="equipment-schedule-csv" href={`/api/communities/${communityId}/equipment-schedule?format=csv`}>
+            <a
+              className="text-accent-700 hover:underline"
+              data-testid="equipment-schedule-csv"
+              href={`/api/communities/${communityId}/equipment-schedule?format=csv`}
+            >
               Equipment schedule CSV
             </a>
-            <a className="text-accent-700 hover:underline" data-testid="permit-schedule-xlsx" href={`/api/communities/${communityId}/permit-schedule?format=xlsx`}>
+            <a
+              className="text-accent-700 hover:underline"
+              data-testid="permit-schedule-xlsx"
+              href={`/api/communities/${communityId}/permit-schedule?format=xlsx`}
+            >
               Permit schedule XLSX
             </a>
-            <a className="text-accent-700 hover:underline" data-testid="permit-schedule-csv" href={`/api/communities/${communityId}/permit-schedule?format=csv`}>
+            <a
+              className="text-accent-700 hover:underline"
+              data-testid="permit-schedule-csv"
+              href={`/api/communities/${communityId}/permit-schedule?format=csv`}
+            >
               Permit schedule CSV
             </a>
-            <a className="text-accent-700 hover:underline" data-testid="account-equipment-schedule" href="/api/equipment-schedule?format=xlsx">
+            <a
+              className="text-accent-700 hover:underline"
+              data-testid="account-equipment-schedule"
+              href="/api/equipment-schedule?format=xlsx"
+            >
               Equipment schedule, all communities XLSX
             </a>
           </div>
@@ -107,13 +144,26 @@ export function SchedulesWorkspace({ initialCommunityId, canExport }: { initialC
 
       {data && communityId !== null && canExport ? (
         <div className="grid gap-4 lg:grid-cols-2">
-          <PacketMaker key={`packet-${communityId}`} communityId={communityId} lotCount={data.lots.length} permitLotCount={permitLotCount} onMade={refreshPackets} />
-          <SendForm key={`send-${communityId}`} communityId={communityId} lotCount={data.lots.length} permitLotCount={permitLotCount} onSent={refreshPackets} />
+          <PacketMaker
+            key={`packet-${communityId}`}
+            communityId={communityId}
+            lotCount={data.lots.length}
+            permitLotCount={permitLotCount}
+            onMade={refreshPackets}
+          />
+          <SendForm
+            key={`send-${communityId}`}
+            communityId={communityId}
+            lotCount={data.lots.length}
+            permitLotCount={permitLotCount}
+            onSent={refreshPackets}
+          />
         </div>
       ) : null}
       {!canExport ? (
         <p className="text-xs text-zinc-600" data-testid="schedules-read-only">
-          Your role reads the schedules; making permit packets and sending files is for admins, designers, reviewers and purchasing.
+          Your role reads the schedules; making permit packets and sending files is for admins, designers,
+          reviewers and purchasing.
         </p>
       ) : null}
 
@@ -131,11 +181,25 @@ export function SchedulesWorkspace({ initialCommunityId, canExport }: { initialC
               { header: "Lot", cell: (l) => l.lotNumber },
               { header: "Status", cell: (l) => STATUS_LABELS[l.status] ?? l.status },
               { header: "Planned start", cell: (l) => l.plannedStart ?? "—" },
-              { header: "System", cell: (l) => (l.systemCode ? `${l.systemCode}${l.overridden ? " (override)" : ""}` : <span className="text-zinc-500">none — {l.reason}</span>) },
+              {
+                header: "System",
+                cell: (l) =>
+                  l.systemCode ? (
+                    `${l.systemCode}${l.overridden ? " (override)" : ""}`
+                  ) : (
+                    <span className="text-zinc-500">none — {l.reason}</span>
+                  ),
+              },
               {
                 header: "Report",
                 cell: (l) => (
-                  <a className="text-accent-700 hover:underline" href={`/api/lots/${l.lotId}/report`} target="_blank" rel="noopener" data-testid={`lot-report-${l.lotNumber}`}>
+                  <a
+                    className="text-accent-700 hover:underline"
+                    href={`/api/lots/${l.lotId}/report`}
+                    target="_blank"
+                    rel="noopener"
+                    data-testid={`lot-report-${l.lotNumber}`}
+                  >
                     PDF
                   </a>
                 ),

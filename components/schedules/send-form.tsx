@@ -11,7 +11,10 @@ type Choice = "permit-packet-all" | "permit-packet-permit" | "equipment-schedule
 
 const CHOICES: { value: Choice; label: (n: { all: number; permit: number }) => string }[] = [
   { value: "permit-packet-all", label: (n) => `Permit packet, all lots (PDF, ${n.all} lots)` },
-  { value: "permit-packet-permit", label: (n) => `Permit packet, lots submitted for permit (PDF, ${n.permit} lots)` },
+  {
+    value: "permit-packet-permit",
+    label: (n) => `Permit packet, lots submitted for permit (PDF, ${n.permit} lots)`,
+  },
   { value: "equipment-schedule", label: () => "Equipment schedule (XLSX)" },
   { value: "permit-schedule", label: () => "Permit schedule (XLSX)" },
 ];
@@ -25,7 +28,17 @@ export function splitAddresses(text: string): string[] {
 }
 
 /** E-mail a packet or a schedule; the server checks every address and keeps the file with who sent it. */
-export function SendForm({ communityId, lotCount, permitLotCount, onSent }: { communityId: number; lotCount: number; permitLotCount: number; onSent: () => void }) {
+export function SendForm({
+  communityId,
+  lotCount,
+  permitLotCount,
+  onSent,
+}: {
+  communityId: number;
+  lotCount: number;
+  permitLotCount: number;
+  onSent: () => void;
+}) {
   const [addresses, setAddresses] = useState("");
   const [choice, setChoice] = useState<Choice>("permit-packet-all");
   const [packetId, setPacketId] = useState<number | null>(null);
@@ -45,7 +58,10 @@ export function SendForm({ communityId, lotCount, permitLotCount, onSent }: { co
     },
   });
   // A worker makes and sends the file: follow it until it is sent (or failed), then list it again.
-  const progress = usePolled<{ packet: PacketProgress }>(packetId ? `/api/packets/${packetId}/status` : null, packetFinished);
+  const progress = usePolled<{ packet: PacketProgress }>(
+    packetId ? `/api/packets/${packetId}/status` : null,
+    packetFinished,
+  );
   const packet = progress.data?.packet ?? null;
   const reported = useRef<number | null>(null);
   useEffect(() => {
@@ -100,7 +116,12 @@ export function SendForm({ communityId, lotCount, permitLotCount, onSent }: { co
           <label htmlFor="send-what" className="mb-1 block text-xs font-medium text-zinc-700">
             What to send
           </label>
-          <select id="send-what" value={choice} onChange={(e) => setChoice(e.target.value as Choice)} className="w-full rounded border border-zinc-300 bg-white px-2 py-1.5">
+          <select
+            id="send-what"
+            value={choice}
+            onChange={(e) => setChoice(e.target.value as Choice)}
+            className="w-full rounded border border-zinc-300 bg-white px-2 py-1.5"
+          >
             {CHOICES.map((c) => (
               <option key={c.value} value={c.value}>
                 {c.label({ all: lotCount, permit: permitLotCount })}
@@ -108,10 +129,27 @@ export function SendForm({ communityId, lotCount, permitLotCount, onSent }: { co
             ))}
           </select>
         </div>
-        <FormError message={error && addressErrors.length === 0 ? error.message : packet?.state === "failed" ? `Nothing was sent: ${packet.error ?? "unknown reason"}` : null} testId="send-error" />
-        {working ? <WorkingBar label={`${packet ? PACKET_STATE_WORDS[packet.state] : "Asking for"} the file…`} testId="send-progress" /> : null}
+        <FormError
+          message={
+            error && addressErrors.length === 0
+              ? error.message
+              : packet?.state === "failed"
+                ? `Nothing was sent: ${packet.error ?? "unknown reason"}`
+                : null
+          }
+          testId="send-error"
+        />
+        {working ? (
+          <WorkingBar
+            label={`${packet ? PACKET_STATE_WORDS[packet.state] : "Asking for"} the file…`}
+            testId="send-progress"
+          />
+        ) : null}
         {sentTo && !working ? (
-          <p className="mb-3 rounded border border-accent-100 bg-accent-50 px-3 py-2 text-xs text-accent-800" data-testid="send-result">
+          <p
+            className="mb-3 rounded border border-accent-100 bg-accent-50 px-3 py-2 text-xs text-accent-800"
+            data-testid="send-result"
+          >
             Sent to {sentTo.join(", ")}. The file is kept in the list below.
           </p>
         ) : null}

@@ -6,7 +6,13 @@ import { useEffect, useState } from "react";
 export const PERMIT_STATUS_VALUES = ["permit_submitted", "permitted", "built"] as const;
 
 /** What a packet's state says to the person waiting for it. */
-export const PACKET_STATE_WORDS = { queued: "Waiting to make", rendering: "Making", sending: "Sending", ready: "Made", failed: "Could not make" } as const;
+export const PACKET_STATE_WORDS = {
+  queued: "Waiting to make",
+  rendering: "Making",
+  sending: "Sending",
+  ready: "Made",
+  failed: "Could not make",
+} as const;
 
 /**
  * Progress while a worker makes a file: a packet reports its stage, not a percentage, so the
@@ -25,7 +31,12 @@ export function WorkingBar({ label, testId }: { label: string; testId: string })
         <span>{label}</span>
         <span className="num">{seconds} s</span>
       </div>
-      <div role="progressbar" aria-label={label} aria-valuetext={`working, ${seconds} seconds`} className="h-2 overflow-hidden rounded bg-zinc-200">
+      <div
+        role="progressbar"
+        aria-label={label}
+        aria-valuetext={`working, ${seconds} seconds`}
+        className="h-2 overflow-hidden rounded bg-zinc-200"
+      >
         <div className="h-full w-1/3 animate-pulse rounded bg-accent-600" />
       </div>
     </div>

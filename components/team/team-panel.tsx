@@ -24,7 +24,8 @@ export function TeamPanel({ canManage, currentUserId }: { canManage: boolean; cu
   const onError = (e: Error) => setActionError(e.message);
 
   const changeRole = useMutation({
-    mutationFn: ({ membershipId, role }: { membershipId: number; role: Role }) => api(`/api/team/members/${membershipId}`, { method: "PATCH", body: { role } }),
+    mutationFn: ({ membershipId, role }: { membershipId: number; role: Role }) =>
+      api(`/api/team/members/${membershipId}`, { method: "PATCH", body: { role } }),
     onSuccess: () => {
       setActionError(null);
       setNotice("Role changed.");
@@ -62,7 +63,10 @@ export function TeamPanel({ canManage, currentUserId }: { canManage: boolean; cu
             {notice}
           </p>
         ) : null}
-        <table className="w-full border-collapse overflow-hidden rounded border border-zinc-200 bg-white" data-testid="members-table">
+        <table
+          className="w-full border-collapse overflow-hidden rounded border border-zinc-200 bg-white"
+          data-testid="members-table"
+        >
           <thead className="bg-zinc-100 text-left text-xs text-zinc-600">
             <tr>
               <th className="px-3 py-2 font-medium">Name</th>
@@ -81,7 +85,9 @@ export function TeamPanel({ canManage, currentUserId }: { canManage: boolean; cu
                     <select
                       aria-label={`Role of ${m.name}`}
                       value={m.role}
-                      onChange={(e) => changeRole.mutate({ membershipId: m.membershipId, role: e.target.value as Role })}
+                      onChange={(e) =>
+                        changeRole.mutate({ membershipId: m.membershipId, role: e.target.value as Role })
+                      }
                       className="rounded border border-zinc-300 bg-white px-2 py-1"
                     >
                       {ROLES.map((r) => (
@@ -103,7 +109,12 @@ export function TeamPanel({ canManage, currentUserId }: { canManage: boolean; cu
                         variant="danger"
                         className="px-2 py-1 text-xs"
                         onClick={() => {
-                          if (window.confirm(`Remove ${m.name} from this account? Their work stays in the history.`)) remove.mutate(m.membershipId);
+                          if (
+                            window.confirm(
+                              `Remove ${m.name} from this account? Their work stays in the history.`,
+                            )
+                          )
+                            remove.mutate(m.membershipId);
                         }}
                       >
                         Remove
@@ -119,15 +130,24 @@ export function TeamPanel({ canManage, currentUserId }: { canManage: boolean; cu
         {team.data.invitations.length > 0 ? (
           <>
             <h2 className="mb-2 mt-6 text-sm font-semibold">Invitations waiting</h2>
-            <ul className="divide-y divide-zinc-200 rounded border border-zinc-200 bg-white" data-testid="invitations-list">
+            <ul
+              className="divide-y divide-zinc-200 rounded border border-zinc-200 bg-white"
+              data-testid="invitations-list"
+            >
               {team.data.invitations.map((i) => (
                 <li key={i.invitationId} className="flex items-center justify-between px-3 py-2">
                   <span>
                     {i.name} <span className="text-zinc-500">({i.email})</span> · {ROLE_LABELS[i.role]}
-                    <span className="ml-2 text-xs text-zinc-500">expires {new Date(i.expiresAt).toLocaleDateString()}</span>
+                    <span className="ml-2 text-xs text-zinc-500">
+                      expires {new Date(i.expiresAt).toLocaleDateString()}
+                    </span>
                   </span>
                   {canManage ? (
-                    <Button variant="secondary" className="px-2 py-1 text-xs" onClick={() => withdraw.mutate(i.invitationId)}>
+                    <Button
+                      variant="secondary"
+                      className="px-2 py-1 text-xs"
+                      onClick={() => withdraw.mutate(i.invitationId)}
+                    >
                       Withdraw
                     </Button>
                   ) : null}
@@ -138,7 +158,14 @@ export function TeamPanel({ canManage, currentUserId }: { canManage: boolean; cu
         ) : null}
       </section>
       <aside>
-        {canManage ? <InviteForm onInvited={() => { setNotice("Invitation sent."); void refresh(); }} /> : null}
+        {canManage ? (
+          <InviteForm
+            onInvited={() => {
+              setNotice("Invitation sent.");
+              void refresh();
+            }}
+          />
+        ) : null}
         <h2 className="mb-2 mt-4 text-sm font-semibold">Roles</h2>
         <dl className="space-y-1.5 text-xs text-zinc-600">
           {ROLES.map((r) => (
@@ -181,14 +208,29 @@ function InviteForm({ onInvited }: { onInvited: () => void }) {
       data-testid="invite-form"
     >
       <h2 className="mb-3 text-sm font-semibold">Invite a member</h2>
-      <FormError message={error && error.fieldErrors.length === 0 ? error.message : null} testId="invite-error" />
+      <FormError
+        message={error && error.fieldErrors.length === 0 ? error.message : null}
+        testId="invite-error"
+      />
       <TextField label="Name" name="invite-name" value={name} onChange={setName} error={fieldError("name")} />
-      <TextField label="E-mail" name="invite-email" type="email" value={email} onChange={setEmail} error={fieldError("email")} />
+      <TextField
+        label="E-mail"
+        name="invite-email"
+        type="email"
+        value={email}
+        onChange={setEmail}
+        error={fieldError("email")}
+      />
       <div className="mb-3">
         <label htmlFor="invite-role" className="mb-1 block text-xs font-medium text-zinc-700">
           Role
         </label>
-        <select id="invite-role" value={role} onChange={(e) => setRole(e.target.value as Role)} className="w-full rounded border border-zinc-300 bg-white px-2 py-1.5">
+        <select
+          id="invite-role"
+          value={role}
+          onChange={(e) => setRole(e.target.value as Role)}
+          className="w-full rounded border border-zinc-300 bg-white px-2 py-1.5"
+        >
           {ROLES.map((r) => (
             <option key={r} value={r}>
               {ROLE_LABELS[r]}

@@ -4,7 +4,10 @@ export const CAUTION_TEXT =
 
 export function Caution({ className = "" }: { className?: string }) {
   return (
-    <p data-testid="caution" className={`rounded border border-amber-200 bg-caution-50 px-3 py-2 text-xs text-caution-800 ${className}`}>
+    <p
+      data-testid="caution"
+      className={`rounded border border-amber-200 bg-caution-50 px-3 py-2 text-xs text-caution-800 ${className}`}
+    >
       {CAUTION_TEXT}
     </p>
   );

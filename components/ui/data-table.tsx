@@ -12,7 +12,12 @@ export function DataTable<T>({
   testId?: string;
   rowKey: (row: T) => string | number;
 }) {
-  if (rows.length === 0) return <p className="rounded border border-dashed border-zinc-300 bg-white px-4 py-6 text-center text-zinc-500">{empty}</p>;
+  if (rows.length === 0)
+    return (
+      <p className="rounded border border-dashed border-zinc-300 bg-white px-4 py-6 text-center text-zinc-500">
+        {empty}
+      </p>
+    );
   return (
     <div className="overflow-x-auto rounded border border-zinc-200 bg-white">
       <table className="w-full border-collapse" data-testid={testId}>

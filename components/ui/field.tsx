@@ -50,20 +50,31 @@ export function TextField({
 export function FormError({ message, testId = "form-error" }: { message: string | null; testId?: string }) {
   if (!message) return null;
   return (
-    <p data-testid={testId} className="mb-3 rounded border border-red-200 bg-red-50 px-3 py-2 text-xs text-red-800">
+    <p
+      data-testid={testId}
+      className="mb-3 rounded border border-red-200 bg-red-50 px-3 py-2 text-xs text-red-800"
+    >
       {message}
     </p>
   );
 }
 
-export function Button({ children, variant = "primary", className = "", ...rest }: React.ButtonHTMLAttributes<HTMLButtonElement> & { variant?: "primary" | "secondary" | "danger" }) {
+export function Button({
+  children,
+  variant = "primary",
+  className = "",
+  ...rest
+}: React.ButtonHTMLAttributes<HTMLButtonElement> & { variant?: "primary" | "secondary" | "danger" }) {
   const styles = {
     primary: "bg-accent-600 text-white hover:bg-accent-700 disabled:bg-zinc-400",
     secondary: "border border-zinc-300 bg-white text-zinc-800 hover:bg-zinc-100 disabled:text-zinc-400",
     danger: "border border-red-300 bg-white text-red-700 hover:bg-red-50",
   }[variant];
   return (
-    <button className={`inline-flex items-center justify-center rounded px-3 py-1.5 text-sm font-medium ${styles} ${className}`} {...rest}>
+    <button
+      className={`inline-flex items-center justify-center rounded px-3 py-1.5 text-sm font-medium ${styles} ${className}`}
+      {...rest}
+    >
       {children}
     </button>
   );

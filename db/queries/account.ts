@@ -9,9 +9,15 @@ import { recomputeLots } from "../recompute";
 
 /** The account's load procedure, the choices with their labels, and how many lots are frozen with a procedure of their own. */
 export async function getLoadProcedure({ db, accountId }: { db: Database; accountId: number }) {
-  const [account] = await db.select({ procedure: accounts.loadProcedure }).from(accounts).where(eq(accounts.id, accountId));
+  const [account] = await db
+    .select({ procedure: accounts.loadProcedure })
+    .from(accounts)
+    .where(eq(accounts.id, accountId));
   if (!account) throw notFound("That account");
-  const [{ frozen }] = await db.select({ frozen: count() }).from(lots).where(and(eq(lots.accountId, accountId), isNotNull(lots.permitSnapshot)));
+  const [{ frozen }] = await db
+    .select({ frozen: count() })
+    .from(lots)
+    .where(and(eq(lots.accountId, accountId), isNotNull(lots.permitSnapshot)));
   return {
     procedure: account.procedure,
     choices: LOAD_PROCEDURES.map((procedure) => ({ procedure, label: LOAD_PROCEDURE_LABELS[procedure] })),
@@ -25,14 +31,34 @@ export async function getLoadProcedure({ db, accountId }: { db: Database; accoun
  * frozen for permit keep their snapshot (its procedure included). One history entry. `from` is
  * the procedure the admin saw: when another admin changed it since, nothing is written.
  */
-export async function setLoadProcedure({ db, accountId, userId, procedure, from }: { db: Database; accountId: number; userId: number; procedure: LoadProcedure; from: LoadProcedure }) {
+export async function setLoadProcedure({
+  db,
+  accountId,
+  userId,
+  procedure,
+  from,
+}: {
+  db: Database;
+  accountId: number;
+  userId: number;
+  procedure: LoadProcedure;
+  from: LoadProcedure;
+}) {
   return db.transaction(async (tx) => {
-    const [account] = await tx.select({ procedure: accounts.loadProcedure }).from(accounts).where(eq(accounts.id, accountId)).for("update");
+    const [account] = await tx
+      .select({ procedure: accounts.loadProcedure })
+      .from(accounts)
+      .where(eq(accounts.id, accountId))
+      .for("update");
     if (!account) throw notFound("That account");
     if (account.procedure !== from) {
-      throw new AppError("conflict", `The load procedure was changed by someone else since you loaded it (it is now ${LOAD_PROCEDURE_LABELS[account.procedure]}). Nothing was saved; reload to see it.`);
+      throw new AppError(
+        "conflict",
+        `The load procedure was changed by someone else since you loaded it (it is now ${LOAD_PROCEDURE_LABELS[account.procedure]}). Nothing was saved; reload to see it.`,
+      );
     }
-    if (account.procedure === procedure) return { procedure, changed: false, lotsRecomputed: 0, lotsChanged: 0 };
+    if (account.procedure === procedure)
+      return { procedure, changed: false, lotsRecomputed: 0, lotsChanged: 0 };
     await tx.update(accounts).set({ loadProcedure: procedure }).where(eq(accounts.id, accountId));
     const recomputed = await recomputeLots(tx, { accountId });
     await recordAudit(tx, {
@@ -45,6 +71,11 @@ export async function setLoadProcedure({ db, accountId, userId, procedure, from 
       before: { procedure: account.procedure },
       after: { procedure, lotsRecomputed: recomputed.recomputed, lotsChanged: recomputed.changed },
     });
-    return { procedure, changed: true, lotsRecomputed: recomputed.recomputed, lotsChanged: recomputed.changed };
+    return {
+      procedure,
+      changed: true,
+      lotsRecomputed: recomputed.recomputed,
+      lotsChanged: recomputed.changed,
+    };
   });
 }

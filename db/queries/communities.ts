@@ -19,17 +19,53 @@ function validConditions(raw: unknown) {
   return parsed.value;
 }
 
-async function assertNameFree(db: Pick<Database, "select">, accountId: number, name: string, exceptId?: number) {
-  const [clash] = await db.select({ id: communities.id }).from(communities).where(and(eq(communities.accountId, accountId), eq(communities.name, name)));
-  if (clash && clash.id !== exceptId) throw new AppError("conflict", `A community named "${name}" exists already.`, [{ field: "name", message: "Already used" }]);
+async function assertNameFree(
+  db: Pick<Database, "select">,
+  accountId: number,
+  name: string,
+  exceptId?: number,
+) {
+  const [clash] = await db
+    .select({ id: communities.id })
+    .from(communities)
+    .where(and(eq(communities.accountId, accountId), eq(communities.name, name)));
+  if (clash && clash.id !== exceptId)
+    throw new AppError("conflict", `A community named "${name}" exists already.`, [
+      { field: "name", message: "Already used" },
+    ]);
 }
 
-export async function createCommunity({ db, accountId, userId, name, locality, conditions }: { db: Database; accountId: number; userId: number; name: string; locality: string; conditions: unknown }) {
+export async function createCommunity({
+  db,
+  accountId,
+  userId,
+  name,
+  locality,
+  conditions,
+}: {
+  db: Database;
+  accountId: number;
+  userId: number;
+  name: string;
+  locality: string;
+  conditions: unknown;
+}) {
   const site = validConditions(conditions);
   return db.transaction(async (tx) => {
     await assertNameFree(tx, accountId, name);
-    const [{ id }] = await tx.insert(communities).values({ accountId, name, locality, conditions: site }).$returningId();
-    await recordAudit(tx, { accountId, userId, action: "community_create", entityType: "community", entityId: id, summary: `Created community ${name}`, after: { name, locality, conditions: site } });
+    const [{ id }] = await tx
+      .insert(communities)
+      .values({ accountId, name, locality, conditions: site })
+      .$returningId();
+    await recordAudit(tx, {
+      accountId,
+      userId,
+      action: "community_create",
+      entityType: "community",
+      entityId: id,
+      summary: `Created community ${name}`,
+      after: { name, locality, conditions: site },
+    });
     return { id };
   });
 }
@@ -55,12 +91,23 @@ export async function updateCommunity({
   conditions: unknown;
 }) {
   return db.transaction(async (tx) => {
-    const [current] = await tx.select().from(communities).where(and(eq(communities.id, communityId), eq(communities.accountId, accountId))).for("update");
+    const [current] = await tx
+      .select()
+      .from(communities)
+      .where(and(eq(communities.id, communityId), eq(communities.accountId, accountId)))
+      .for("update");
     if (!current) throw notFound("That community");
     const site = validConditions(conditions);
-    if (current.version !== version) throw new AppError("conflict", `${current.name} was changed by someone else since you loaded it. Nothing was saved; reload to see the current values.`);
+    if (current.version !== version)
+      throw new AppError(
+        "conflict",
+        `${current.name} was changed by someone else since you loaded it. Nothing was saved; reload to see the current values.`,
+      );
     await assertNameFree(tx, accountId, name, communityId);
-    await tx.update(communities).set({ name, locality, conditions: site, version: current.version + 1 }).where(eq(communities.id, communityId));
+    await tx
+      .update(communities)
+      .set({ name, locality, conditions: site, version: current.version + 1 })
+      .where(eq(communities.id, communityId));
     const recomputed = await recomputeLots(tx, { accountId, communityId });
     await recordAudit(tx, {
       accountId,

@@ -20,7 +20,19 @@ interface PlanRow {
   input: unknown;
 }
 
-type LotRow = Pick<typeof lots.$inferSelect, "id" | "lotNumber" | "status" | "planId" | "facingDeg" | "results" | "equipmentSystemId" | "equipmentOverride" | "selection" | "version">;
+type LotRow = Pick<
+  typeof lots.$inferSelect,
+  | "id"
+  | "lotNumber"
+  | "status"
+  | "planId"
+  | "facingDeg"
+  | "results"
+  | "equipmentSystemId"
+  | "equipmentOverride"
+  | "selection"
+  | "version"
+>;
 
 /** What the lots import reads before it computes; the save checks that none of it changed. */
 export interface LotImportData extends LotImportContext {
@@ -54,14 +66,35 @@ const COMPUTE_CHUNK = 250;
 export const lotImportSteps: ImportSteps<LotImportData, ValidLotRow[], ComputedLot[]> = {
   async loadContext(db: Database, record) {
     const communityId = record.communityId!;
-    const [community] = await db.select().from(communities).where(and(eq(communities.id, communityId), eq(communities.accountId, record.accountId)));
+    const [community] = await db
+      .select()
+      .from(communities)
+      .where(and(eq(communities.id, communityId), eq(communities.accountId, record.accountId)));
     const planRows = await db
-      .select({ id: plans.id, planCode: plans.planCode, version: plans.version, revisionId: planRevisions.id, revisionNumber: planRevisions.number, input: planRevisions.input })
+      .select({
+        id: plans.id,
+        planCode: plans.planCode,
+        version: plans.version,
+        revisionId: planRevisions.id,
+        revisionNumber: planRevisions.number,
+        input: planRevisions.input,
+      })
       .from(plans)
       .innerJoin(planRevisions, eq(planRevisions.id, plans.currentRevisionId))
       .where(eq(plans.accountId, record.accountId));
     const existing = await db
-      .select({ id: lots.id, lotNumber: lots.lotNumber, status: lots.status, planId: lots.planId, facingDeg: lots.facingDeg, results: lots.results, equipmentSystemId: lots.equipmentSystemId, equipmentOverride: lots.equipmentOverride, selection: lots.selection, version: lots.version })
+      .select({
+        id: lots.id,
+        lotNumber: lots.lotNumber,
+        status: lots.status,
+        planId: lots.planId,
+        facingDeg: lots.facingDeg,
+        results: lots.results,
+        equipmentSystemId: lots.equipmentSystemId,
+        equipmentOverride: lots.equipmentOverride,
+        selection: lots.selection,
+        version: lots.version,
+      })
       .from(lots)
       .where(eq(lots.communityId, communityId));
     const lotByNumber = new Map(existing.map((l) => [l.lotNumber.toLowerCase(), l]));
@@ -71,9 +104,18 @@ export const lotImportSteps: ImportSteps<LotImportData, ValidLotRow[], ComputedL
       planByCode: new Map(planRows.map((p) => [p.planCode, p])),
       lotByNumber,
       selector: await LotEquipmentSelector.forAccount(db, record.accountId),
-      calculator: await LotCalculator.forAccount(db, record.accountId, new Map([[communityId, community.conditions]])),
+      calculator: await LotCalculator.forAccount(
+        db,
+        record.accountId,
+        new Map([[communityId, community.conditions]]),
+      ),
       planIds: new Map(planRows.map((p) => [p.planCode, p.id])),
-      existing: new Map<string, ExistingLot>(existing.map((l) => [l.lotNumber.toLowerCase(), { status: l.status, planId: l.planId, facingDeg: Number(l.facingDeg) }])),
+      existing: new Map<string, ExistingLot>(
+        existing.map((l) => [
+          l.lotNumber.toLowerCase(),
+          { status: l.status, planId: l.planId, facingDeg: Number(l.facingDeg) },
+        ]),
+      ),
     };
   },
 
@@ -88,9 +130,19 @@ export const lotImportSteps: ImportSteps<LotImportData, ValidLotRow[], ComputedL
         const plan = context.planByCode.get(row.planCode)!;
         const existingLot = context.lotByNumber.get(row.lotNumber.toLowerCase());
         const previous = (existingLot?.results as LotResults | null) ?? null;
-        const { summary } = calculator.compute({ communityId, facingDeg: row.facingDeg, previous }, { id: plan.revisionId, number: plan.revisionNumber, input: plan.input as PlanInput });
+        const { summary } = calculator.compute(
+          { communityId, facingDeg: row.facingDeg, previous },
+          { id: plan.revisionId, number: plan.revisionNumber, input: plan.input as PlanInput },
+        );
         const frozen = existingLot ? isFrozen(existingLot.status) : false;
-        const selection = frozen ? null : calculator.select(selector, communityId, summary, existingLot?.equipmentOverride ? existingLot.equipmentSystemId : null);
+        const selection = frozen
+          ? null
+          : calculator.select(
+              selector,
+              communityId,
+              summary,
+              existingLot?.equipmentOverride ? existingLot.equipmentSystemId : null,
+            );
         computed.push({ row, plan, summary, selection, existingLot });
       }
       await progress((100 * Math.min(rows.length, i + COMPUTE_CHUNK)) / rows.length);
@@ -101,16 +153,40 @@ export const lotImportSteps: ImportSteps<LotImportData, ValidLotRow[], ComputedL
   async save(tx, record, computed, context) {
     const { accountId, userId } = record;
     const { communityId } = context;
-    const [community] = await tx.select({ version: communities.version, name: communities.name }).from(communities).where(eq(communities.id, communityId)).for("update");
-    if (!community || community.version !== context.community.version) throw new ImportConflict("the community's design conditions were saved while the file was being computed");
+    const [community] = await tx
+      .select({ version: communities.version, name: communities.name })
+      .from(communities)
+      .where(eq(communities.id, communityId))
+      .for("update");
+    if (!community || community.version !== context.community.version)
+      throw new ImportConflict(
+        "the community's design conditions were saved while the file was being computed",
+      );
     const usedPlanIds = [...new Set(computed.map((c) => c.plan.id))];
-    const planVersions = await tx.select({ id: plans.id, version: plans.version }).from(plans).where(inArray(plans.id, usedPlanIds)).for("update");
-    const changedPlan = usedPlanIds.find((id) => planVersions.find((p) => p.id === id)?.version !== computed.find((c) => c.plan.id === id)!.plan.version);
-    if (changedPlan !== undefined) throw new ImportConflict("a plan model of the file was edited while the file was being computed");
-    const current = await tx.select({ id: lots.id, lotNumber: lots.lotNumber, version: lots.version }).from(lots).where(eq(lots.communityId, communityId)).for("update");
-    if ((await loadProcedureOf(tx, accountId)) !== context.calculator.procedure) throw new ImportConflict("the account's load procedure was changed while the file was being computed");
-    const moved = current.length !== context.lotByNumber.size || current.some((l) => context.lotByNumber.get(l.lotNumber.toLowerCase())?.version !== l.version);
-    if (moved) throw new ImportConflict("lots of the community were changed while the file was being computed");
+    const planVersions = await tx
+      .select({ id: plans.id, version: plans.version })
+      .from(plans)
+      .where(inArray(plans.id, usedPlanIds))
+      .for("update");
+    const changedPlan = usedPlanIds.find(
+      (id) =>
+        planVersions.find((p) => p.id === id)?.version !==
+        computed.find((c) => c.plan.id === id)!.plan.version,
+    );
+    if (changedPlan !== undefined)
+      throw new ImportConflict("a plan model of the file was edited while the file was being computed");
+    const current = await tx
+      .select({ id: lots.id, lotNumber: lots.lotNumber, version: lots.version })
+      .from(lots)
+      .where(eq(lots.communityId, communityId))
+      .for("update");
+    if ((await loadProcedureOf(tx, accountId)) !== context.calculator.procedure)
+      throw new ImportConflict("the account's load procedure was changed while the file was being computed");
+    const moved =
+      current.length !== context.lotByNumber.size ||
+      current.some((l) => context.lotByNumber.get(l.lotNumber.toLowerCase())?.version !== l.version);
+    if (moved)
+      throw new ImportConflict("lots of the community were changed while the file was being computed");
 
     const now = new Date();
     let created = 0;
@@ -156,9 +232,19 @@ export const lotImportSteps: ImportSteps<LotImportData, ValidLotRow[], ComputedL
     const updated = computed.length - created;
     // Every other lot of the community is recomputed too, from the current plans and conditions.
     const inFile = new Set(computed.map((c) => c.row.lotNumber.toLowerCase()));
-    const others = [...context.lotByNumber.values()].filter((l) => !inFile.has(l.lotNumber.toLowerCase())).map((l) => l.id);
+    const others = [...context.lotByNumber.values()]
+      .filter((l) => !inFile.has(l.lotNumber.toLowerCase()))
+      .map((l) => l.id);
     if (others.length > 0) await recomputeLots(tx, { accountId, lotIds: others });
-    await recordAudit(tx, { accountId, userId, action: "lot_import", entityType: "community", entityId: communityId, summary: `Imported ${record.fileName} into ${community.name}: ${created} lots created, ${updated} updated`, after: { importId: record.id, created, updated } });
+    await recordAudit(tx, {
+      accountId,
+      userId,
+      action: "lot_import",
+      entityType: "community",
+      entityId: communityId,
+      summary: `Imported ${record.fileName} into ${community.name}: ${created} lots created, ${updated} updated`,
+      after: { importId: record.id, created, updated },
+    });
     return { created, updated };
   },
 };

@@ -1,21 +1,54 @@
 import "server-only";
 import { and, asc, eq, inArray } from "drizzle-orm";
 import type { Database } from "@/db";
-import { communities, equipmentSystems, lots, planRevisions, plans, users, type LotStatus } from "@/db/schema";
+import {
+  communities,
+  equipmentSystems,
+  lots,
+  planRevisions,
+  plans,
+  users,
+  type LotStatus,
+} from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
 import { AppError, notFound } from "@/lib/errors";
 import { ENGINE_VERSION, LOAD_PROCEDURE_LABELS, type PlanInput } from "@/lib/load";
 import { loadProcedureOf } from "../load-procedure";
 import type { LotSelection } from "../equipment";
-import { isFrozen, LotCalculator, procedureOfStored, recomputeLots, type LotResults, type PermitSnapshot } from "../recompute";
+import {
+  isFrozen,
+  LotCalculator,
+  procedureOfStored,
+  recomputeLots,
+  type LotResults,
+  type PermitSnapshot,
+} from "../recompute";
 
-export { FROZEN_STATUSES, isFrozen, procedureOfStored, recomputeLots, type LotResults, type PermitSnapshot } from "../recompute";
+export {
+  FROZEN_STATUSES,
+  isFrozen,
+  procedureOfStored,
+  recomputeLots,
+  type LotResults,
+  type PermitSnapshot,
+} from "../recompute";
 
 type Tx = Parameters<Parameters<Database["transaction"]>[0]>[0];
 
 /** The lots grid of a community: displayed loads are the permit snapshot's for frozen lots. */
-export async function listLotsForGrid({ db, accountId, communityId }: { db: Database; accountId: number; communityId: number }) {
-  const [community] = await db.select().from(communities).where(and(eq(communities.id, communityId), eq(communities.accountId, accountId)));
+export async function listLotsForGrid({
+  db,
+  accountId,
+  communityId,
+}: {
+  db: Database;
+  accountId: number;
+  communityId: number;
+}) {
+  const [community] = await db
+    .select()
+    .from(communities)
+    .where(and(eq(communities.id, communityId), eq(communities.accountId, accountId)));
   if (!community) throw notFound("That community");
   const rows = await db
     .select({
@@ -41,7 +74,10 @@ export async function listLotsForGrid({ db, accountId, communityId }: { db: Data
     .leftJoin(plans, eq(plans.id, lots.planId))
     .where(and(eq(lots.accountId, accountId), eq(lots.communityId, communityId)))
     .orderBy(asc(lots.lotNumber));
-  const systems = await db.select({ id: equipmentSystems.id, code: equipmentSystems.systemCode }).from(equipmentSystems).where(eq(equipmentSystems.accountId, accountId));
+  const systems = await db
+    .select({ id: equipmentSystems.id, code: equipmentSystems.systemCode })
+    .from(equipmentSystems)
+    .where(eq(equipmentSystems.accountId, accountId));
   const codeOf = new Map(systems.map((x) => [x.id, x.code]));
   const accountProcedure = await loadProcedureOf(db, accountId);
   return {
@@ -85,22 +121,49 @@ export async function listLotsForGrid({ db, accountId, communityId }: { db: Data
   };
 }
 
-export type LotChange = { lotId: number; version: number; planId?: number; facingDeg?: number; address?: string; optionsNote?: string; plannedStart?: string | null };
+export type LotChange = {
+  lotId: number;
+  version: number;
+  planId?: number;
+  facingDeg?: number;
+  address?: string;
+  optionsNote?: string;
+  plannedStart?: string | null;
+};
 
 /**
  * Edits lots in place (plan, facing, address, note, planned start), one or many in one
  * transaction and one history entry, then recomputes them. A frozen lot's plan and facing cannot
  * change; a stale version refuses the whole edit.
  */
-export async function editLots({ db, accountId, userId, communityId, changes }: { db: Database; accountId: number; userId: number; communityId: number; changes: LotChange[] }) {
+export async function editLots({
+  db,
+  accountId,
+  userId,
+  communityId,
+  changes,
+}: {
+  db: Database;
+  accountId: number;
+  userId: number;
+  communityId: number;
+  changes: LotChange[];
+}) {
   if (changes.length === 0) throw new AppError("invalid_input", "There is nothing to save.");
   return db.transaction(async (tx) => {
     const ids = changes.map((c) => c.lotId);
-    const current = await tx.select().from(lots).where(and(eq(lots.accountId, accountId), eq(lots.communityId, communityId), inArray(lots.id, ids))).for("update");
+    const current = await tx
+      .select()
+      .from(lots)
+      .where(and(eq(lots.accountId, accountId), eq(lots.communityId, communityId), inArray(lots.id, ids)))
+      .for("update");
     const byId = new Map(current.map((l) => [l.id, l]));
     const planIds = [...new Set(changes.map((c) => c.planId).filter((p): p is number => p !== undefined))];
     if (planIds.length > 0) {
-      const found = await tx.select({ id: plans.id }).from(plans).where(and(eq(plans.accountId, accountId), inArray(plans.id, planIds)));
+      const found = await tx
+        .select({ id: plans.id })
+        .from(plans)
+        .where(and(eq(plans.accountId, accountId), inArray(plans.id, planIds)));
       if (found.length !== planIds.length) throw notFound("That plan model");
     }
     const before: unknown[] = [];
@@ -108,10 +171,19 @@ export async function editLots({ db, accountId, userId, communityId, changes }: 
     for (const change of changes) {
       const lot = byId.get(change.lotId);
       if (!lot) throw notFound("That lot");
-      if (lot.version !== change.version) throw new AppError("conflict", `Lot ${lot.lotNumber} was changed by someone else since you loaded it. Nothing was saved; reload to see the current values.`);
-      const planOrFacing = (change.planId !== undefined && change.planId !== lot.planId) || (change.facingDeg !== undefined && change.facingDeg !== Number(lot.facingDeg));
+      if (lot.version !== change.version)
+        throw new AppError(
+          "conflict",
+          `Lot ${lot.lotNumber} was changed by someone else since you loaded it. Nothing was saved; reload to see the current values.`,
+        );
+      const planOrFacing =
+        (change.planId !== undefined && change.planId !== lot.planId) ||
+        (change.facingDeg !== undefined && change.facingDeg !== Number(lot.facingDeg));
       if (planOrFacing && isFrozen(lot.status)) {
-        throw new AppError("conflict", `Lot ${lot.lotNumber} is frozen for permit (${lot.status.replace("_", " ")}); its plan and facing cannot change. Move it back to planned first.`);
+        throw new AppError(
+          "conflict",
+          `Lot ${lot.lotNumber} is frozen for permit (${lot.status.replace("_", " ")}); its plan and facing cannot change. Move it back to planned first.`,
+        );
       }
       const set = {
         ...(change.planId !== undefined ? { planId: change.planId } : {}),
@@ -120,9 +192,25 @@ export async function editLots({ db, accountId, userId, communityId, changes }: 
         ...(change.optionsNote !== undefined ? { optionsNote: change.optionsNote } : {}),
         ...(change.plannedStart !== undefined ? { plannedStart: change.plannedStart } : {}),
       };
-      before.push({ lotId: lot.id, lotNumber: lot.lotNumber, planId: lot.planId, facingDeg: Number(lot.facingDeg), address: lot.address, optionsNote: lot.optionsNote, plannedStart: lot.plannedStart });
-      after.push({ lotId: lot.id, lotNumber: lot.lotNumber, ...set, ...(change.facingDeg !== undefined ? { facingDeg: change.facingDeg } : {}) });
-      await tx.update(lots).set({ ...set, version: lot.version + 1 }).where(eq(lots.id, lot.id));
+      before.push({
+        lotId: lot.id,
+        lotNumber: lot.lotNumber,
+        planId: lot.planId,
+        facingDeg: Number(lot.facingDeg),
+        address: lot.address,
+        optionsNote: lot.optionsNote,
+        plannedStart: lot.plannedStart,
+      });
+      after.push({
+        lotId: lot.id,
+        lotNumber: lot.lotNumber,
+        ...set,
+        ...(change.facingDeg !== undefined ? { facingDeg: change.facingDeg } : {}),
+      });
+      await tx
+        .update(lots)
+        .set({ ...set, version: lot.version + 1 })
+        .where(eq(lots.id, lot.id));
     }
     const recomputed = await recomputeLots(tx, { accountId, lotIds: ids });
     await recordAudit(tx, {
@@ -131,7 +219,10 @@ export async function editLots({ db, accountId, userId, communityId, changes }: 
       action: changes.length > 1 ? "lot_bulk_edit" : "lot_edit",
       entityType: "lot",
       entityId: changes.length === 1 ? changes[0].lotId : null,
-      summary: changes.length > 1 ? `Edited ${changes.length} lots` : `Edited lot ${(after[0] as { lotNumber: string }).lotNumber}`,
+      summary:
+        changes.length > 1
+          ? `Edited ${changes.length} lots`
+          : `Edited lot ${(after[0] as { lotNumber: string }).lotNumber}`,
       before,
       after,
     });
@@ -143,18 +234,47 @@ export async function editLots({ db, accountId, userId, communityId, changes }: 
  * Moves a lot to a new status. Submitting for permit freezes a copy of its inputs, results and
  * engine version; moving back to planned releases it. `refresh` takes a new snapshot explicitly.
  */
-export async function setLotStatus({ db, accountId, userId, lotId, version, status, refresh = false }: { db: Database; accountId: number; userId: number; lotId: number; version: number; status: LotStatus; refresh?: boolean }) {
+export async function setLotStatus({
+  db,
+  accountId,
+  userId,
+  lotId,
+  version,
+  status,
+  refresh = false,
+}: {
+  db: Database;
+  accountId: number;
+  userId: number;
+  lotId: number;
+  version: number;
+  status: LotStatus;
+  refresh?: boolean;
+}) {
   return db.transaction(async (tx) => {
-    const [lot] = await tx.select().from(lots).where(and(eq(lots.id, lotId), eq(lots.accountId, accountId))).for("update");
+    const [lot] = await tx
+      .select()
+      .from(lots)
+      .where(and(eq(lots.id, lotId), eq(lots.accountId, accountId)))
+      .for("update");
     if (!lot) throw notFound("That lot");
-    if (lot.version !== version) throw new AppError("conflict", `Lot ${lot.lotNumber} was changed by someone else since you loaded it. Nothing was saved; reload to see it.`);
+    if (lot.version !== version)
+      throw new AppError(
+        "conflict",
+        `Lot ${lot.lotNumber} was changed by someone else since you loaded it. Nothing was saved; reload to see it.`,
+      );
     const freezing = isFrozen(status) && (!lot.permitSnapshot || refresh);
     let snapshot = lot.permitSnapshot as PermitSnapshot | null;
     if (freezing) snapshot = await takeSnapshot(tx, { accountId, userId, lot });
     if (!isFrozen(status)) snapshot = null;
     await tx
       .update(lots)
-      .set({ status, permitSnapshot: snapshot, permitSnapshotAt: snapshot ? (freezing ? new Date() : lot.permitSnapshotAt) : null, version: lot.version + 1 })
+      .set({
+        status,
+        permitSnapshot: snapshot,
+        permitSnapshotAt: snapshot ? (freezing ? new Date() : lot.permitSnapshotAt) : null,
+        version: lot.version + 1,
+      })
       .where(eq(lots.id, lot.id));
     // A released lot takes the current plan's loads and a new equipment selection again.
     if (!snapshot && lot.permitSnapshot) await recomputeLots(tx, { accountId, lotIds: [lot.id] });
@@ -174,8 +294,15 @@ export async function setLotStatus({ db, accountId, userId, lotId, version, stat
   });
 }
 
-async function takeSnapshot(tx: Tx, { accountId, userId, lot }: { accountId: number; userId: number; lot: typeof lots.$inferSelect }): Promise<PermitSnapshot> {
-  if (!lot.planId) throw new AppError("conflict", `Lot ${lot.lotNumber} has no plan model; choose one before submitting for permit.`);
+async function takeSnapshot(
+  tx: Tx,
+  { accountId, userId, lot }: { accountId: number; userId: number; lot: typeof lots.$inferSelect },
+): Promise<PermitSnapshot> {
+  if (!lot.planId)
+    throw new AppError(
+      "conflict",
+      `Lot ${lot.lotNumber} has no plan model; choose one before submitting for permit.`,
+    );
   const [row] = await tx
     .select({ plan: plans, revision: planRevisions, community: communities, approver: users.name })
     .from(plans)
@@ -184,8 +311,15 @@ async function takeSnapshot(tx: Tx, { accountId, userId, lot }: { accountId: num
     .leftJoin(users, eq(users.id, planRevisions.approvedByUserId))
     .where(and(eq(plans.id, lot.planId), eq(plans.accountId, accountId)));
   const input = row.revision.input as PlanInput;
-  const calculator = await LotCalculator.forAccount(tx, accountId, new Map([[row.community.id, row.community.conditions]]));
-  const { full, summary } = calculator.compute({ communityId: row.community.id, facingDeg: Number(lot.facingDeg), previous: null }, { id: row.revision.id, number: row.revision.number, input });
+  const calculator = await LotCalculator.forAccount(
+    tx,
+    accountId,
+    new Map([[row.community.id, row.community.conditions]]),
+  );
+  const { full, summary } = calculator.compute(
+    { communityId: row.community.id, facingDeg: Number(lot.facingDeg), previous: null },
+    { id: row.revision.id, number: row.revision.number, input },
+  );
   return {
     frozenAt: new Date().toISOString(),
     frozenByUserId: userId,
@@ -195,7 +329,11 @@ async function takeSnapshot(tx: Tx, { accountId, userId, lot }: { accountId: num
     revisionId: row.revision.id,
     revisionNumber: row.revision.number,
     revisionStatus: row.revision.status,
-    approval: { name: row.revision.approverName, credential: row.revision.approverCredential, date: row.revision.approvedOn },
+    approval: {
+      name: row.revision.approverName,
+      credential: row.revision.approverCredential,
+      date: row.revision.approvedOn,
+    },
     communityName: row.community.name,
     site: calculator.site(row.community.id),
     facingDeg: Number(lot.facingDeg),

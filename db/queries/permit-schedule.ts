@@ -33,15 +33,31 @@ export const PERMIT_SCHEDULE_HEADERS = [
   "Caution",
 ] as const;
 
-const conditionsCells = (site: SiteConditions) => [site.heatingOutdoorDbF, `${site.coolingOutdoorDbF} / ${site.coolingOutdoorWbF}`, site.dailyRangeF, `${site.indoorHeatingF} / ${site.indoorCoolingF}`];
+const conditionsCells = (site: SiteConditions) => [
+  site.heatingOutdoorDbF,
+  `${site.coolingOutdoorDbF} / ${site.coolingOutdoorWbF}`,
+  site.dailyRangeF,
+  `${site.indoorHeatingF} / ${site.indoorCoolingF}`,
+];
 
 /**
  * The permit schedule of a community: one row per lot. A lot frozen for permit shows its snapshot
  * (inputs, results, procedure and engine version as submitted); the others show the current plan's
  * results, by the account's procedure.
  */
-export async function permitScheduleRows({ db, accountId, communityId }: { db: Database; accountId: number; communityId: number }) {
-  const [community] = await db.select().from(communities).where(and(eq(communities.id, communityId), eq(communities.accountId, accountId)));
+export async function permitScheduleRows({
+  db,
+  accountId,
+  communityId,
+}: {
+  db: Database;
+  accountId: number;
+  communityId: number;
+}) {
+  const [community] = await db
+    .select()
+    .from(communities)
+    .where(and(eq(communities.id, communityId), eq(communities.accountId, accountId)));
   if (!community) throw notFound("That community");
   const site = parseSiteConditions(community.conditions);
   const rows = await db
@@ -55,13 +71,23 @@ export async function permitScheduleRows({ db, accountId, communityId }: { db: D
     const snapshot = lot.permitSnapshot as PermitSnapshot | null;
     const live = lot.results as LotResults | null;
     const loads = snapshot?.summary ?? live;
-    const approval = snapshot ? snapshot.approval : { name: revision?.approverName ?? null, credential: revision?.approverCredential ?? null, date: revision?.approvedOn ?? null };
+    const approval = snapshot
+      ? snapshot.approval
+      : {
+          name: revision?.approverName ?? null,
+          credential: revision?.approverCredential ?? null,
+          date: revision?.approvedOn ?? null,
+        };
     return [
       lot.lotNumber,
       lot.address,
       snapshot?.planCode ?? plan?.planCode ?? "",
       snapshot?.planName ?? plan?.name ?? "",
-      snapshot ? `${snapshot.revisionNumber} (${snapshot.revisionStatus})` : revision ? `${revision.number} (${revision.status})` : "",
+      snapshot
+        ? `${snapshot.revisionNumber} (${snapshot.revisionStatus})`
+        : revision
+          ? `${revision.number} (${revision.status})`
+          : "",
       facingLabel(Number(lot.facingDeg)),
       lot.status.replace("_", " "),
       ...conditionsCells(snapshot?.site ?? site),
@@ -73,7 +99,11 @@ export async function permitScheduleRows({ db, accountId, communityId }: { db: D
       approval.name ? `${approval.name}, ${approval.credential ?? ""}` : "not approved",
       approval.date ?? "",
       snapshot ? `permit snapshot ${snapshot.frozenAt.slice(0, 10)}` : "current plan",
-      snapshot ? LOAD_PROCEDURE_LABELS[procedureOfStored(snapshot)] : loads ? LOAD_PROCEDURE_LABELS[procedureOfStored(loads)] : "",
+      snapshot
+        ? LOAD_PROCEDURE_LABELS[procedureOfStored(snapshot)]
+        : loads
+          ? LOAD_PROCEDURE_LABELS[procedureOfStored(loads)]
+          : "",
       snapshot?.engineVersion ?? loads?.engineVersion ?? "",
       REPORT_CAUTION,
     ];

@@ -20,7 +20,12 @@ export const planImportSteps: ImportSteps<undefined, ValidPlanRow[], ValidPlanRo
   compute: async (checked) => checked,
   async save(tx, record, rows) {
     const { accountId, userId } = record;
-    const existing = await tx.select({ plan: plans, revision: planRevisions }).from(plans).innerJoin(planRevisions, eq(planRevisions.id, plans.currentRevisionId)).where(eq(plans.accountId, accountId)).for("update");
+    const existing = await tx
+      .select({ plan: plans, revision: planRevisions })
+      .from(plans)
+      .innerJoin(planRevisions, eq(planRevisions.id, plans.currentRevisionId))
+      .where(eq(plans.accountId, accountId))
+      .for("update");
     const byCode = new Map(existing.map((e) => [e.plan.planCode.toLowerCase(), e]));
     let created = 0;
     let updated = 0;
@@ -33,19 +38,42 @@ export const planImportSteps: ImportSteps<undefined, ValidPlanRow[], ValidPlanRo
         const old = revisionCells(found.revision, found.plan.planCode, found.plan.name);
         const same = PLAN_COLUMNS.every((c) => String(old[c.key] ?? "") === String(cells[c.key] ?? ""));
         if (same) continue;
-        await writePlanRevision(tx, { accountId, userId, plan: found.plan, revision: found.revision, cells, input: row.input, planCode: found.plan.planCode, planName: row.planName });
+        await writePlanRevision(tx, {
+          accountId,
+          userId,
+          plan: found.plan,
+          revision: found.revision,
+          cells,
+          input: row.input,
+          planCode: found.plan.planCode,
+          planName: row.planName,
+        });
         updated++;
         after.push({ planId: found.plan.id, planCode: found.plan.planCode, cells });
       } else {
-        const [{ id: planId }] = await tx.insert(plans).values({ accountId, planCode: row.planCode, name: row.planName }).$returningId();
-        const [{ id: revisionId }] = await tx.insert(planRevisions).values({ accountId, planId, number: 1, cells, input: row.input, createdByUserId: userId }).$returningId();
+        const [{ id: planId }] = await tx
+          .insert(plans)
+          .values({ accountId, planCode: row.planCode, name: row.planName })
+          .$returningId();
+        const [{ id: revisionId }] = await tx
+          .insert(planRevisions)
+          .values({ accountId, planId, number: 1, cells, input: row.input, createdByUserId: userId })
+          .$returningId();
         await tx.update(plans).set({ currentRevisionId: revisionId }).where(eq(plans.id, planId));
         created++;
         after.push({ planId, planCode: row.planCode, cells });
       }
     }
     await recomputeLots(tx, { accountId, planIds: after.map((a) => a.planId) });
-    await recordAudit(tx, { accountId, userId, action: "plan_import", entityType: "plan", entityId: null, summary: `Imported ${record.fileName}: ${created} created, ${updated} updated`, after });
+    await recordAudit(tx, {
+      accountId,
+      userId,
+      action: "plan_import",
+      entityType: "plan",
+      entityId: null,
+      summary: `Imported ${record.fileName}: ${created} created, ${updated} updated`,
+      after,
+    });
     return { created, updated };
   },
 };

@@ -8,23 +8,60 @@ import { notFound } from "@/lib/errors";
 // a record of another account is simply not found.
 
 export async function listCommunities({ db, accountId }: { db: Database; accountId: number }) {
-  return db.select().from(communities).where(eq(communities.accountId, accountId)).orderBy(asc(communities.name));
+  return db
+    .select()
+    .from(communities)
+    .where(eq(communities.accountId, accountId))
+    .orderBy(asc(communities.name));
 }
 
-export async function getCommunityById({ db, accountId, communityId }: { db: Database; accountId: number; communityId: number }) {
-  const [community] = await db.select().from(communities).where(and(eq(communities.id, communityId), eq(communities.accountId, accountId)));
+export async function getCommunityById({
+  db,
+  accountId,
+  communityId,
+}: {
+  db: Database;
+  accountId: number;
+  communityId: number;
+}) {
+  const [community] = await db
+    .select()
+    .from(communities)
+    .where(and(eq(communities.id, communityId), eq(communities.accountId, accountId)));
   if (!community) throw notFound("That community");
   return community;
 }
 
-export async function getLotById({ db, accountId, lotId }: { db: Database; accountId: number; lotId: number }) {
-  const [lot] = await db.select().from(lots).where(and(eq(lots.id, lotId), eq(lots.accountId, accountId)));
+export async function getLotById({
+  db,
+  accountId,
+  lotId,
+}: {
+  db: Database;
+  accountId: number;
+  lotId: number;
+}) {
+  const [lot] = await db
+    .select()
+    .from(lots)
+    .where(and(eq(lots.id, lotId), eq(lots.accountId, accountId)));
   if (!lot) throw notFound("That lot");
   return lot;
 }
 
-export async function getEquipmentSystemById({ db, accountId, systemId }: { db: Database; accountId: number; systemId: number }) {
-  const [system] = await db.select().from(equipmentSystems).where(and(eq(equipmentSystems.id, systemId), eq(equipmentSystems.accountId, accountId)));
+export async function getEquipmentSystemById({
+  db,
+  accountId,
+  systemId,
+}: {
+  db: Database;
+  accountId: number;
+  systemId: number;
+}) {
+  const [system] = await db
+    .select()
+    .from(equipmentSystems)
+    .where(and(eq(equipmentSystems.id, systemId), eq(equipmentSystems.accountId, accountId)));
   if (!system) throw notFound("That equipment system");
   return system;
 }
@@ -55,15 +92,42 @@ export async function listImports({ db, accountId }: { db: Database; accountId: 
     .orderBy(desc(imports.createdAt));
 }
 
-export async function getImportById({ db, accountId, importId }: { db: Database; accountId: number; importId: number }) {
-  const [record] = await db.select().from(imports).where(and(eq(imports.id, importId), eq(imports.accountId, accountId)));
+export async function getImportById({
+  db,
+  accountId,
+  importId,
+}: {
+  db: Database;
+  accountId: number;
+  importId: number;
+}) {
+  const [record] = await db
+    .select()
+    .from(imports)
+    .where(and(eq(imports.id, importId), eq(imports.accountId, accountId)));
   if (!record) throw notFound("That import");
   return record;
 }
 
-export async function listAudit({ db, accountId, limit = 200 }: { db: Database; accountId: number; limit?: number }) {
+export async function listAudit({
+  db,
+  accountId,
+  limit = 200,
+}: {
+  db: Database;
+  accountId: number;
+  limit?: number;
+}) {
   return db
-    .select({ id: auditLog.id, action: auditLog.action, entityType: auditLog.entityType, entityId: auditLog.entityId, summary: auditLog.summary, createdAt: auditLog.createdAt, userName: users.name })
+    .select({
+      id: auditLog.id,
+      action: auditLog.action,
+      entityType: auditLog.entityType,
+      entityId: auditLog.entityId,
+      summary: auditLog.summary,
+      createdAt: auditLog.createdAt,
+      userName: users.name,
+    })
     .from(auditLog)
     .leftJoin(users, eq(users.id, auditLog.userId))
     .where(eq(auditLog.accountId, accountId))

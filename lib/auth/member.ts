@@ -52,14 +52,24 @@ export async function authorizeMember({
     .from(memberships)
     .innerJoin(users, eq(users.id, memberships.userId))
     .innerJoin(accounts, eq(accounts.id, memberships.accountId))
-    .where(accountId ? and(eq(memberships.userId, userId), eq(memberships.accountId, accountId)) : eq(memberships.userId, userId));
+    .where(
+      accountId
+        ? and(eq(memberships.userId, userId), eq(memberships.accountId, accountId))
+        : eq(memberships.userId, userId),
+    );
   if (rows.length === 0) {
-    throw new AppError("forbidden", accountId ? "You are not a member of this account." : "You are not a member of any account.");
+    throw new AppError(
+      "forbidden",
+      accountId ? "You are not a member of this account." : "You are not a member of any account.",
+    );
   }
   if (rows.length > 1) throw new AppError("forbidden", "Choose an account first.");
   const member = rows[0];
   if (!can(member.role, permission)) {
-    throw new AppError("forbidden", `Your role (${member.role}) may not do this: it needs the "${permission}" permission.`);
+    throw new AppError(
+      "forbidden",
+      `Your role (${member.role}) may not do this: it needs the "${permission}" permission.`,
+    );
   }
   return member;
 }

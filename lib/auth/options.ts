@@ -9,7 +9,10 @@ import { stampedClientAddress } from "@/lib/http/client-address";
 import { checkSignInPassword } from "./password";
 import { refusalMessage, signInLimiter } from "./rate-limit";
 
-const credentialsSchema = z.object({ email: z.string().trim().toLowerCase().email(), password: z.string().min(1) });
+const credentialsSchema = z.object({
+  email: z.string().trim().toLowerCase().email(),
+  password: z.string().min(1),
+});
 
 export const SIGN_IN_MESSAGES = {
   invalid: "That e-mail and password do not match an account.",
@@ -46,7 +49,10 @@ export const authOptions: NextAuthOptions = {
   providers: [
     CredentialsProvider({
       name: "Platload",
-      credentials: { email: { label: "E-mail", type: "email" }, password: { label: "Password", type: "password" } },
+      credentials: {
+        email: { label: "E-mail", type: "email" },
+        password: { label: "Password", type: "password" },
+      },
       authorize: (raw, req) => authorizeSignIn(raw, req?.headers as Record<string, unknown> | undefined),
     }),
   ],

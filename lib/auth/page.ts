@@ -27,7 +27,8 @@ export async function getPageContext(): Promise<PageContext> {
   const memberships = await listMembershipsOfUser({ db, userId });
   if (memberships.length === 0) redirect("/accounts");
   const raw = parseId((await cookies()).get(ACCOUNT_COOKIE)?.value);
-  const chosen = memberships.find((m) => m.accountId === raw) ?? (memberships.length === 1 ? memberships[0] : null);
+  const chosen =
+    memberships.find((m) => m.accountId === raw) ?? (memberships.length === 1 ? memberships[0] : null);
   if (!chosen) redirect("/accounts");
   const member = await authorizeMember({ db, userId, accountId: chosen.accountId, permission: "read" });
   return { member, permissions: permissionsOf(member.role), accountCount: memberships.length };

@@ -20,7 +20,10 @@ let dummyHash: Promise<string> | undefined;
  * nothing typed: both answers take one bcrypt compare, so the time does not tell which e-mails
  * have a sign-in.
  */
-export async function checkSignInPassword(password: string, hash: string | null | undefined): Promise<boolean> {
+export async function checkSignInPassword(
+  password: string,
+  hash: string | null | undefined,
+): Promise<boolean> {
   if (hash) return verifyPassword(password, hash);
   dummyHash ??= bcrypt.hash(`no sign-in ${Math.random()}`, BCRYPT_COST);
   await verifyPassword(password, await dummyHash);

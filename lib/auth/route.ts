@@ -25,10 +25,20 @@ type Handler<P> = (ctx: RouteContext<P>) => Promise<unknown>;
 export function errorResponse(error: unknown): NextResponse {
   if (error instanceof AppError) return NextResponse.json(error.toBody(), { status: error.status });
   if (error instanceof z.ZodError) {
-    return NextResponse.json(new AppError("invalid_input", "Some values in the request are not valid.", zodFieldErrors(error)).toBody(), { status: 400 });
+    return NextResponse.json(
+      new AppError(
+        "invalid_input",
+        "Some values in the request are not valid.",
+        zodFieldErrors(error),
+      ).toBody(),
+      { status: 400 },
+    );
   }
   console.error(error);
-  return NextResponse.json({ error: { code: "server_error", message: "Something went wrong on the server; nothing was saved." } }, { status: 500 });
+  return NextResponse.json(
+    { error: { code: "server_error", message: "Something went wrong on the server; nothing was saved." } },
+    { status: 500 },
+  );
 }
 
 export async function sessionUserId(request: NextRequest): Promise<number | null> {
@@ -46,14 +56,20 @@ export function chosenAccountId(request: NextRequest): number | null {
  * (signed in, before an account is chosen), "public" (no session: invitation links), "next-auth"
  * (next-auth's own handler: its CSRF token guards its writes).
  */
-export type RouteGuard = { kind: "member"; permission: Permission } | { kind: "session" } | { kind: "public" } | { kind: "next-auth" };
+export type RouteGuard =
+  | { kind: "member"; permission: Permission }
+  | { kind: "session" }
+  | { kind: "public" }
+  | { kind: "next-auth" };
 
 const ROUTE_GUARD = Symbol.for("platload.routeGuard");
 
 type NextHandler<P> = (request: NextRequest, context: { params: Promise<P> }) => Promise<Response>;
 
 export function routeGuardOf(handler: unknown): RouteGuard | undefined {
-  return typeof handler === "function" ? (handler as unknown as { [ROUTE_GUARD]?: RouteGuard })[ROUTE_GUARD] : undefined;
+  return typeof handler === "function"
+    ? (handler as unknown as { [ROUTE_GUARD]?: RouteGuard })[ROUTE_GUARD]
+    : undefined;
 }
 
 const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);
@@ -77,10 +93,16 @@ export function checkOrigin(request: NextRequest): void {
   if (origin === null) {
     const site = request.headers.get("sec-fetch-site");
     if (site === null || site === "same-origin" || site === "none") return;
-    throw new AppError("forbidden", `A change must come from Platload's own pages (${expected}); this one came from another site (${site}). Nothing was changed.`);
+    throw new AppError(
+      "forbidden",
+      `A change must come from Platload's own pages (${expected}); this one came from another site (${site}). Nothing was changed.`,
+    );
   }
   if (origin !== expected) {
-    throw new AppError("forbidden", `A change must come from Platload's own pages (${expected}); this one came from ${origin}. Nothing was changed.`);
+    throw new AppError(
+      "forbidden",
+      `A change must come from Platload's own pages (${expected}); this one came from ${origin}. Nothing was changed.`,
+    );
   }
 }
 
@@ -108,12 +130,18 @@ function checkDeclaredLength(request: NextRequest): void {
   const upload = (request.headers.get("content-type") ?? "").toLowerCase().startsWith("multipart/form-data");
   const limit = upload ? env().PLATLOAD_MAX_UPLOAD_BYTES + 64 * 1024 : jsonBodyLimit();
   if (Number(declared) > limit) {
-    throw new AppError("payload_too_large", `The request body is larger than ${Number((limit / 1048576).toFixed(1))} MB, the limit. Nothing was saved.`);
+    throw new AppError(
+      "payload_too_large",
+      `The request body is larger than ${Number((limit / 1048576).toFixed(1))} MB, the limit. Nothing was saved.`,
+    );
   }
 }
 
 /** The edge every route shares: the Origin check, the body limit, the one error shape, JSON answers, no caching. */
-function guarded<P>(guard: RouteGuard, run: (request: NextRequest, params: P) => Promise<unknown>): NextHandler<P> {
+function guarded<P>(
+  guard: RouteGuard,
+  run: (request: NextRequest, params: P) => Promise<unknown>,
+): NextHandler<P> {
   const handler: NextHandler<P> = async (request, context) => {
     try {
       checkOrigin(request);
@@ -131,7 +159,10 @@ function guarded<P>(guard: RouteGuard, run: (request: NextRequest, params: P) =>
  * Every API route handler goes through here: session, account and role are checked once, errors
  * become the one error shape, and a handler's return value becomes JSON.
  */
-export function apiRoute<P = Record<string, never>>(options: { permission: Permission }, handler: Handler<P>) {
+export function apiRoute<P = Record<string, never>>(
+  options: { permission: Permission },
+  handler: Handler<P>,
+) {
   return guarded<P>({ kind: "member", permission: options.permission }, async (request, params) => {
     const db = getDb();
     const member = await authorizeMember({
@@ -145,7 +176,9 @@ export function apiRoute<P = Record<string, never>>(options: { permission: Permi
 }
 
 /** A route for a signed-in person before an account is chosen (the account picker). */
-export function sessionRoute<P = Record<string, never>>(handler: (ctx: { request: NextRequest; params: P; db: Database; userId: number }) => Promise<unknown>) {
+export function sessionRoute<P = Record<string, never>>(
+  handler: (ctx: { request: NextRequest; params: P; db: Database; userId: number }) => Promise<unknown>,
+) {
   return guarded<P>({ kind: "session" }, async (request, params) => {
     const userId = await sessionUserId(request);
     if (!userId) throw new AppError("unauthenticated", "Sign in to continue.");
@@ -154,7 +187,9 @@ export function sessionRoute<P = Record<string, never>>(handler: (ctx: { request
 }
 
 /** A route anyone may call (sign-up by invitation): same edge, no session. */
-export function publicRoute<P = Record<string, never>>(handler: (ctx: { request: NextRequest; params: P; db: Database }) => Promise<unknown>) {
+export function publicRoute<P = Record<string, never>>(
+  handler: (ctx: { request: NextRequest; params: P; db: Database }) => Promise<unknown>,
+) {
   return guarded<P>({ kind: "public" }, (request, params) => handler({ request, params, db: getDb() }));
 }
 
@@ -163,14 +198,20 @@ export function publicRoute<P = Record<string, never>>(handler: (ctx: { request:
  * token guards sign-in. A posted form is read here, at most PLATLOAD_MAX_JSON_BYTES counted as it
  * streams, before next-auth sees it.
  */
-export function nextAuthRoute(handler: (request: NextRequest, context: { params: Promise<{ nextauth: string[] }> }) => Promise<Response>) {
+export function nextAuthRoute(
+  handler: (request: NextRequest, context: { params: Promise<{ nextauth: string[] }> }) => Promise<Response>,
+) {
   const wrapped: NextHandler<{ nextauth: string[] }> = async (request, context) => {
     try {
       checkOrigin(request);
       checkDeclaredLength(request);
       if (request.method === "POST") {
         const body = await readBodyLimited(request, jsonBodyLimit(), "The sign-in request");
-        request = new NextRequest(request.url, { method: "POST", headers: request.headers, body: body as BodyInit });
+        request = new NextRequest(request.url, {
+          method: "POST",
+          headers: request.headers,
+          body: body as BodyInit,
+        });
       }
       return noStore(await handler(request, context));
     } catch (error) {
@@ -194,7 +235,8 @@ export async function parseJsonBody<T extends z.ZodType>(request: Request, schem
     throw new AppError("invalid_input", "The request body is not valid JSON.");
   }
   const parsed = schema.safeParse(raw);
-  if (!parsed.success) throw new AppError("invalid_input", "Some fields are not valid.", zodFieldErrors(parsed.error));
+  if (!parsed.success)
+    throw new AppError("invalid_input", "Some fields are not valid.", zodFieldErrors(parsed.error));
   return parsed.data;
 }
 

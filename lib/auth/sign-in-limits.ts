@@ -28,7 +28,10 @@ export function emailWaitSeconds(failures: number): number {
 }
 
 export function refusalMessage(refusal: SignInRefusal): string {
-  const wait = refusal.retryAfterS >= 120 ? `${Math.ceil(refusal.retryAfterS / 60)} minutes` : `${refusal.retryAfterS} seconds`;
+  const wait =
+    refusal.retryAfterS >= 120
+      ? `${Math.ceil(refusal.retryAfterS / 60)} minutes`
+      : `${refusal.retryAfterS} seconds`;
   if (refusal.by === "email") return `Too many failed sign-ins for this e-mail. Wait ${wait} and try again.`;
   return `Too many failed sign-ins from this address. Wait ${wait} and try again.`;
 }

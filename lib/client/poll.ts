@@ -28,7 +28,8 @@ export interface ImportProgress {
   errorCount: number;
 }
 
-export const importFinished = ({ import: record }: { import: ImportProgress }) => record.state === "succeeded" || record.state === "failed";
+export const importFinished = ({ import: record }: { import: ImportProgress }) =>
+  record.state === "succeeded" || record.state === "failed";
 
 /** A packet as GET /api/packets/:id/status answers it. */
 export interface PacketProgress {
@@ -42,4 +43,5 @@ export interface PacketProgress {
   error: string | null;
 }
 
-export const packetFinished = ({ packet }: { packet: PacketProgress }) => packet.state === "ready" || packet.state === "failed";
+export const packetFinished = ({ packet }: { packet: PacketProgress }) =>
+  packet.state === "ready" || packet.state === "failed";

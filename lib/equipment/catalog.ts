@@ -9,7 +9,10 @@ export type SystemType = (typeof SYSTEM_TYPES)[number];
 
 const btuh = (what: string) =>
   z
-    .number({ error: (i) => (i.input === undefined ? `required: ${what} in Btu/h` : `${what} must be a number of Btu/h`) })
+    .number({
+      error: (i) =>
+        i.input === undefined ? `required: ${what} in Btu/h` : `${what} must be a number of Btu/h`,
+    })
     .min(0, { error: `${what} must be 0 or more Btu/h` })
     .max(1_000_000, { error: `${what} must be at most 1,000,000 Btu/h` });
 
@@ -33,13 +36,25 @@ export const catalogSystemSchema = z
   })
   .superRefine((s, ctx) => {
     if (s.coolingSensibleBtuh > s.coolingTotalBtuh) {
-      ctx.addIssue({ code: "custom", path: ["coolingSensibleBtuh"], message: "sensible capacity exceeds total capacity" });
+      ctx.addIssue({
+        code: "custom",
+        path: ["coolingSensibleBtuh"],
+        message: "sensible capacity exceeds total capacity",
+      });
     }
     if (s.type !== "furnace" && s.coolingTotalBtuh <= 0) {
-      ctx.addIssue({ code: "custom", path: ["coolingTotalBtuh"], message: `a ${s.type} system needs a cooling capacity` });
+      ctx.addIssue({
+        code: "custom",
+        path: ["coolingTotalBtuh"],
+        message: `a ${s.type} system needs a cooling capacity`,
+      });
     }
     if ((s.type === "furnace" || s.type === "ac-furnace") && s.heatingOutputBtuh <= 0) {
-      ctx.addIssue({ code: "custom", path: ["heatingOutputBtuh"], message: `a ${s.type} system needs a heating output` });
+      ctx.addIssue({
+        code: "custom",
+        path: ["heatingOutputBtuh"],
+        message: `a ${s.type} system needs a heating output`,
+      });
     }
   });
 export type CatalogSystemInput = z.input<typeof catalogSystemSchema>;
@@ -69,10 +84,18 @@ export const sizingLimitsSchema = z
   })
   .superRefine((l, ctx) => {
     if (l.coolingMinPct > l.coolingMaxPct) {
-      ctx.addIssue({ code: "custom", path: ["coolingMinPct"], message: "coolingMinPct is above coolingMaxPct" });
+      ctx.addIssue({
+        code: "custom",
+        path: ["coolingMinPct"],
+        message: "coolingMinPct is above coolingMaxPct",
+      });
     }
     if (l.heatingMinPct > l.heatingMaxPct) {
-      ctx.addIssue({ code: "custom", path: ["heatingMinPct"], message: "heatingMinPct is above heatingMaxPct" });
+      ctx.addIssue({
+        code: "custom",
+        path: ["heatingMinPct"],
+        message: "heatingMinPct is above heatingMaxPct",
+      });
     }
   });
 export type SizingLimits = z.output<typeof sizingLimitsSchema>;

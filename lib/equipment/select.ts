@@ -56,17 +56,26 @@ function pctOf(capacity: number, load: number): number | null {
   return load > 0 ? (100 * capacity) / load : null;
 }
 
-export function evaluateSystem(system: CatalogSystem, loads: SelectionLoads, limits: SizingLimits): SystemEvaluation {
+export function evaluateSystem(
+  system: CatalogSystem,
+  loads: SelectionLoads,
+  limits: SizingLimits,
+): SystemEvaluation {
   const reasons: Misfit[] = [];
   const coolingPct = pctOf(system.coolingTotalBtuh, loads.coolingTotalBtuh);
   const isHeatPump = system.type === "heat-pump" || system.type === "heat-pump-backup";
 
   if (loads.coolingRequired) {
     if (system.type === "furnace") {
-      reasons.push({ reason: "no-cooling", message: "a furnace alone provides no cooling and the house needs it" });
+      reasons.push({
+        reason: "no-cooling",
+        message: "a furnace alone provides no cooling and the house needs it",
+      });
     } else {
       const maxPct =
-        isHeatPump && loads.heatingBtuh > loads.coolingTotalBtuh ? limits.heatPumpCoolingMaxPct : limits.coolingMaxPct;
+        isHeatPump && loads.heatingBtuh > loads.coolingTotalBtuh
+          ? limits.heatPumpCoolingMaxPct
+          : limits.coolingMaxPct;
       const minBtuh = (limits.coolingMinPct / 100) * loads.coolingTotalBtuh;
       const maxBtuh = (maxPct / 100) * loads.coolingTotalBtuh;
       if (system.coolingTotalBtuh < minBtuh) {
@@ -96,7 +105,10 @@ export function evaluateSystem(system: CatalogSystem, loads: SelectionLoads, lim
     }
   }
 
-  const heatingCapacity = system.type === "heat-pump-backup" ? system.heatingOutputBtuh + system.backupHeatBtuh : system.heatingOutputBtuh;
+  const heatingCapacity =
+    system.type === "heat-pump-backup"
+      ? system.heatingOutputBtuh + system.backupHeatBtuh
+      : system.heatingOutputBtuh;
   const heatingPct = pctOf(heatingCapacity, loads.heatingBtuh);
   const heatMin = (limits.heatingMinPct / 100) * loads.heatingBtuh;
   const heatMax = (limits.heatingMaxPct / 100) * loads.heatingBtuh;
@@ -115,10 +127,19 @@ export function evaluateSystem(system: CatalogSystem, loads: SelectionLoads, lim
       message: `furnace output ${fmt(heatingCapacity)} Btu/h is above ${limits.heatingMaxPct} % of the ${fmt(loads.heatingBtuh)} Btu/h heating load`,
     });
   }
-  return { system, fits: reasons.length === 0, reasons, coolingPctOfLoad: coolingPct, heatingPctOfLoad: heatingPct };
+  return {
+    system,
+    fits: reasons.length === 0,
+    reasons,
+    coolingPctOfLoad: coolingPct,
+    heatingPctOfLoad: heatingPct,
+  };
 }
 
-function parseOrThrow<T>(parsed: { success: true; data: T } | { success: false; error: import("zod").ZodError }, prefix: string): T {
+function parseOrThrow<T>(
+  parsed: { success: true; data: T } | { success: false; error: import("zod").ZodError },
+  prefix: string,
+): T {
   if (parsed.success) return parsed.data;
   throw LoadInputError.fromIssues(toLoadInputIssues(parsed.error, prefix));
 }
@@ -133,7 +154,9 @@ export function selectEquipment(args: {
   limits?: SizingLimitsInput;
 }): EquipmentSelection {
   const loads = parseOrThrow(selectionLoadsSchema.safeParse(args.loads), "loads");
-  const limits = args.limits ? parseOrThrow(sizingLimitsSchema.safeParse(args.limits), "limits") : { ...DEFAULT_SIZING_LIMITS };
+  const limits = args.limits
+    ? parseOrThrow(sizingLimitsSchema.safeParse(args.limits), "limits")
+    : { ...DEFAULT_SIZING_LIMITS };
   return selectFromParsed({ loads, catalog: parseCatalog(args.catalog), limits });
 }
 
@@ -154,14 +177,24 @@ export function parseCatalog(raw: readonly unknown[]): CatalogSystem[] {
  * The selection itself, for inputs already validated (a bulk recompute selects for thousands of
  * lots with one parsed catalog). `selectEquipment` validates and calls it.
  */
-export function selectFromParsed({ loads, catalog, limits }: { loads: SelectionLoads; catalog: readonly CatalogSystem[]; limits: SizingLimits }): EquipmentSelection {
+export function selectFromParsed({
+  loads,
+  catalog,
+  limits,
+}: {
+  loads: SelectionLoads;
+  catalog: readonly CatalogSystem[];
+  limits: SizingLimits;
+}): EquipmentSelection {
   const evaluations = catalog.map((system) => evaluateSystem(system, loads, limits));
   const fitting = evaluations
     .filter((e) => e.fits)
     .sort(
       (a, b) =>
         a.system.coolingTotalBtuh - b.system.coolingTotalBtuh ||
-        a.system.heatingOutputBtuh + a.system.backupHeatBtuh - (b.system.heatingOutputBtuh + b.system.backupHeatBtuh) ||
+        a.system.heatingOutputBtuh +
+          a.system.backupHeatBtuh -
+          (b.system.heatingOutputBtuh + b.system.backupHeatBtuh) ||
         (a.system.priceUsd ?? Infinity) - (b.system.priceUsd ?? Infinity),
     );
   return {

@@ -35,7 +35,10 @@ export async function readBodyLimited(request: Request, maxBytes: number, what: 
 }
 
 function tooLarge(what: string, maxBytes: number) {
-  return new AppError("payload_too_large", `${what} is larger than ${megabytes(maxBytes)}, the limit. Nothing was saved.`);
+  return new AppError(
+    "payload_too_large",
+    `${what} is larger than ${megabytes(maxBytes)}, the limit. Nothing was saved.`,
+  );
 }
 
 /** The small limit of every JSON (and sign-in form) body. */
@@ -59,10 +62,13 @@ export async function readUploadedFile(request: Request): Promise<{ fileName: st
     body = await readBodyLimited(request, maxBytes + MULTIPART_OVERHEAD_BYTES, "The upload");
   } catch (error) {
     // Name the upload limit itself, not the room left for the multipart wrapping.
-    if (error instanceof AppError && error.code === "payload_too_large") throw tooLarge("The upload", maxBytes);
+    if (error instanceof AppError && error.code === "payload_too_large")
+      throw tooLarge("The upload", maxBytes);
     throw error;
   }
-  const form = await new Response(body as BodyInit, { headers: { "content-type": type } }).formData().catch(() => null);
+  const form = await new Response(body as BodyInit, { headers: { "content-type": type } })
+    .formData()
+    .catch(() => null);
   const file = form?.get("file");
   if (!file || typeof file === "string") throw noFile();
   if (file.size > maxBytes) throw tooLarge(`The file "${file.name}"`, maxBytes);
@@ -70,5 +76,7 @@ export async function readUploadedFile(request: Request): Promise<{ fileName: st
 }
 
 function noFile() {
-  return new AppError("invalid_input", "Choose a .csv or .xlsx file to import.", [{ field: "file", message: "No file" }]);
+  return new AppError("invalid_input", "Choose a .csv or .xlsx file to import.", [
+    { field: "file", message: "No file" },
+  ]);
 }

@@ -21,13 +21,19 @@ export function markClientAddressesStamped(on = true): void {
 }
 
 /** The client's address as proxy-addr finds it: the closest address not among the trusted hops. */
-export function resolveClientAddress(request: Pick<IncomingMessage, "headers" | "socket">, trustedProxies: number): string {
+export function resolveClientAddress(
+  request: Pick<IncomingMessage, "headers" | "socket">,
+  trustedProxies: number,
+): string {
   const found = proxyaddr(request as IncomingMessage, (_address, hop) => hop < trustedProxies);
   return normalizeAddress(found) ?? "unknown";
 }
 
 /** Run by the edge on every request before Next sees it. */
-export function stampClientAddress(request: Pick<IncomingMessage, "headers" | "socket">, trustedProxies: number): void {
+export function stampClientAddress(
+  request: Pick<IncomingMessage, "headers" | "socket">,
+  trustedProxies: number,
+): void {
   // Node lowercases header names, so this removes the header in any spelling the client used.
   delete request.headers[CLIENT_ADDRESS_HEADER];
   request.headers[CLIENT_ADDRESS_HEADER] = resolveClientAddress(request, trustedProxies);
@@ -48,7 +54,10 @@ export function addressLimitKey(address: string): string {
   if (!normalized) return "unknown";
   const parsed = ipaddr.parse(normalized);
   if (parsed.kind() === "ipv4") return normalized;
-  return `${(parsed as ipaddr.IPv6).parts.slice(0, 4).map((p) => p.toString(16)).join(":")}::/64`;
+  return `${(parsed as ipaddr.IPv6).parts
+    .slice(0, 4)
+    .map((p) => p.toString(16))
+    .join(":")}::/64`;
 }
 
 /**
@@ -58,8 +67,11 @@ export function addressLimitKey(address: string): string {
  */
 export function stampedClientAddress(headers: Record<string, unknown> | Headers | undefined): string {
   if (!(globalThis as Marked)[STAMPED]) {
-    throw new Error("Sign-in is unavailable: Platload must be started with its own web server (npm start, scripts/serve.ts) so it can tell clients apart.");
+    throw new Error(
+      "Sign-in is unavailable: Platload must be started with its own web server (npm start, scripts/serve.ts) so it can tell clients apart.",
+    );
   }
-  const value = headers instanceof Headers ? headers.get(CLIENT_ADDRESS_HEADER) : headers?.[CLIENT_ADDRESS_HEADER];
+  const value =
+    headers instanceof Headers ? headers.get(CLIENT_ADDRESS_HEADER) : headers?.[CLIENT_ADDRESS_HEADER];
   return (typeof value === "string" && normalizeAddress(value)) || "unknown";
 }

@@ -26,7 +26,13 @@ export const API_CONTENT_SECURITY_POLICY = "frame-ancestors 'none'; base-uri 'no
  * <style> elements and React renders style="" attributes (grids, charts, column widths); styles
  * cannot run code, so this is the usual trade.
  */
-export function pageContentSecurityPolicy({ nonce, development }: { nonce: string; development: boolean }): string {
+export function pageContentSecurityPolicy({
+  nonce,
+  development,
+}: {
+  nonce: string;
+  development: boolean;
+}): string {
   return [
     "default-src 'self'",
     `script-src 'self' 'nonce-${nonce}' 'strict-dynamic'${development ? " 'unsafe-eval'" : ""}`,

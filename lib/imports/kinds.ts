@@ -3,20 +3,33 @@
  * check also takes what it must know of the account (its plan codes, the community's lots).
  */
 import type { RawTable, TableCellError } from "@/lib/workbook/columns";
-import { EQUIPMENT_COLUMNS, validateEquipmentTable, type EquipmentCatalogEntry } from "@/lib/workbook/equipment-columns";
-import { LOT_COLUMNS, validateLotTable, type LotStatusValue, type ValidLotRow } from "@/lib/workbook/lot-columns";
+import {
+  EQUIPMENT_COLUMNS,
+  validateEquipmentTable,
+  type EquipmentCatalogEntry,
+} from "@/lib/workbook/equipment-columns";
+import {
+  LOT_COLUMNS,
+  validateLotTable,
+  type LotStatusValue,
+  type ValidLotRow,
+} from "@/lib/workbook/lot-columns";
 import { PLAN_COLUMNS, validatePlanTable, type ValidPlanRow } from "@/lib/workbook/plan-columns";
 import { readImportFile, sortProblems, withSheetHint, type ImportKind, type StageResult } from "./pipeline";
 
 /** The plan rows to write, each with its cells as entered (formulas kept) to keep with its revision. */
 export function checkPlanImport(table: RawTable): StageResult<ValidPlanRow[]> {
   const result = validatePlanTable(table);
-  return result.ok ? { ok: true, value: result.plans } : { ok: false, errors: withSheetHint(table, PLAN_COLUMNS, result.errors) };
+  return result.ok
+    ? { ok: true, value: result.plans }
+    : { ok: false, errors: withSheetHint(table, PLAN_COLUMNS, result.errors) };
 }
 
 export function checkCatalogImport(table: RawTable): StageResult<EquipmentCatalogEntry[]> {
   const result = validateEquipmentTable(table);
-  return result.ok ? { ok: true, value: result.systems } : { ok: false, errors: withSheetHint(table, EQUIPMENT_COLUMNS, result.errors) };
+  return result.ok
+    ? { ok: true, value: result.systems }
+    : { ok: false, errors: withSheetHint(table, EQUIPMENT_COLUMNS, result.errors) };
 }
 
 /** What the lots check knows of a community's lots already there. */
@@ -48,7 +61,11 @@ export function checkLotImport(table: RawTable, context: LotImportContext): Stag
     const lot = context.existing.get(row.lotNumber.toLowerCase());
     const planId = context.planIds.get(row.planCode);
     if (lot && FROZEN.includes(lot.status) && (lot.planId !== planId || lot.facingDeg !== row.facingDeg)) {
-      errors.push({ row: row.rowNumber, column: lot.planId !== planId ? lotHeader("plan_code") : lotHeader("facing"), reason: `lot ${row.lotNumber} is frozen for permit (${lot.status.replace("_", " ")}); its plan and facing cannot change by import` });
+      errors.push({
+        row: row.rowNumber,
+        column: lot.planId !== planId ? lotHeader("plan_code") : lotHeader("facing"),
+        reason: `lot ${row.lotNumber} is frozen for permit (${lot.status.replace("_", " ")}); its plan and facing cannot change by import`,
+      });
     }
     const from = lot?.status ?? "planned";
     if (from !== row.status && (FROZEN.includes(from) || FROZEN.includes(row.status))) {
@@ -68,7 +85,12 @@ export type ImportContext = { plans: undefined; equipment: undefined; lots: LotI
  * Read and check in one call, for any importer: what the runner does before it computes and
  * saves, and what the fuzz tests drive with generated files.
  */
-export async function readAndCheck<K extends ImportKind>(kind: K, fileName: string, data: Uint8Array, context: ImportContext[K]): Promise<StageResult<unknown>> {
+export async function readAndCheck<K extends ImportKind>(
+  kind: K,
+  fileName: string,
+  data: Uint8Array,
+  context: ImportContext[K],
+): Promise<StageResult<unknown>> {
   const read = await readImportFile(fileName, data);
   if (!read.ok) return read;
   if (kind === "plans") return checkPlanImport(read.value);

@@ -33,17 +33,36 @@ export async function readImportFile(fileName: string, data: Uint8Array): Promis
  * When a workbook's first sheet lacks required columns that another sheet has, the data is most
  * likely on that sheet: say so first, before the missing-column problems it causes.
  */
-export function withSheetHint(table: RawTable, columns: readonly ColumnDef[], errors: TableCellError[]): TableCellError[] {
-  const missing = columns.filter((c) => c.required && !table.headers.some((h) => normalizeHeader(h) === normalizeHeader(c.header) || h.trim() === c.key));
+export function withSheetHint(
+  table: RawTable,
+  columns: readonly ColumnDef[],
+  errors: TableCellError[],
+): TableCellError[] {
+  const missing = columns.filter(
+    (c) =>
+      c.required &&
+      !table.headers.some((h) => normalizeHeader(h) === normalizeHeader(c.header) || h.trim() === c.key),
+  );
   if (missing.length === 0 || !table.otherSheets?.length) return errors;
-  const hasAll = (headers: string[]) => missing.every((c) => headers.some((h) => normalizeHeader(h) === normalizeHeader(c.header) || h.trim() === c.key));
+  const hasAll = (headers: string[]) =>
+    missing.every((c) =>
+      headers.some((h) => normalizeHeader(h) === normalizeHeader(c.header) || h.trim() === c.key),
+    );
   const found = table.otherSheets.find((sheet) => hasAll(sheet.headers));
   if (!found) return errors;
-  return [fileProblem(`the first sheet ("${table.sheetName ?? "Sheet1"}") does not hold the table; the sheet "${found.name}" has its columns — move that sheet first, or save it alone, and import again`), ...errors];
+  return [
+    fileProblem(
+      `the first sheet ("${table.sheetName ?? "Sheet1"}") does not hold the table; the sheet "${found.name}" has its columns — move that sheet first, or save it alone, and import again`,
+    ),
+    ...errors,
+  ];
 }
 
 /** What an import keeps and answers of its problems: the first MAX_FIELD_ERRORS and how many in all. */
-export function capProblems(errors: readonly TableCellError[]): { errors: TableCellError[]; errorCount: number } {
+export function capProblems(errors: readonly TableCellError[]): {
+  errors: TableCellError[];
+  errorCount: number;
+} {
   return { errors: errors.slice(0, MAX_FIELD_ERRORS), errorCount: errors.length };
 }
 

@@ -8,5 +8,12 @@ import { env } from "@/lib/env";
  * request answers "try again" rather than hanging when Redis is down.
  */
 export function redisConnection(kind: "worker" | "web", url = env().REDIS_URL): RedisOptions {
-  return kind === "worker" ? { url, maxRetriesPerRequest: null } : { url, maxRetriesPerRequest: 1, connectTimeout: 3000, retryStrategy: (times: number) => Math.min(times * 200, 2000) };
+  return kind === "worker"
+    ? { url, maxRetriesPerRequest: null }
+    : {
+        url,
+        maxRetriesPerRequest: 1,
+        connectTimeout: 3000,
+        retryStrategy: (times: number) => Math.min(times * 200, 2000),
+      };
 }

@@ -9,7 +9,11 @@ export const QUEUE_NAME = "platload-jobs";
 
 const globalForQueue = globalThis as unknown as { platloadQueue?: Queue };
 
-export function createJobQueue({ url = env().REDIS_URL, prefix = env().PLATLOAD_QUEUE_PREFIX, kind = "web" as "web" | "worker" } = {}): Queue {
+export function createJobQueue({
+  url = env().REDIS_URL,
+  prefix = env().PLATLOAD_QUEUE_PREFIX,
+  kind = "web" as "web" | "worker",
+} = {}): Queue {
   return new Queue(QUEUE_NAME, {
     connection: redisConnection(kind, url),
     prefix,
@@ -33,13 +37,20 @@ export function jobQueue(): Queue {
  * Queues a job. A job given an id (an import, a packet: workJobId) is queued once however often
  * it is added while the queue knows it. Redis not answering is a 503 that says nothing ran.
  */
-export async function enqueueJob<N extends JobName>(name: N, payload: JobPayload<N>, { jobId, queue = jobQueue() }: { jobId?: string; queue?: Queue } = {}): Promise<string> {
+export async function enqueueJob<N extends JobName>(
+  name: N,
+  payload: JobPayload<N>,
+  { jobId, queue = jobQueue() }: { jobId?: string; queue?: Queue } = {},
+): Promise<string> {
   const data = jobPayloadSchemas[name].parse(payload);
   try {
     const job = await queue.add(name, data, { jobId });
     return job.id ?? "";
   } catch (error) {
     console.error("could not queue a job:", error);
-    throw new AppError("unavailable", "The job queue is not answering, so the work could not be started. Try again in a minute.");
+    throw new AppError(
+      "unavailable",
+      "The job queue is not answering, so the work could not be started. Try again in a minute.",
+    );
   }
 }

@@ -13,7 +13,12 @@ export const jobPayloadSchemas = {
   /** Render a permit packet or a schedule, keep it, and e-mail it when asked (packets row). */
   packet: z.object({ packetId: z.number().int().positive() }),
   /** Send one message (invitations); the message itself is the payload. */
-  mail: z.object({ accountId: z.number().int().positive(), to: z.array(z.string()).min(1), subject: z.string(), text: z.string() }),
+  mail: z.object({
+    accountId: z.number().int().positive(),
+    to: z.array(z.string()).min(1),
+    subject: z.string(),
+    text: z.string(),
+  }),
   /** Housekeeping: files of failed imports, work whose job was lost before it was queued. */
   sweep: z.object({}),
 } satisfies Record<JobName, z.ZodType>;

@@ -41,7 +41,8 @@ export function startJobWorker({
       const schema = jobPayloadSchemas[name];
       if (!schema) throw new UnrecoverableError(`unknown job "${job.name}"`);
       const payload = schema.safeParse(job.data);
-      if (!payload.success) throw new UnrecoverableError(`job ${job.id} (${job.name}) has a malformed payload`);
+      if (!payload.success)
+        throw new UnrecoverableError(`job ${job.id} (${job.name}) has a malformed payload`);
       return (handlers[name] as (p: unknown, j: Job) => Promise<unknown>)(payload.data, job);
     },
     {
@@ -57,8 +58,13 @@ export function startJobWorker({
   worker.on("failed", (job, error) => {
     if (!job) return;
     const final = !!job.finishedOn || error.name === "UnrecoverableError";
-    console.error(`job ${job.id} (${job.name}) attempt ${job.attemptsMade} failed${final ? " for the last time" : ", will retry"}: ${error.message}`);
-    if (final) onFinalFailure(job.name as JobName, job.data, error).catch((e: unknown) => console.error("could not record a failed job:", e));
+    console.error(
+      `job ${job.id} (${job.name}) attempt ${job.attemptsMade} failed${final ? " for the last time" : ", will retry"}: ${error.message}`,
+    );
+    if (final)
+      onFinalFailure(job.name as JobName, job.data, error).catch((e: unknown) =>
+        console.error("could not record a failed job:", e),
+      );
   });
   worker.on("error", (error) => console.error("job worker error:", error.message));
   return worker;

@@ -40,8 +40,6 @@ export function planLeakageAreaCm2(plan: PlanInput, volumeFt3: number): number {
   return effectiveLeakageAreaCm2(cfm50 ?? cfm50FromAch50(ach50 ?? 0, volumeFt3), flowExponent);
 }
 
-
-
 /**
  * How outdoor air splits between infiltration and the ventilation component, as cfm multipliers
  * of the sensible and latent air factors. Unbalanced flow combines with infiltration
@@ -59,23 +57,38 @@ export function ventilationShareCfm(
       latentCfm: ventilationProvidedCfm * (1 - v.latentRecoveryEffectiveness),
     };
   }
-  const combined = Math.sqrt(infiltrationCfm * infiltrationCfm + ventilationProvidedCfm * ventilationProvidedCfm);
+  const combined = Math.sqrt(
+    infiltrationCfm * infiltrationCfm + ventilationProvidedCfm * ventilationProvidedCfm,
+  );
   return { sensibleCfm: combined - infiltrationCfm, latentCfm: combined - infiltrationCfm };
 }
 
-export function prepareAir(plan: PlanInput, site: PreparedSite, volumeFt3: number, notes: string[]): PreparedAir {
+export function prepareAir(
+  plan: PlanInput,
+  site: PreparedSite,
+  volumeFt3: number,
+  notes: string[],
+): PreparedAir {
   const s = site.site;
   const dtHeat = s.indoorHeatingF - s.heatingOutdoorDbF;
   const { shelterClass } = plan.infiltration;
   const elaCm2 = planLeakageAreaCm2(plan, volumeFt3);
   if (plan.stories > 3) notes.push("LBL infiltration coefficients for 3 stories used for a taller house.");
-  const heatingInfiltrationCfm = lblInfiltrationCfm(elaCm2, plan.stories, shelterClass, dtHeat, HEATING_WIND_MPH);
+  const heatingInfiltrationCfm = lblInfiltrationCfm(
+    elaCm2,
+    plan.stories,
+    shelterClass,
+    dtHeat,
+    HEATING_WIND_MPH,
+  );
 
   const ventilationRequiredCfm = ashrae622VentilationCfm(plan.conditionedFloorAreaFt2, plan.bedrooms);
   const v = plan.ventilation;
   const ventilationProvidedCfm = v.kind === "none" ? 0 : (v.cfm ?? ventilationRequiredCfm);
   if (v.kind !== "none" && v.cfm === undefined) {
-    notes.push(`Ventilation flow not entered: the ASHRAE 62.2-2016 rate of ${ventilationRequiredCfm.toFixed(0)} cfm is assumed.`);
+    notes.push(
+      `Ventilation flow not entered: the ASHRAE 62.2-2016 rate of ${ventilationRequiredCfm.toFixed(0)} cfm is assumed.`,
+    );
   }
   if (ventilationProvidedCfm < ventilationRequiredCfm) {
     notes.push(
@@ -94,9 +107,11 @@ export function prepareAir(plan: PlanInput, site: PreparedSite, volumeFt3: numbe
     const inf = lblInfiltrationCfm(elaCm2, plan.stories, shelterClass, Math.abs(dT), COOLING_WIND_MPH);
     coolingInfiltrationCfm[h] = inf;
     coolingInfiltrationSensibleBtuh[h] = site.sensibleFactor * inf * dT;
-    coolingVentilationSensibleBtuh[h] = site.sensibleFactor * ventilationShareCfm(plan, ventilationProvidedCfm, inf).sensibleCfm * dT;
+    coolingVentilationSensibleBtuh[h] =
+      site.sensibleFactor * ventilationShareCfm(plan, ventilationProvidedCfm, inf).sensibleCfm * dT;
   }
-  const balancedLatentCfm = v.kind === "balanced" ? ventilationProvidedCfm * (1 - v.latentRecoveryEffectiveness) : 0;
+  const balancedLatentCfm =
+    v.kind === "balanced" ? ventilationProvidedCfm * (1 - v.latentRecoveryEffectiveness) : 0;
 
   return {
     elaCm2,

@@ -131,9 +131,14 @@ export function wallU(construction: WallConstruction, season: Season = "heating"
   const base = WALL_BASES[construction.baseId];
   const framingR = base.framingDepthIn * MATERIAL_R.softwoodPerInch;
   const cavityR = construction.cavityR > 0 ? construction.cavityR : MATERIAL_R.airSpaceVertical;
-  const exteriorR = base.kind === "wood" ? MATERIAL_R.vinylSiding : MATERIAL_R.stuccoSevenEighthsInch + (base.blockR ?? 0);
+  const exteriorR =
+    base.kind === "wood" ? MATERIAL_R.vinylSiding : MATERIAL_R.stuccoSevenEighthsInch + (base.blockR ?? 0);
   const seriesR =
-    outsideFilm(season) + exteriorR + construction.continuousR + MATERIAL_R.gypsumHalfInch + FILM_R.insideVertical;
+    outsideFilm(season) +
+    exteriorR +
+    construction.continuousR +
+    MATERIAL_R.gypsumHalfInch +
+    FILM_R.insideVertical;
   return parallelPathU([
     { fraction: 1 - base.framingFraction, r: seriesR + cavityR },
     { fraction: base.framingFraction, r: seriesR + framingR },
@@ -207,7 +212,11 @@ export function ventedRoofDeckUWithoutOutsideFilm(): number {
  * Framed floor over unconditioned space: carpetless ¾ in plywood subfloor, joists 9¼ in (2x10)
  * at 16 in (10 %) or 24 in (7 %) o.c., still-air films both sides, or an outdoor film below.
  */
-export function floorU(construction: FloorConstruction, underside: "still-air" | "outdoors", season: Season = "heating"): number {
+export function floorU(
+  construction: FloorConstruction,
+  underside: "still-air" | "outdoors",
+  season: Season = "heating",
+): number {
   if (construction.uFactor !== undefined) return construction.uFactor;
   const framingFraction = construction.baseId === "floor-joists-2x10-24in-oc" ? 0.07 : 0.1;
   const depthIn = 9.25;
@@ -249,7 +258,10 @@ export const SLAB_TABLE_INSULATED_R = 0.95 * 5.678;
  * table's insulated value is kept (it gives nothing for more insulation, so the loss is then
  * overstated a little — conservative for heating).
  */
-export function slabFFactor(edgeInsulationR: number, construction: SlabEdgeConstruction = "block-8in-brick-facing"): number {
+export function slabFFactor(
+  edgeInsulationR: number,
+  construction: SlabEdgeConstruction = "block-8in-brick-facing",
+): number {
   const row = SLAB_EDGE_F_P_W_M_K[construction];
   const t = Math.min(1, edgeInsulationR / SLAB_TABLE_INSULATED_R);
   return (row.uninsulated + t * (row.insulated - row.uninsulated)) * BTUH_FT_F_PER_W_M_K;

@@ -33,7 +33,12 @@ export function atticAirTemperatureF(params: {
 export const SOL_AIR_HO_BTUH_FT2F = 4.0;
 export const SOL_AIR_LONGWAVE_HORIZONTAL_F = 7.2;
 
-export function solAirTemperatureF(outdoorF: number, absorptance: number, irradianceBtuhFt2: number, tiltDeg: number): number {
+export function solAirTemperatureF(
+  outdoorF: number,
+  absorptance: number,
+  irradianceBtuhFt2: number,
+  tiltDeg: number,
+): number {
   const longwaveF = SOL_AIR_LONGWAVE_HORIZONTAL_F * Math.max(0, Math.cos((tiltDeg * Math.PI) / 180));
   return outdoorF + (absorptance * irradianceBtuhFt2) / SOL_AIR_HO_BTUH_FT2F - longwaveF;
 }

@@ -135,8 +135,24 @@ function ductGainBtuh(p: PreparedPlan, roomLoadBtuh: number, atticF: number, h: 
   if (!dz.geometry.outsideEnvelope) return 0;
   const site = p.site;
   const tic = site.site.indoorCoolingF;
-  const zoneF = dz.zone === "attic" ? atticF : dz.zone === "crawl" ? site.dailyMeanOutdoorF : dz.zone === "garage" ? p.envelope.garageCoolingF[h] : tic;
-  const d = ductLoad(dz.geometry, roomLoadBtuh, "cooling", zoneF, tic, p.plan.coolingSupplyDeltaF, site.sensibleFactor, 0);
+  const zoneF =
+    dz.zone === "attic"
+      ? atticF
+      : dz.zone === "crawl"
+        ? site.dailyMeanOutdoorF
+        : dz.zone === "garage"
+          ? p.envelope.garageCoolingF[h]
+          : tic;
+  const d = ductLoad(
+    dz.geometry,
+    roomLoadBtuh,
+    "cooling",
+    zoneF,
+    tic,
+    p.plan.coolingSupplyDeltaF,
+    site.sensibleFactor,
+    0,
+  );
   return d.sensibleBtuh * dz.lossFractionCool;
 }
 
@@ -150,7 +166,20 @@ export function hourlyCoolingDay(p: PreparedPlan, facingAzimuthDeg: number): Coo
   const st = p.storage;
 
   // Scratch rows reused across calls (the function is synchronous and never re-entered).
-  const { walls, windows, doors, ceilings, vaulted, skylights, floors, foundationWalls, garageWall, ducts, rooms, total } = SCRATCH;
+  const {
+    walls,
+    windows,
+    doors,
+    ceilings,
+    vaulted,
+    skylights,
+    floors,
+    foundationWalls,
+    garageWall,
+    ducts,
+    rooms,
+    total,
+  } = SCRATCH;
   const { te, lagged, gain, roofIrr, atticF, doorGain } = SCRATCH;
   const windowsByFacade = SCRATCH.windowsByFacade;
   walls.fill(0);
@@ -175,7 +204,8 @@ export function hourlyCoolingDay(p: PreparedPlan, facingAzimuthDeg: number): Coo
     const fc = env.facades[fi];
     const profile: SurfaceProfile = solar.surface(facingAzimuthDeg + FACADE_OFFSET_DEG[fc.facade], 90);
     const totalWm2 = profile.totalWm2;
-    for (let h = 0; h < 24; h++) te[h] = solAir(toArr[h], p.plan.wallSolarAbsorptance, totalWm2[h] * W_M2_TO_BTUH_FT2, 90);
+    for (let h = 0; h < 24; h++)
+      te[h] = solAir(toArr[h], p.plan.wallSolarAbsorptance, totalWm2[h] * W_M2_TO_BTUH_FT2, 90);
     const cts = st.walls[fi];
     convolve(te, cts.factors, cts.last, lagged);
     for (let h = 0; h < 24; h++) {
@@ -204,7 +234,12 @@ export function hourlyCoolingDay(p: PreparedPlan, facingAzimuthDeg: number): Coo
         const conductionRadiant = w.shgc < 0.5 ? RADIANT_WINDOW_LOW_SHGC : RADIANT_WINDOW_HIGH_SHGC;
         convective += (1 - conductionRadiant) * conduction;
         nonsolarRadiant += conductionRadiant * conduction;
-        const sunlit = sunlitFraction(w.overhangDepthFt, w.overhangHeightAboveHeadFt, w.windowHeightFt, tanOmega);
+        const sunlit = sunlitFraction(
+          w.overhangDepthFt,
+          w.overhangHeightAboveHeadFt,
+          w.windowHeightFt,
+          tanOmega,
+        );
         const beam = w.areaFt2 * w.attenuation * w.shgc * beamBase * sunlit;
         const diff = w.areaFt2 * w.attenuation * w.shgc * diffuse;
         if (w.interiorShade) {
@@ -264,7 +299,8 @@ export function hourlyCoolingDay(p: PreparedPlan, facingAzimuthDeg: number): Coo
     for (let h = 0; h < 24; h++) atticF[h] = toArr[h];
   }
   if (env.vaulted.uaCool > 0) {
-    for (let h = 0; h < 24; h++) te[h] = solAir(toArr[h], env.vaulted.absorptance, roofIrr[h], env.roofTiltDeg);
+    for (let h = 0; h < 24; h++)
+      te[h] = solAir(toArr[h], env.vaulted.absorptance, roofIrr[h], env.roofTiltDeg);
     convolve(te, st.vaulted.factors, st.vaulted.last, lagged);
     for (let h = 0; h < 24; h++) gain[h] = env.vaulted.uaCool * (lagged[h] - tic);
     addStored(gain, RADIANT_ROOF, vaulted, SCRATCH.radVaulted);
@@ -275,8 +311,20 @@ export function hourlyCoolingDay(p: PreparedPlan, facingAzimuthDeg: number): Coo
     const radN = SCRATCH.radSkylights;
     const radS = SCRATCH.radSkylightsSolar;
     for (let h = 0; h < 24; h++) {
-      const beam = sk.areaFt2 * sk.attenuation * sk.shgc * prof.beamWm2[h] * W_M2_TO_BTUH_FT2 * shgcRatio(prof.incidenceDeg[h]);
-      const diffuse = sk.areaFt2 * sk.attenuation * sk.shgc * prof.diffuseAndReflectedWm2[h] * W_M2_TO_BTUH_FT2 * DIFFUSE_RATIO;
+      const beam =
+        sk.areaFt2 *
+        sk.attenuation *
+        sk.shgc *
+        prof.beamWm2[h] *
+        W_M2_TO_BTUH_FT2 *
+        shgcRatio(prof.incidenceDeg[h]);
+      const diffuse =
+        sk.areaFt2 *
+        sk.attenuation *
+        sk.shgc *
+        prof.diffuseAndReflectedWm2[h] *
+        W_M2_TO_BTUH_FT2 *
+        DIFFUSE_RATIO;
       const conduction = sk.uaCool * (toArr[h] - tic);
       skylights[h] = (1 - RADIANT_WINDOW_LOW_SHGC) * conduction;
       radN[h] = RADIANT_WINDOW_LOW_SHGC * conduction + diffuse;
@@ -309,9 +357,21 @@ export function hourlyCoolingDay(p: PreparedPlan, facingAzimuthDeg: number): Coo
   try {
     for (let h = 0; h < 24; h++) {
       rooms[h] =
-        walls[h] + windows[h] + doors[h] + ceilings[h] + vaulted[h] + skylights[h] + floors[h] + slab +
-        foundationWalls[h] + garageWall[h] + stored[h] + storedSolar[h] + air.coolingInfiltrationSensibleBtuh[h] +
-        air.coolingVentilationSensibleBtuh[h] + internal;
+        walls[h] +
+        windows[h] +
+        doors[h] +
+        ceilings[h] +
+        vaulted[h] +
+        skylights[h] +
+        floors[h] +
+        slab +
+        foundationWalls[h] +
+        garageWall[h] +
+        stored[h] +
+        storedSolar[h] +
+        air.coolingInfiltrationSensibleBtuh[h] +
+        air.coolingVentilationSensibleBtuh[h] +
+        internal;
       ducts[h] = ductGainBtuh(p, rooms[h], atticF[h], h);
       total[h] = rooms[h] + ducts[h];
       if (total[h] > total[peak]) peak = h;
@@ -321,10 +381,13 @@ export function hourlyCoolingDay(p: PreparedPlan, facingAzimuthDeg: number): Coo
   }
   // The rooms may drift up to the design swing at the peak (temperature-swing.ts): the capacity the
   // rooms need is below their fixed-set-point peak by the swing credit, and the ducts carry that.
-  const conductance = st.envelopeConductanceBtuhF + site.sensibleFactor * (air.coolingInfiltrationCfm[peak] + air.ventilationProvidedCfm);
+  const conductance =
+    st.envelopeConductanceBtuhF +
+    site.sensibleFactor * (air.coolingInfiltrationCfm[peak] + air.ventilationProvidedCfm);
   const roomCapacity = capacityWithSwing(rooms, conductance, st.capacitanceBtuF, DESIGN_SWING_F);
   const swingCredit = Math.min(0, roomCapacity - rooms[peak]);
-  const peakDucts = swingCredit === 0 ? ducts[peak] : ductGainBtuh(p, rooms[peak] + swingCredit, atticF[peak], peak);
+  const peakDucts =
+    swingCredit === 0 ? ducts[peak] : ductGainBtuh(p, rooms[peak] + swingCredit, atticF[peak], peak);
 
   // Each component at the peak: its convective part plus its radiant parts through the RTS at that hour.
   const ns = st.nonsolar;
@@ -332,7 +395,9 @@ export function hourlyCoolingDay(p: PreparedPlan, facingAzimuthDeg: number): Coo
   const windowsAtPeak = [0, 0, 0, 0];
   for (let fi = 0; fi < 4; fi++) {
     windowsAtPeak[fi] =
-      windowsByFacade[fi][peak] + storedAt(SCRATCH.radWindows[fi], ns, peak) + storedAt(SCRATCH.radWindowsSolar[fi], so, peak);
+      windowsByFacade[fi][peak] +
+      storedAt(SCRATCH.radWindows[fi], ns, peak) +
+      storedAt(SCRATCH.radWindowsSolar[fi], so, peak);
   }
   const sensibleByComponent: ComponentLoads<CoolingSensibleComponent> = {
     walls: walls[peak] + storedAt(SCRATCH.radWalls, ns, peak),
@@ -340,7 +405,10 @@ export function hourlyCoolingDay(p: PreparedPlan, facingAzimuthDeg: number): Coo
     doors: doors[peak] + storedAt(SCRATCH.radDoors, ns, peak),
     ceilings: ceilings[peak] + storedAt(SCRATCH.radCeilings, ns, peak),
     vaultedCeilings: vaulted[peak] + storedAt(SCRATCH.radVaulted, ns, peak),
-    skylights: skylights[peak] + storedAt(SCRATCH.radSkylights, ns, peak) + storedAt(SCRATCH.radSkylightsSolar, so, peak),
+    skylights:
+      skylights[peak] +
+      storedAt(SCRATCH.radSkylights, ns, peak) +
+      storedAt(SCRATCH.radSkylightsSolar, so, peak),
     floors: floors[peak] + storedAt(SCRATCH.radFloors, ns, peak),
     slab,
     foundationWalls: foundationWalls[peak] + storedAt(SCRATCH.radFoundationWalls, ns, peak),
@@ -361,7 +429,8 @@ export function hourlyCoolingDay(p: PreparedPlan, facingAzimuthDeg: number): Coo
       : Math.sqrt(infCfm * infCfm + air.ventilationProvidedCfm * air.ventilationProvidedCfm) - infCfm;
   const latentByComponent: ComponentLoads<CoolingLatentComponent> = {
     infiltration: site.latentFactor * infCfm * site.latentDeltaGr,
-    ventilation: air.balancedVentilationLatentBtuh + site.latentFactor * unbalancedVentCfm * site.latentDeltaGr,
+    ventilation:
+      air.balancedVentilationLatentBtuh + site.latentFactor * unbalancedVentCfm * site.latentDeltaGr,
     internal: p.internal.latentBtuh,
     ducts: 0, // no published duct latent gain for these methods (HoF 2021 ch. 17 Table 6 is sensible only)
   };

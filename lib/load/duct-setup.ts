@@ -78,7 +78,8 @@ export function prepareDucts(
   const to = s.heatingOutdoorDbF;
   const geometry = ductGeometry(plan.ducts, plan.conditionedFloorAreaFt2, plan.stories);
   const zone = ductZoneOf(plan);
-  const tableLocation = plan.ducts.method === "handbook-table" ? ductTableLocation(plan.ducts.location) : null;
+  const tableLocation =
+    plan.ducts.method === "handbook-table" ? ductTableLocation(plan.ducts.location) : null;
   const ductTable = (mode: "cooling" | "heating-furnace" | "heating-heat-pump") =>
     tableLocation === null
       ? null
@@ -122,7 +123,16 @@ export function prepareDucts(
     heatingBtuh =
       lossFractionHeat *
       wrapDuctError(() =>
-        ductLoad(geometry, envelopeHeatBtuh, "heating", heatingZoneF[zone], ti, HEATING_SUPPLY_DELTA_F, site.sensibleFactor, 0),
+        ductLoad(
+          geometry,
+          envelopeHeatBtuh,
+          "heating",
+          heatingZoneF[zone],
+          ti,
+          HEATING_SUPPLY_DELTA_F,
+          site.sensibleFactor,
+          0,
+        ),
       ).sensibleBtuh;
     if (geometry.outsideEnvelope) {
       notes.push(
@@ -132,5 +142,11 @@ export function prepareDucts(
       );
     }
   }
-  return { geometry, zone, heatingBtuh, lossFractionCool, factorCool: tableCool === null ? null : tableCool.factor };
+  return {
+    geometry,
+    zone,
+    heatingBtuh,
+    lossFractionCool,
+    factorCool: tableCool === null ? null : tableCool.factor,
+  };
 }

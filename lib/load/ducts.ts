@@ -39,7 +39,11 @@ export interface DuctGeometry {
   outsideEnvelope: boolean;
 }
 
-export function ductGeometry(ducts: DuctsInput, conditionedFloorAreaFt2: number, stories: number): DuctGeometry {
+export function ductGeometry(
+  ducts: DuctsInput,
+  conditionedFloorAreaFt2: number,
+  stories: number,
+): DuctGeometry {
   const outsideEnvelope = ductLocationIsOutside(ducts.location);
   const storyFactor = stories >= 2 ? 0.65 : 1;
   return {
@@ -89,7 +93,9 @@ export function ductLoad(
   const supplyF = mode === "cooling" ? roomF - supplyDeltaF : roomF + supplyDeltaF;
   const zoneDeltaF = mode === "cooling" ? zoneF - roomF : roomF - zoneF;
   const supplyConductionBtuh =
-    geometry.uBtuPerHrFt2F * geometry.supplyAreaFt2 * (mode === "cooling" ? zoneF - supplyF : supplyF - zoneF);
+    geometry.uBtuPerHrFt2F *
+    geometry.supplyAreaFt2 *
+    (mode === "cooling" ? zoneF - supplyF : supplyF - zoneF);
   const returnConductionBtuh = geometry.uBtuPerHrFt2F * geometry.returnAreaFt2 * zoneDeltaF;
   const conductionBtuh = supplyConductionBtuh + returnConductionBtuh;
   const deliveryFraction =
@@ -103,7 +109,8 @@ export function ductLoad(
   }
   const totalSensibleBtuh = (envelopeSensibleBtuh + conductionBtuh) / deliveryFraction;
   const cfm = totalSensibleBtuh / (sensibleFactor * supplyDeltaF);
-  const latentBtuh = mode === "cooling" ? Math.max(0, geometry.returnLeakageFraction * cfm * latentPerCfm) : 0;
+  const latentBtuh =
+    mode === "cooling" ? Math.max(0, geometry.returnLeakageFraction * cfm * latentPerCfm) : 0;
   return { sensibleBtuh: totalSensibleBtuh - envelopeSensibleBtuh, latentBtuh, deliveryFraction };
 }
 
@@ -124,7 +131,9 @@ export function ductLoad(
 export type DuctTableLocation = "attic" | "basement" | "crawlspace";
 export type DuctTableMode = "cooling" | "heating-furnace" | "heating-heat-pump";
 
-export const DUCT_FACTOR_TABLE: Readonly<Record<DuctTableLocation, Readonly<Record<DuctTableMode, readonly number[]>>>> = {
+export const DUCT_FACTOR_TABLE: Readonly<
+  Record<DuctTableLocation, Readonly<Record<DuctTableMode, readonly number[]>>>
+> = {
   attic: {
     cooling: [1.26, 0.71, 0.63, 0.68, 0.33, 0.27, 1.02, 0.66, 0.6, 0.53, 0.29, 0.25],
     "heating-furnace": [0.49, 0.29, 0.25, 0.34, 0.16, 0.13, 0.41, 0.26, 0.24, 0.27, 0.14, 0.12],
@@ -181,7 +190,12 @@ function lerp(x: number, x0: number, x1: number, y0: number, y1: number): number
 }
 
 /** F_dl at one leakage column (0 = 11 %/11 %, 1 = 5 %/5 %), linear in R between R-0, R-4 and R-8. */
-function factorAtLeakage(row: readonly number[], storyOffset: number, leakageColumn: 0 | 1, insulationR: number): number {
+function factorAtLeakage(
+  row: readonly number[],
+  storyOffset: number,
+  leakageColumn: 0 | 1,
+  insulationR: number,
+): number {
   const base = storyOffset + leakageColumn * 3;
   const r = Math.min(insulationR, 8);
   return r <= 4 ? lerp(r, 0, 4, row[base], row[base + 1]) : lerp(r, 4, 8, row[base + 1], row[base + 2]);
@@ -216,7 +230,8 @@ export function ductLossFactor(params: {
   returnLeakagePct: number;
 }): DuctFactor {
   const { location, mode, stories, insulationR, supplyLeakagePct, returnLeakagePct } = params;
-  if (!(insulationR >= 0)) throw new LoadInputError("ducts.insulationR", `must be 0 or more, got ${insulationR}`, { min: 0 });
+  if (!(insulationR >= 0))
+    throw new LoadInputError("ducts.insulationR", `must be 0 or more, got ${insulationR}`, { min: 0 });
   if (!(stories >= 1)) throw new LoadInputError("stories", `must be 1 or more, got ${stories}`, { min: 1 });
   const notes: string[] = [];
   const row = DUCT_FACTOR_TABLE[location][mode];
@@ -232,7 +247,9 @@ export function ductLossFactor(params: {
     );
   }
   if (insulationR > 8) {
-    notes.push(`Duct insulation R-${insulationR} is above the handbook table's R-8 column; the R-8 factor is used (conservative).`);
+    notes.push(
+      `Duct insulation R-${insulationR} is above the handbook table's R-8 column; the R-8 factor is used (conservative).`,
+    );
   }
   const tight = factorAtLeakage(row, storyOffset, 1, insulationR);
   const leaky = factorAtLeakage(row, storyOffset, 0, insulationR);

@@ -17,7 +17,14 @@ import {
   type MassClass,
 } from "./assemblies";
 import { atticAirTemperatureF, SOL_AIR_HO_BTUH_FT2F } from "./attic";
-import { FACADES, type Facade, type PlanInput, type RoofBaseAssembly, type WallBaseAssembly, type WallConstruction } from "./input";
+import {
+  FACADES,
+  type Facade,
+  type PlanInput,
+  type RoofBaseAssembly,
+  type WallBaseAssembly,
+  type WallConstruction,
+} from "./input";
 import type { ComponentLoads, HeatingComponent } from "./results";
 import type { PreparedSite } from "./site";
 import { slabCoolingBtuh } from "./slab";
@@ -68,7 +75,14 @@ export interface PreparedEnvelope {
     roofBaseId: RoofBaseAssembly;
   };
   vaulted: { uaCool: number; absorptance: number; baseId: RoofBaseAssembly };
-  skylight: { areaFt2: number; uaCool: number; shgc: number; attenuation: number; tiltDeg: number; facade: Facade };
+  skylight: {
+    areaFt2: number;
+    uaCool: number;
+    shgc: number;
+    attenuation: number;
+    tiltDeg: number;
+    facade: Facade;
+  };
   roofTiltDeg: number;
   /** Slab: exposed perimeter and F-factor (heating), floor area and cooling credit (Btu/h, negative). */
   slab: { perimeterFt: number; fFactor: number; areaFt2: number; coolingBtuh: number };
@@ -104,7 +118,6 @@ function zeros(): ComponentLoads<HeatingComponent> {
   };
 }
 
-
 export function prepareEnvelope(plan: PlanInput, site: PreparedSite, notes: string[]): PreparedEnvelope {
   const s = site.site;
   const ti = s.indoorHeatingF;
@@ -117,16 +130,25 @@ export function prepareEnvelope(plan: PlanInput, site: PreparedSite, notes: stri
   const garageHeatingF = plan.garage.heatingTemperatureF ?? to;
   const garageCoolingF = hours24();
   for (let h = 0; h < 24; h++) garageCoolingF[h] = plan.garage.coolingTemperatureF ?? site.outdoorF[h];
-  if (plan.garage.wallAreaFt2 + plan.garage.floorOverAreaFt2 > 0 && plan.garage.heatingTemperatureF === undefined) {
-    notes.push("Garage temperatures not entered: the garage is taken at the outdoor temperature, without sun (the handbook example's treatment).");
+  if (
+    plan.garage.wallAreaFt2 + plan.garage.floorOverAreaFt2 > 0 &&
+    plan.garage.heatingTemperatureF === undefined
+  ) {
+    notes.push(
+      "Garage temperatures not entered: the garage is taken at the outdoor temperature, without sun (the handbook example's treatment).",
+    );
   }
 
   const f = plan.foundation;
   const agArea = f.foundationWallAboveGradeAreaFt2;
   const bgArea = f.foundationWallAreaFt2 - agArea;
-  const agUHeat = f.foundationWallUFactor ?? aboveGradeFoundationWallU(f.foundationWallInsulationR, "heating");
-  const agUCool = f.foundationWallUFactor ?? aboveGradeFoundationWallU(f.foundationWallInsulationR, "cooling");
-  const bgU = f.foundationWallUFactor ?? belowGradeWallU(f.foundationWallInsulationR, f.foundationWallDepthBelowGradeFt);
+  const agUHeat =
+    f.foundationWallUFactor ?? aboveGradeFoundationWallU(f.foundationWallInsulationR, "heating");
+  const agUCool =
+    f.foundationWallUFactor ?? aboveGradeFoundationWallU(f.foundationWallInsulationR, "cooling");
+  const bgU =
+    f.foundationWallUFactor ??
+    belowGradeWallU(f.foundationWallInsulationR, f.foundationWallDepthBelowGradeFt);
   const floorUHeat = floorU(f.floor, "still-air", "heating");
   const floorUCool = floorU(f.floor, "still-air", "cooling");
 
@@ -137,7 +159,9 @@ export function prepareEnvelope(plan: PlanInput, site: PreparedSite, notes: stri
     const uaBg = bgU * bgArea;
     basementHeatingF =
       f.basementHeatingTemperatureF ??
-      (uaFloor + uaAg + uaBg > 0 ? (uaFloor * ti + uaAg * to + uaBg * site.groundF) / (uaFloor + uaAg + uaBg) : ti);
+      (uaFloor + uaAg + uaBg > 0
+        ? (uaFloor * ti + uaAg * to + uaBg * site.groundF) / (uaFloor + uaAg + uaBg)
+        : ti);
     if (f.basementHeatingTemperatureF === undefined) {
       notes.push(
         `Unconditioned basement at ${basementHeatingF.toFixed(0)} °F in heating (heat balance with a ${site.groundF.toFixed(0)} °F ground estimate).`,
@@ -179,7 +203,8 @@ export function prepareEnvelope(plan: PlanInput, site: PreparedSite, notes: stri
   // --- Attic, roof, vaulted ceilings, skylights -----------------------------------------------
   const a = plan.attic;
   const roofTiltDeg = Math.atan(a.roofPitchRisePer12In / 12) / DEG;
-  const ceilingAreaFt2 = a.kind === "none" ? 0 : (a.ceilingAreaFt2 ?? plan.conditionedFloorAreaFt2 / plan.stories);
+  const ceilingAreaFt2 =
+    a.kind === "none" ? 0 : (a.ceilingAreaFt2 ?? plan.conditionedFloorAreaFt2 / plan.stories);
   // Hip roof of one pitch: roof area = footprint / cos(tilt) (geometry).
   const roofAreaFt2 = ceilingAreaFt2 / Math.cos(roofTiltDeg * DEG);
   const ceilingUaHeat = ceilingU(a.ceiling, "heating") * ceilingAreaFt2;
@@ -207,7 +232,8 @@ export function prepareEnvelope(plan: PlanInput, site: PreparedSite, notes: stri
     roofUaCool = roofU(a.roofDeck, { season: "cooling", gypsumCeiling: false }) * roofAreaFt2;
   }
   const vc = plan.vaultedCeiling;
-  heating.vaultedCeilings = roofU(vc.construction, { season: "heating", gypsumCeiling: true }) * vc.areaFt2 * dtHeat;
+  heating.vaultedCeilings =
+    roofU(vc.construction, { season: "heating", gypsumCeiling: true }) * vc.areaFt2 * dtHeat;
   const sk = plan.skylights;
   heating.skylights = sk.uFactor * sk.areaFt2 * dtHeat;
 
@@ -218,7 +244,8 @@ export function prepareEnvelope(plan: PlanInput, site: PreparedSite, notes: stri
   if (f.kind === "vented-crawlspace") {
     heating.floors += floorUHeat * f.floorAreaFt2 * dtHeat; // a vented crawlspace runs at the outdoor temperature in heating
     // Cooling: the crawlspace runs near the daily mean outdoor temperature (our approximation).
-    for (let h = 0; h < 24; h++) floorsCool[h] += floorUCool * f.floorAreaFt2 * (site.dailyMeanOutdoorF - tic);
+    for (let h = 0; h < 24; h++)
+      floorsCool[h] += floorUCool * f.floorAreaFt2 * (site.dailyMeanOutdoorF - tic);
   } else if (f.kind === "unconditioned-basement") {
     heating.floors += floorUHeat * f.floorAreaFt2 * (ti - (basementHeatingF ?? ti));
     // Cooling: an unconditioned basement is cooler than the house; no credit is taken.
@@ -278,7 +305,12 @@ export function prepareEnvelope(plan: PlanInput, site: PreparedSite, notes: stri
       facade: sk.facade,
     },
     roofTiltDeg,
-    slab: { perimeterFt: f.slabPerimeterFt, fFactor, areaFt2: slabAreaFt2, coolingBtuh: slabCoolingBtuh(slabAreaFt2, f.slabFloorCovering) },
+    slab: {
+      perimeterFt: f.slabPerimeterFt,
+      fFactor,
+      areaFt2: slabAreaFt2,
+      coolingBtuh: slabCoolingBtuh(slabAreaFt2, f.slabFloorCovering),
+    },
     floorsCool,
     foundationWallsCool,
     garageWallCool,

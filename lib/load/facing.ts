@@ -8,5 +8,10 @@ export function normalizeAzimuth(deg: number): number {
 /** Facade azimuths for a front facing `facingAzimuthDeg`: left +90°, back +180°, right +270° (as seen from the street). */
 export function facadeAzimuthsDeg(facingAzimuthDeg: number): Record<Facade, number> {
   const az = normalizeAzimuth(facingAzimuthDeg);
-  return { front: az, left: normalizeAzimuth(az + 90), back: normalizeAzimuth(az + 180), right: normalizeAzimuth(az + 270) };
+  return {
+    front: az,
+    left: normalizeAzimuth(az + 90),
+    back: normalizeAzimuth(az + 180),
+    right: normalizeAzimuth(az + 270),
+  };
 }

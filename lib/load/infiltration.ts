@@ -79,7 +79,10 @@ export function lblInfiltrationLps(
   windCoefficient: number,
   windSpeedMps: number,
 ): number {
-  return leakageAreaCm2 * Math.sqrt(stackCoefficient * Math.abs(deltaTK) + windCoefficient * windSpeedMps * windSpeedMps);
+  return (
+    leakageAreaCm2 *
+    Math.sqrt(stackCoefficient * Math.abs(deltaTK) + windCoefficient * windSpeedMps * windSpeedMps)
+  );
 }
 
 /** LBL infiltration in IP: cfm from ELA (cm²), ΔT (°F) and wind (mph). */

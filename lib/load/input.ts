@@ -329,7 +329,9 @@ export const foundationSchema = z.strictObject({
    */
   slabEdgeInsulationDepthFt: ranged(0, 6, "ft").default(2),
   /** The foundation wall under the slab edge, which sets its F-factor (HoF 2021 ch. 18 Table 24). */
-  slabEdgeConstruction: choice(SLAB_EDGE_CONSTRUCTIONS, "slab edge construction").default("block-8in-brick-facing"),
+  slabEdgeConstruction: choice(SLAB_EDGE_CONSTRUCTIONS, "slab edge construction").default(
+    "block-8in-brick-facing",
+  ),
   /** A slab-edge F-factor from a published table, Btu/h·ft·°F; replaces the one from edge insulation. */
   slabFFactor: ranged(0.05, 2, "Btu/h·ft·°F").optional(),
   /** Slab floor area on grade, ft² (default: conditioned floor area ÷ stories when a perimeter is given). */
@@ -408,37 +410,45 @@ export type VentilationInput = z.output<typeof ventilationSchema>;
 // ---------------------------------------------------------------------------------------------
 // Ducts and internal gains.
 
-export const ductsSchema = z.strictObject({
-  location: choice(DUCT_LOCATIONS, "duct location").default("vented-attic"),
-  /** Duct insulation R (R-8 in attics is common code practice, from memory). */
-  insulationR: ranged(0, 30, "h·ft²·°F/Btu").default(8),
-  /** Supply-side leakage to outside the envelope, % of system airflow. */
-  supplyLeakagePct: ranged(0, 50, "%").default(5),
-  /** Return-side leakage from outside the envelope, % of system airflow. */
-  returnLeakagePct: ranged(0, 50, "%").default(5),
-  /** Duct loss method (default: the handbook duct loss/gain factors). */
-  method: choice(DUCT_METHODS, "duct method").default("handbook-table"),
-  /** Furnace or heat pump (the heat pump's cooler supply air loses a larger share in the ducts). */
-  heatingSystem: choice(DUCT_HEATING_SYSTEMS, "duct heating system").default("furnace"),
-}).superRefine((ducts, ctx) => {
-  // The handbook table covers 5–11 % per side; we extrapolate it only so far (lib/load/ducts.ts).
-  const meanPct = (ducts.supplyLeakagePct + ducts.returnLeakagePct) / 2;
-  if (
-    ducts.method === "handbook-table" &&
-    ductTableLocation(ducts.location) !== null &&
-    meanPct > DUCT_TABLE_MAX_EXTRAPOLATED_LEAKAGE_PCT
-  ) {
-    ctx.addIssue({
-      code: "custom",
-      path: ["supplyLeakagePct"],
-      message:
-        `duct leakage of ${ducts.supplyLeakagePct} % supply / ${ducts.returnLeakagePct} % return (mean ${meanPct} % per side) ` +
-        `is beyond what the handbook duct-factor table can be stretched to (it covers 5–11 % per side; we extrapolate ` +
-        `to ${DUCT_TABLE_MAX_EXTRAPOLATED_LEAKAGE_PCT} %); use ducts.method "conduction-leakage" or test the ducts`,
-      params: { range: { min: 0, max: DUCT_TABLE_MAX_EXTRAPOLATED_LEAKAGE_PCT, unit: "% (mean of supply and return)" } },
-    });
-  }
-});
+export const ductsSchema = z
+  .strictObject({
+    location: choice(DUCT_LOCATIONS, "duct location").default("vented-attic"),
+    /** Duct insulation R (R-8 in attics is common code practice, from memory). */
+    insulationR: ranged(0, 30, "h·ft²·°F/Btu").default(8),
+    /** Supply-side leakage to outside the envelope, % of system airflow. */
+    supplyLeakagePct: ranged(0, 50, "%").default(5),
+    /** Return-side leakage from outside the envelope, % of system airflow. */
+    returnLeakagePct: ranged(0, 50, "%").default(5),
+    /** Duct loss method (default: the handbook duct loss/gain factors). */
+    method: choice(DUCT_METHODS, "duct method").default("handbook-table"),
+    /** Furnace or heat pump (the heat pump's cooler supply air loses a larger share in the ducts). */
+    heatingSystem: choice(DUCT_HEATING_SYSTEMS, "duct heating system").default("furnace"),
+  })
+  .superRefine((ducts, ctx) => {
+    // The handbook table covers 5–11 % per side; we extrapolate it only so far (lib/load/ducts.ts).
+    const meanPct = (ducts.supplyLeakagePct + ducts.returnLeakagePct) / 2;
+    if (
+      ducts.method === "handbook-table" &&
+      ductTableLocation(ducts.location) !== null &&
+      meanPct > DUCT_TABLE_MAX_EXTRAPOLATED_LEAKAGE_PCT
+    ) {
+      ctx.addIssue({
+        code: "custom",
+        path: ["supplyLeakagePct"],
+        message:
+          `duct leakage of ${ducts.supplyLeakagePct} % supply / ${ducts.returnLeakagePct} % return (mean ${meanPct} % per side) ` +
+          `is beyond what the handbook duct-factor table can be stretched to (it covers 5–11 % per side; we extrapolate ` +
+          `to ${DUCT_TABLE_MAX_EXTRAPOLATED_LEAKAGE_PCT} %); use ducts.method "conduction-leakage" or test the ducts`,
+        params: {
+          range: {
+            min: 0,
+            max: DUCT_TABLE_MAX_EXTRAPOLATED_LEAKAGE_PCT,
+            unit: "% (mean of supply and return)",
+          },
+        },
+      });
+    }
+  });
 export type DuctsInput = z.output<typeof ductsSchema>;
 
 export const internalGainRowSchema = z.strictObject({
@@ -570,13 +580,14 @@ export const planInputSchema = z
       ctx.addIssue({
         code: "custom",
         path: ["infiltration", "ach50"],
-        message: "required: ach50 or cfm50 from a blower-door test (or the target), or an effective leakage area",
+        message:
+          "required: ach50 or cfm50 from a blower-door test (or the target), or an effective leakage area",
         params: { range: { min: 0.1, max: 50, unit: "1/h" } },
       });
     } else if (given > 1) {
       ctx.addIssue({
         code: "custom",
-        path: [ "infiltration", cfm50 !== undefined ? "cfm50" : "effectiveLeakageAreaIn2"],
+        path: ["infiltration", cfm50 !== undefined ? "cfm50" : "effectiveLeakageAreaIn2"],
         message: "give one of ach50, cfm50 or effectiveLeakageAreaIn2, not more",
       });
     }
@@ -584,8 +595,14 @@ export const planInputSchema = z
     const duct = plan.ducts.location;
     const needs: Partial<Record<DuctLocation, [boolean, string]>> = {
       "vented-attic": [plan.attic.kind === "vented", "the attic is not vented (attic.kind)"],
-      "encapsulated-attic": [plan.attic.kind === "encapsulated", "the attic is not encapsulated (attic.kind)"],
-      "vented-crawlspace": [plan.foundation.kind === "vented-crawlspace", "the foundation is not a vented crawlspace"],
+      "encapsulated-attic": [
+        plan.attic.kind === "encapsulated",
+        "the attic is not encapsulated (attic.kind)",
+      ],
+      "vented-crawlspace": [
+        plan.foundation.kind === "vented-crawlspace",
+        "the foundation is not a vented crawlspace",
+      ],
       "conditioned-crawlspace": [
         plan.foundation.kind === "conditioned-crawlspace",
         "the foundation is not a conditioned crawlspace",
@@ -712,7 +729,9 @@ export type ParseResult<T> = { ok: true; value: T } | { ok: false; issues: LoadI
 /** Validate a plan without throwing: every problem found is returned. */
 export function safeParsePlanInput(raw: unknown): ParseResult<PlanInput> {
   const parsed = planInputSchema.safeParse(raw);
-  return parsed.success ? { ok: true, value: parsed.data } : { ok: false, issues: toLoadInputIssues(parsed.error) };
+  return parsed.success
+    ? { ok: true, value: parsed.data }
+    : { ok: false, issues: toLoadInputIssues(parsed.error) };
 }
 
 /** Validate a plan; throws LoadInputError (with every issue in `issues`) on bad input. */
@@ -725,7 +744,9 @@ export function parsePlanInput(raw: unknown): PlanInput {
 /** Validate site and design conditions without throwing. */
 export function safeParseSiteConditions(raw: unknown): ParseResult<SiteConditions> {
   const parsed = siteConditionsSchema.safeParse(raw);
-  return parsed.success ? { ok: true, value: parsed.data } : { ok: false, issues: toLoadInputIssues(parsed.error) };
+  return parsed.success
+    ? { ok: true, value: parsed.data }
+    : { ok: false, issues: toLoadInputIssues(parsed.error) };
 }
 
 /** Validate site and design conditions; throws LoadInputError on bad input. */

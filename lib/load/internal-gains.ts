@@ -28,7 +28,11 @@ export function defaultInternalSensibleW(conditionedFloorAreaM2: number, occupan
   return 136 + 2.2 * conditionedFloorAreaM2 + 22 * occupants;
 }
 
-export function internalGains(input: InternalGainsInput, conditionedFloorAreaFt2: number, occupants: number): InternalGains {
+export function internalGains(
+  input: InternalGainsInput,
+  conditionedFloorAreaFt2: number,
+  occupants: number,
+): InternalGains {
   if (!input.rows) return defaultInternalGains(conditionedFloorAreaFt2, occupants);
   let sensibleBtuh = occupants * input.occupantSensibleBtuh;
   let latentBtuh = occupants * input.occupantLatentBtuh;

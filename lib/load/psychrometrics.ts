@@ -16,7 +16,6 @@ ip.SetUnitSystem(ip.IP);
 /** Standard sea-level pressure, psia (ASHRAE HoF ch. 1, 14.696 psia). */
 export const SEA_LEVEL_PRESSURE_PSIA = 14.696;
 
-
 /** Standard-atmosphere pressure at an elevation, psia (HoF ch. 1 eq. 3, via psychrolib). */
 export function standardPressurePsia(elevationFt: number): number {
   return ip.GetStandardAtmPressure(elevationFt);

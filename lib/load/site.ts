@@ -4,7 +4,12 @@
  */
 import { outdoorDryBulbProfileF } from "./design-day";
 import type { SiteConditions } from "./input";
-import { humidityRatioGrFromRelHum, humidityRatioGrFromWetBulb, SEA_LEVEL_PRESSURE_PSIA, standardPressurePsia } from "./psychrometrics";
+import {
+  humidityRatioGrFromRelHum,
+  humidityRatioGrFromWetBulb,
+  SEA_LEVEL_PRESSURE_PSIA,
+  standardPressurePsia,
+} from "./psychrometrics";
 import { designDayOfYear, SiteSolarDay } from "./solar";
 
 /**
@@ -18,7 +23,6 @@ export const DEFAULT_TAU_DIFFUSE = 2.0;
 /** Sea-level air-side factors (HoF 2021 ch. 17, read: Cs 1.23 W/(L/s·K) = 1.10 Btu/h·cfm·°F; Cl 3010 W/(L/s) → 0.69 Btu/h·cfm·gr). */
 const SENSIBLE_AIR_FACTOR_SEA_LEVEL = 1.1;
 const LATENT_AIR_FACTOR_SEA_LEVEL = 0.69;
-
 
 export interface PreparedSite {
   key: string;
@@ -89,11 +93,21 @@ export function prepareSite(site: SiteConditions): PreparedSite {
   const outdoorF = outdoorDryBulbProfileF(site.coolingOutdoorDbF, site.dailyRangeF);
   const pressurePsia = standardPressurePsia(site.elevationFt);
   const ratio = pressurePsia / SEA_LEVEL_PRESSURE_PSIA;
-  const outdoorHumidityRatioGr = humidityRatioGrFromWetBulb(site.coolingOutdoorDbF, site.coolingOutdoorWbF, pressurePsia);
-  const indoorHumidityRatioGr = humidityRatioGrFromRelHum(site.indoorCoolingF, site.indoorCoolingRhPct, pressurePsia);
+  const outdoorHumidityRatioGr = humidityRatioGrFromWetBulb(
+    site.coolingOutdoorDbF,
+    site.coolingOutdoorWbF,
+    pressurePsia,
+  );
+  const indoorHumidityRatioGr = humidityRatioGrFromRelHum(
+    site.indoorCoolingF,
+    site.indoorCoolingRhPct,
+    pressurePsia,
+  );
   const deltaGr = outdoorHumidityRatioGr - indoorHumidityRatioGr;
   if (deltaGr < 0) {
-    notes.push("Outdoor design air is drier than indoor air: latent loads from outdoor air are taken as zero.");
+    notes.push(
+      "Outdoor design air is drier than indoor air: latent loads from outdoor air are taken as zero.",
+    );
   }
   const prepared: PreparedSite = {
     key,

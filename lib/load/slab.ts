@@ -12,7 +12,11 @@ import type { SlabFloorCovering } from "./input";
  * chapter's example house (ch. 17 Table 17, read, citing Chapter 6 of the 2020 HVAC Systems and
  * Equipment volume); tile 0.01 (thin ceramic or vinyl tile, from memory); bare concrete 0.
  */
-export const SLAB_FLOOR_COVERING_R_SI: Record<SlabFloorCovering, number> = { carpet: 0.21, tile: 0.01, bare: 0 };
+export const SLAB_FLOOR_COVERING_R_SI: Record<SlabFloorCovering, number> = {
+  carpet: 0.21,
+  tile: 0.01,
+  bare: 0,
+};
 
 /** CF_slab of ch. 17 eq. 23 in W/m² (negative: a credit). */
 export function slabCoolingFactorWm2(floorCoveringRSi: number): number {

@@ -39,7 +39,11 @@ export function equationOfTimeMin(dayOfYear: number): number {
   const g = ((360 * (dayOfYear - 1)) / 365) * DEG;
   return (
     2.2918 *
-    (0.0075 + 0.1868 * Math.cos(g) - 3.2077 * Math.sin(g) - 1.4615 * Math.cos(2 * g) - 4.089 * Math.sin(2 * g))
+    (0.0075 +
+      0.1868 * Math.cos(g) -
+      3.2077 * Math.sin(g) -
+      1.4615 * Math.cos(2 * g) -
+      4.089 * Math.sin(2 * g))
   );
 }
 
@@ -58,7 +62,9 @@ export function apparentSolarTimeHours(
   standardMeridianDeg: number,
   dayOfYear: number,
 ): number {
-  return localStandardTimeHours + equationOfTimeMin(dayOfYear) / 60 + (longitudeDeg - standardMeridianDeg) / 15;
+  return (
+    localStandardTimeHours + equationOfTimeMin(dayOfYear) / 60 + (longitudeDeg - standardMeridianDeg) / 15
+  );
 }
 
 export interface SunPosition {
@@ -152,9 +158,13 @@ export function surfaceIrradiance(
   const beamWm2 = cosTheta > 0 ? sky.beamNormalWm2 * cosTheta : 0;
   const y = Math.max(0.45, 0.55 + 0.437 * cosTheta + 0.313 * cosTheta * cosTheta);
   const diffuseWm2 =
-    tiltDeg >= 90 ? sky.diffuseHorizontalWm2 * y : sky.diffuseHorizontalWm2 * (y * Math.sin(sigma) + Math.cos(sigma));
+    tiltDeg >= 90
+      ? sky.diffuseHorizontalWm2 * y
+      : sky.diffuseHorizontalWm2 * (y * Math.sin(sigma) + Math.cos(sigma));
   const reflectedWm2 =
-    (sky.beamNormalWm2 * Math.sin(beta) + sky.diffuseHorizontalWm2) * groundReflectance * ((1 - Math.cos(sigma)) / 2);
+    (sky.beamNormalWm2 * Math.sin(beta) + sky.diffuseHorizontalWm2) *
+    groundReflectance *
+    ((1 - Math.cos(sigma)) / 2);
   return {
     incidenceDeg: Math.acos(Math.max(-1, Math.min(1, cosTheta))) / DEG,
     beamWm2,
@@ -203,7 +213,11 @@ export class SiteSolarDay {
     this.hours = [];
     for (let hour = 1; hour <= 24; hour++) {
       const sun = sunPosition(latitudeDeg, dayOfYear, hour);
-      this.hours.push({ hour, sun, sky: clearSkyIrradiance(dayOfYear, sun.altitudeDeg, tauBeam, tauDiffuse) });
+      this.hours.push({
+        hour,
+        sun,
+        sky: clearSkyIrradiance(dayOfYear, sun.altitudeDeg, tauBeam, tauDiffuse),
+      });
     }
   }
 
@@ -227,7 +241,8 @@ export class SiteSolarDay {
       incidenceDeg[i] = s.incidenceDeg;
       // Profile (vertical shadow) angle Ω on a vertical surface: tan Ω = tan β / cos γ (HoF ch. 15).
       const cosGamma = Math.cos((sun.azimuthDeg - az) * DEG);
-      tanProfileAngle[i] = sun.altitudeDeg > 0 && cosGamma > 1e-6 ? Math.tan(sun.altitudeDeg * DEG) / cosGamma : 0;
+      tanProfileAngle[i] =
+        sun.altitudeDeg > 0 && cosGamma > 1e-6 ? Math.tan(sun.altitudeDeg * DEG) / cosGamma : 0;
     });
     const profile: SurfaceProfile = {
       azimuthDeg: az,

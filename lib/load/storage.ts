@@ -64,7 +64,10 @@ function ventedCeilingSeries(ceilingUBtuhFt2F: number): Float64Array {
  * floors (tile, bare), with or without carpet as the slab is covered. Glass: the plan's window area
  * as a share of its gross exterior wall area.
  */
-function zoneRts(plan: PlanInput, envelope: PreparedEnvelope): { mass: ZoneMass; carpet: boolean; glassPct: number } {
+function zoneRts(
+  plan: PlanInput,
+  envelope: PreparedEnvelope,
+): { mass: ZoneMass; carpet: boolean; glassPct: number } {
   const masonry = envelope.facades.some((f) => f.wallMass === "masonry");
   const onSlab = plan.foundation.kind === "slab-on-grade" && plan.foundation.slabPerimeterFt > 0;
   const hardSlab = onSlab && plan.foundation.slabFloorCovering !== "carpet";
@@ -82,7 +85,8 @@ export function prepareStorage(plan: PlanInput, envelope: PreparedEnvelope): Pre
   const zone = zoneRts(plan, envelope);
   const nonsolar = radiantTimeSeriesChoice({ ...zone, solar: false });
   const solar = radiantTimeSeriesChoice({ ...zone, solar: true });
-  let envelopeConductanceBtuhF = envelope.attic.ceilingUaCool + envelope.vaulted.uaCool + envelope.skylight.uaCool;
+  let envelopeConductanceBtuhF =
+    envelope.attic.ceilingUaCool + envelope.vaulted.uaCool + envelope.skylight.uaCool;
   let wallNetFt2 = plan.garage.wallAreaFt2;
   for (const f of envelope.facades) {
     envelopeConductanceBtuhF += f.wallUaCool + f.doorUaCool;
@@ -98,7 +102,8 @@ export function prepareStorage(plan: PlanInput, envelope: PreparedEnvelope): Pre
     envelope.attic.ceilingAreaFt2 + plan.vaultedCeiling.areaFt2,
     wallNetFt2,
   );
-  const ceilingU = envelope.attic.ceilingAreaFt2 > 0 ? envelope.attic.ceilingUaCool / envelope.attic.ceilingAreaFt2 : 0;
+  const ceilingU =
+    envelope.attic.ceilingAreaFt2 > 0 ? envelope.attic.ceilingUaCool / envelope.attic.ceilingAreaFt2 : 0;
   return {
     nonsolar: series(nonsolar.series, "rts.nonsolar"),
     solar: series(solar.series, "rts.solar"),

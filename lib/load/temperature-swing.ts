@@ -27,16 +27,26 @@ const FURNISHINGS_KJ_PER_M2_FLOOR = 25.35 * 0.5;
 /** 1 kJ/(m²·K) in Btu/(ft²·°F): 0.947817 Btu per kJ ÷ (10.76391 ft² per m² × 1.8 °F per K). */
 const BTU_FT2F_PER_KJ_M2K = 0.947817 / (10.76391 * 1.8);
 
-export function interiorCapacitanceBtuPerF(floorAreaFt2: number, ceilingAreaFt2: number, exteriorWallNetFt2: number): number {
+export function interiorCapacitanceBtuPerF(
+  floorAreaFt2: number,
+  ceilingAreaFt2: number,
+  exteriorWallNetFt2: number,
+): number {
   return (
-    (FURNISHINGS_KJ_PER_M2_FLOOR * floorAreaFt2 + GYPSUM_HALF_INCH_KJ_M2K * (ceilingAreaFt2 + exteriorWallNetFt2)) *
+    (FURNISHINGS_KJ_PER_M2_FLOOR * floorAreaFt2 +
+      GYPSUM_HALF_INCH_KJ_M2K * (ceilingAreaFt2 + exteriorWallNetFt2)) *
     BTU_FT2F_PER_KJ_M2K
   );
 }
 
 const DAYS = 3; // the periodic day is reached well within three from δ = 0 (C/K is a few hours)
 
-function maxExcursionF(load: ArrayLike<number>, capacity: number, conductance: number, decay: number): number {
+function maxExcursionF(
+  load: ArrayLike<number>,
+  capacity: number,
+  conductance: number,
+  decay: number,
+): number {
   let delta = 0;
   let max = 0;
   for (let d = 0; d < DAYS; d++) {
@@ -60,7 +70,12 @@ function maxExcursionF(load: ArrayLike<number>, capacity: number, conductance: n
  * over the periodic design day, given the hourly fixed-set-point load (Btu/h), the conductance to
  * outdoors K (Btu/h·°F) and the interior capacitance C (Btu/°F). Never more than the peak load.
  */
-export function capacityWithSwingBtuh(load: ArrayLike<number>, conductanceBtuhF: number, capacitanceBtuF: number, swingF: number): number {
+export function capacityWithSwingBtuh(
+  load: ArrayLike<number>,
+  conductanceBtuhF: number,
+  capacitanceBtuF: number,
+  swingF: number,
+): number {
   let peak = 0;
   for (let h = 0; h < 24; h++) if (load[h] > peak) peak = load[h];
   if (!(swingF > 0) || !(capacitanceBtuF > 0) || !(conductanceBtuhF > 0) || peak <= 0) return peak;

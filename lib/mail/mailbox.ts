@@ -32,7 +32,13 @@ export interface MailboxMessage {
 const LOOPBACK_HOSTS = new Set(["127.0.0.1", "localhost", "[::1]"]);
 
 /** Rule 2 above, as a pure function of the settings (rule 1 is decided by the build). */
-export function mailboxAllowed({ mailboxDir, appUrl }: { mailboxDir: string | undefined; appUrl: string | undefined }): boolean {
+export function mailboxAllowed({
+  mailboxDir,
+  appUrl,
+}: {
+  mailboxDir: string | undefined;
+  appUrl: string | undefined;
+}): boolean {
   if (!mailboxDir || !appUrl) return false;
   try {
     return LOOPBACK_HOSTS.has(new URL(appUrl).hostname);
@@ -47,7 +53,13 @@ export function mailboxEnabled(): boolean {
 }
 
 /** The account's messages, newest first; nothing when the mailbox is off. */
-export async function listMailbox({ accountId, withContent = false }: { accountId: number; withContent?: boolean }): Promise<MailboxMessage[]> {
+export async function listMailbox({
+  accountId,
+  withContent = false,
+}: {
+  accountId: number;
+  withContent?: boolean;
+}): Promise<MailboxMessage[]> {
   const dir = env().PLATLOAD_MAILBOX_DIR;
   if (!mailboxEnabled() || !dir) return [];
   let names: string[];
@@ -56,7 +68,9 @@ export async function listMailbox({ accountId, withContent = false }: { accountI
   } catch {
     return [];
   }
-  const all = await Promise.all(names.map(async (n) => JSON.parse(await readFile(path.join(dir, n), "utf8")) as MailboxMessage));
+  const all = await Promise.all(
+    names.map(async (n) => JSON.parse(await readFile(path.join(dir, n), "utf8")) as MailboxMessage),
+  );
   const messages = all.filter((m) => m.accountId === String(accountId));
   if (!withContent) for (const m of messages) for (const a of m.attachments) delete a.contentBase64;
   return messages.sort((a, b) => b.receivedAt.localeCompare(a.receivedAt) || b.id.localeCompare(a.id));

@@ -3,7 +3,15 @@ import { ROLE_LABELS } from "@/lib/auth/permissions";
 import { INVITATION_DAYS } from "@/db/queries/team";
 import type { OutgoingMail } from "./send";
 
-export function invitationMessage(p: { accountId: number; to: string; name: string; role: Role; accountName: string; inviterName: string; link: string }): OutgoingMail {
+export function invitationMessage(p: {
+  accountId: number;
+  to: string;
+  name: string;
+  role: Role;
+  accountName: string;
+  inviterName: string;
+  link: string;
+}): OutgoingMail {
   return {
     accountId: p.accountId,
     to: [p.to],

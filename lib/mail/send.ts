@@ -34,5 +34,9 @@ function transport(): Transporter {
 export const ACCOUNT_HEADER = "X-Platload-Account";
 
 export async function sendMail({ accountId, ...mail }: OutgoingMail): Promise<void> {
-  await transport().sendMail({ from: env().MAIL_FROM, ...mail, headers: { [ACCOUNT_HEADER]: String(accountId) } });
+  await transport().sendMail({
+    from: env().MAIL_FROM,
+    ...mail,
+    headers: { [ACCOUNT_HEADER]: String(accountId) },
+  });
 }

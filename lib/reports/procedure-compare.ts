@@ -22,7 +22,12 @@ export interface LoadDifference {
 
 export function loadDifference(sizingBtuh: number, otherBtuh: number): LoadDifference {
   const differenceBtuh = otherBtuh - sizingBtuh;
-  return { sizingBtuh, otherBtuh, differenceBtuh, differencePct: sizingBtuh === 0 ? null : (100 * differenceBtuh) / Math.abs(sizingBtuh) };
+  return {
+    sizingBtuh,
+    otherBtuh,
+    differenceBtuh,
+    differencePct: sizingBtuh === 0 ? null : (100 * differenceBtuh) / Math.abs(sizingBtuh),
+  };
 }
 
 export interface ComponentDifference extends LoadDifference {
@@ -47,8 +52,14 @@ export interface ProcedureComparison {
   facings: FacingComparison[];
 }
 
-function byComponent<K extends string>(keys: readonly K[], sizing: Record<K, number>, other: Record<K, number>): ComponentDifference[] {
-  return keys.filter((k) => sizing[k] !== 0 || other[k] !== 0).map((k) => ({ component: k, ...loadDifference(sizing[k], other[k]) }));
+function byComponent<K extends string>(
+  keys: readonly K[],
+  sizing: Record<K, number>,
+  other: Record<K, number>,
+): ComponentDifference[] {
+  return keys
+    .filter((k) => sizing[k] !== 0 || other[k] !== 0)
+    .map((k) => ({ component: k, ...loadDifference(sizing[k], other[k]) }));
 }
 
 /** Compares two procedures' four facings of one plan (front to N, E, S, W in both). */
@@ -63,8 +74,16 @@ export function compareProcedures(sizing: PlanFacings, other: PlanFacings): Proc
       coolingLatent: loadDifference(s.cooling.latentBtuh, o.cooling.latentBtuh),
       coolingTotal: loadDifference(s.cooling.totalBtuh, o.cooling.totalBtuh),
       heatingByComponent: byComponent(HEATING_COMPONENTS, s.heating.byComponent, o.heating.byComponent),
-      coolingSensibleByComponent: byComponent(COOLING_SENSIBLE_COMPONENTS, s.cooling.sensibleByComponent, o.cooling.sensibleByComponent),
-      coolingLatentByComponent: byComponent(COOLING_LATENT_COMPONENTS, s.cooling.latentByComponent, o.cooling.latentByComponent),
+      coolingSensibleByComponent: byComponent(
+        COOLING_SENSIBLE_COMPONENTS,
+        s.cooling.sensibleByComponent,
+        o.cooling.sensibleByComponent,
+      ),
+      coolingLatentByComponent: byComponent(
+        COOLING_LATENT_COMPONENTS,
+        s.cooling.latentByComponent,
+        o.cooling.latentByComponent,
+      ),
     };
   });
   return { sizing: sizing.procedure, other: other.procedure, facings };

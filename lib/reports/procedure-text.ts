@@ -18,7 +18,8 @@ export const PROCEDURE_STATEMENTS: Record<LoadProcedure, string> = {
 };
 
 /** Why a result has no peak hour or 24-hour profile. */
-export const PEAK_ONLY_NOTE = "The handbook's residential load-factor procedure gives the design peak only: no peak hour and no 24-hour profile.";
+export const PEAK_ONLY_NOTE =
+  "The handbook's residential load-factor procedure gives the design peak only: no peak hour and no 24-hour profile.";
 
 /** "at solar hour 16", or the peak of a procedure that gives no hour. */
 export function peakWhen(peakHour: number | null): string {

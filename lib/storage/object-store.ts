@@ -19,8 +19,18 @@ function client(): S3Client {
   return globalForS3.platloadS3;
 }
 
-export async function putObject({ key, body, contentType }: { key: string; body: Uint8Array | string; contentType: string }): Promise<void> {
-  await client().send(new PutObjectCommand({ Bucket: env().S3_BUCKET, Key: key, Body: body, ContentType: contentType }));
+export async function putObject({
+  key,
+  body,
+  contentType,
+}: {
+  key: string;
+  body: Uint8Array | string;
+  contentType: string;
+}): Promise<void> {
+  await client().send(
+    new PutObjectCommand({ Bucket: env().S3_BUCKET, Key: key, Body: body, ContentType: contentType }),
+  );
 }
 
 export async function getObject(key: string): Promise<Uint8Array> {
@@ -35,7 +45,15 @@ export async function deleteObject(key: string): Promise<void> {
 }
 
 /** A key that says what the file is and cannot collide: account/kind/date/random-name. */
-export function objectKey({ accountId, kind, fileName }: { accountId: number; kind: string; fileName: string }): string {
+export function objectKey({
+  accountId,
+  kind,
+  fileName,
+}: {
+  accountId: number;
+  kind: string;
+  fileName: string;
+}): string {
   const safe = fileName.replace(/[^A-Za-z0-9._-]+/g, "-").slice(-120);
   return `accounts/${accountId}/${kind}/${new Date().toISOString().slice(0, 10)}/${crypto.randomUUID()}-${safe}`;
 }

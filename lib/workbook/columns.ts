@@ -94,20 +94,27 @@ const FALSE_WORDS = ["no", "n", "false", "0"];
 function describeRange(column: ColumnDef & { value: { type: "number" } }): string {
   const unit = QUANTITY_KIND_INFO[column.value.quantity].unit;
   const { minimum, maximum } = column.value;
-  if (minimum !== undefined && maximum !== undefined) return `${minimum} to ${maximum}${unit === "count" ? "" : ` ${unit}`}`;
+  if (minimum !== undefined && maximum !== undefined)
+    return `${minimum} to ${maximum}${unit === "count" ? "" : ` ${unit}`}`;
   if (minimum !== undefined) return `at least ${minimum}`;
   return `at most ${maximum}`;
 }
 
 /** Reads the typed (non-formula) text of a numeric column: units, then the column's range. */
-export function readNumberCell(column: ColumnDef, text: string): { ok: true; value: number } | { ok: false; reason: string } {
+export function readNumberCell(
+  column: ColumnDef,
+  text: string,
+): { ok: true; value: number } | { ok: false; reason: string } {
   if (column.value.type !== "number") return { ok: false, reason: `${column.key} is not a number column` };
   const reading = readQuantity(text, column.value.quantity);
   if (!reading.ok) return reading;
   return checkNumberRange(column, reading.value);
 }
 
-export function checkNumberRange(column: ColumnDef, value: number): { ok: true; value: number } | { ok: false; reason: string } {
+export function checkNumberRange(
+  column: ColumnDef,
+  value: number,
+): { ok: true; value: number } | { ok: false; reason: string } {
   if (column.value.type !== "number") return { ok: false, reason: `${column.key} is not a number column` };
   const { minimum, maximum, integer } = column.value;
   const numberColumn = column as ColumnDef & { value: { type: "number" } };
@@ -119,12 +126,16 @@ export function checkNumberRange(column: ColumnDef, value: number): { ok: true; 
 }
 
 /** Reads an enum, text or boolean cell (never blank). */
-export function readChoiceOrTextCell(column: ColumnDef, text: string): { ok: true; value: CellValue } | { ok: false; reason: string } {
+export function readChoiceOrTextCell(
+  column: ColumnDef,
+  text: string,
+): { ok: true; value: CellValue } | { ok: false; reason: string } {
   const value = column.value;
   switch (value.type) {
     case "enum": {
       const found = value.choices.find((choice) => choice.toLowerCase() === text.trim().toLowerCase());
-      if (found === undefined) return { ok: false, reason: `"${text}" is not one of the choices: ${value.choices.join(", ")}` };
+      if (found === undefined)
+        return { ok: false, reason: `"${text}" is not one of the choices: ${value.choices.join(", ")}` };
       return { ok: true, value: found };
     }
     case "boolean": {
@@ -136,10 +147,16 @@ export function readChoiceOrTextCell(column: ColumnDef, text: string): { ok: tru
     case "text": {
       const trimmed = text.trim();
       if (value.maxLength !== undefined && trimmed.length > value.maxLength) {
-        return { ok: false, reason: `is ${trimmed.length} characters long; at most ${value.maxLength} are allowed` };
+        return {
+          ok: false,
+          reason: `is ${trimmed.length} characters long; at most ${value.maxLength} are allowed`,
+        };
       }
       if (value.pattern && !value.pattern.test(trimmed)) {
-        return { ok: false, reason: `"${trimmed}" ${value.patternHint ?? "has characters that are not allowed"}` };
+        return {
+          ok: false,
+          reason: `"${trimmed}" ${value.patternHint ?? "has characters that are not allowed"}`,
+        };
       }
       return { ok: true, value: trimmed };
     }
@@ -162,7 +179,9 @@ export function readRowCells(
   const errors: { key: string; reason: string }[] = [];
 
   const numeric = evaluateRow({
-    cells: Object.fromEntries(columns.filter((c) => c.value.type === "number").map((c) => [c.key, entered[c.key] ?? ""])),
+    cells: Object.fromEntries(
+      columns.filter((c) => c.value.type === "number").map((c) => [c.key, entered[c.key] ?? ""]),
+    ),
     isColumn: (key) => byKey.has(key),
     isNumberColumn: (key) => byKey.get(key)?.value.type === "number",
     readNumber: (key, text) => readNumberCell(byKey.get(key) as ColumnDef, text),
@@ -182,7 +201,9 @@ export function readRowCells(
       }
       if (result.status === "value") {
         // A formula's result is range-checked like a typed value.
-        const checked = isFormula(text) ? checkFormulaResult(column, result.value) : { ok: true as const, value: result.value };
+        const checked = isFormula(text)
+          ? checkFormulaResult(column, result.value)
+          : { ok: true as const, value: result.value };
         if (checked.ok) values[column.key] = checked.value;
         else errors.push({ key: column.key, reason: checked.reason });
         continue;
@@ -205,7 +226,10 @@ export function readRowCells(
   return { values, errors };
 }
 
-function checkFormulaResult(column: ColumnDef, value: number): { ok: true; value: number } | { ok: false; reason: string } {
+function checkFormulaResult(
+  column: ColumnDef,
+  value: number,
+): { ok: true; value: number } | { ok: false; reason: string } {
   if (column.value.type !== "number") return { ok: false, reason: "is not a number column" };
   const info = QUANTITY_KIND_INFO[column.value.quantity];
   if (info.minimum !== undefined && value < info.minimum) {
@@ -214,7 +238,8 @@ function checkFormulaResult(column: ColumnDef, value: number): { ok: true; value
   if (info.maximum !== undefined && value > info.maximum) {
     return { ok: false, reason: `the formula gives ${value}; ${info.label} cannot be above ${info.maximum}` };
   }
-  if (info.integer && !Number.isInteger(value)) return { ok: false, reason: `the formula gives ${value}, not a whole number` };
+  if (info.integer && !Number.isInteger(value))
+    return { ok: false, reason: `the formula gives ${value}, not a whole number` };
   const ranged = checkNumberRange(column, value);
   return ranged.ok ? ranged : { ok: false, reason: `the formula gives ${ranged.reason}` };
 }
@@ -234,7 +259,8 @@ export function readTable(
   table.headers.forEach((headerText, index) => {
     if (headerText.trim() === "") {
       const columnHasData = table.rows.some((row) => (row.cells[index] ?? "").trim() !== "");
-      if (columnHasData) errors.push({ row: 1, column: `(column ${index + 1})`, reason: "has data but no header" });
+      if (columnHasData)
+        errors.push({ row: 1, column: `(column ${index + 1})`, reason: "has data but no header" });
       return;
     }
     // Output-only columns (computed results in an export) are recognised and skipped.
@@ -242,11 +268,19 @@ export function readTable(
     if (ignored.some((column) => normalizeHeader(column.header) === wanted || column.key === wanted)) return;
     const column = matchColumn(columns, headerText);
     if (!column) {
-      errors.push({ row: 1, column: headerText, reason: "is not a known column; see templates/README.md for the column list" });
+      errors.push({
+        row: 1,
+        column: headerText,
+        reason: "is not a known column; see templates/README.md for the column list",
+      });
       return;
     }
     if (positions.has(column.key)) {
-      errors.push({ row: 1, column: headerText, reason: `appears twice (also column ${(positions.get(column.key) ?? 0) + 1})` });
+      errors.push({
+        row: 1,
+        column: headerText,
+        reason: `appears twice (also column ${(positions.get(column.key) ?? 0) + 1})`,
+      });
       return;
     }
     positions.set(column.key, index);

@@ -14,12 +14,32 @@
  * (47 °F and 17 °F) and `heatPumpOutputAtF` gives the output at a community's heating design
  * dry bulb.
  */
-import { SYSTEM_TYPES, catalogSystemSchema, type CatalogSystemInput, type SystemType } from "../equipment/catalog";
-import { describeColumnValue, matchColumn, readTable, type ColumnDef, type ColumnValueType, type RawTable, type TableCellError } from "./columns";
+import {
+  SYSTEM_TYPES,
+  catalogSystemSchema,
+  type CatalogSystemInput,
+  type SystemType,
+} from "../equipment/catalog";
+import {
+  describeColumnValue,
+  matchColumn,
+  readTable,
+  type ColumnDef,
+  type ColumnValueType,
+  type RawTable,
+  type TableCellError,
+} from "./columns";
 import { readCsv, writeCsv, writeXlsx } from "./table-io";
 import { QUANTITY_KIND_INFO, type QuantityKind } from "./units";
 
-export const EQUIPMENT_COLUMN_GROUPS = ["System", "Model numbers", "Cooling", "Heating", "Efficiency", "Purchasing"] as const;
+export const EQUIPMENT_COLUMN_GROUPS = [
+  "System",
+  "Model numbers",
+  "Cooling",
+  "Heating",
+  "Efficiency",
+  "Purchasing",
+] as const;
 export type EquipmentColumnGroup = (typeof EQUIPMENT_COLUMN_GROUPS)[number];
 
 /** An equipment-catalog column (the generic column shape with our group names). */
@@ -27,7 +47,10 @@ export interface EquipmentColumnDef extends ColumnDef {
   group: EquipmentColumnGroup;
 }
 
-const num = (quantity: QuantityKind, extra: { minimum?: number; maximum?: number; integer?: boolean } = {}): ColumnValueType => ({
+const num = (
+  quantity: QuantityKind,
+  extra: { minimum?: number; maximum?: number; integer?: boolean } = {},
+): ColumnValueType => ({
   type: "number",
   quantity,
   ...extra,
@@ -42,9 +65,15 @@ export const EQUIPMENT_COLUMNS: readonly EquipmentColumnDef[] = [
     key: "system_code",
     header: "System code",
     group: "System",
-    value: { type: "text", maxLength: 40, pattern: /^[A-Za-z0-9][A-Za-z0-9._-]*$/, patternHint: "must start with a letter or digit and use only letters, digits, . _ -" },
+    value: {
+      type: "text",
+      maxLength: 40,
+      pattern: /^[A-Za-z0-9][A-Za-z0-9._-]*$/,
+      patternHint: "must start with a letter or digit and use only letters, digits, . _ -",
+    },
     required: true,
-    meaning: "The builder's own code for the system; unique in the catalog. Lots and schedules refer to it; an import updates the system with the same code.",
+    meaning:
+      "The builder's own code for the system; unique in the catalog. Lots and schedules refer to it; an import updates the system with the same code.",
     example: "AC30-F60",
   },
   {
@@ -53,12 +82,37 @@ export const EQUIPMENT_COLUMNS: readonly EquipmentColumnDef[] = [
     group: "System",
     value: { type: "enum", choices: SYSTEM_TYPES },
     required: true,
-    meaning: "ac-furnace: air conditioner with a furnace; heat-pump: heat pump alone; heat-pump-backup: heat pump with backup heat (strips or a furnace); furnace: furnace alone, no cooling.",
+    meaning:
+      "ac-furnace: air conditioner with a furnace; heat-pump: heat pump alone; heat-pump-backup: heat pump with backup heat (strips or a furnace); furnace: furnace alone, no cooling.",
     example: "ac-furnace",
   },
-  { key: "outdoor_model", header: "Outdoor unit model", group: "Model numbers", value: modelText, required: false, meaning: "Model number of the condenser or heat pump outdoor unit (required for every type that cools).", example: "NV-C30S" },
-  { key: "indoor_model", header: "Indoor coil or air handler model", group: "Model numbers", value: modelText, required: false, meaning: "Model number of the evaporator coil or air handler matched with the outdoor unit.", example: "NV-E30B" },
-  { key: "furnace_model", header: "Furnace model", group: "Model numbers", value: modelText, required: false, meaning: "Model number of the furnace (required for ac-furnace and furnace).", example: "NV-G60M" },
+  {
+    key: "outdoor_model",
+    header: "Outdoor unit model",
+    group: "Model numbers",
+    value: modelText,
+    required: false,
+    meaning: "Model number of the condenser or heat pump outdoor unit (required for every type that cools).",
+    example: "NV-C30S",
+  },
+  {
+    key: "indoor_model",
+    header: "Indoor coil or air handler model",
+    group: "Model numbers",
+    value: modelText,
+    required: false,
+    meaning: "Model number of the evaporator coil or air handler matched with the outdoor unit.",
+    example: "NV-E30B",
+  },
+  {
+    key: "furnace_model",
+    header: "Furnace model",
+    group: "Model numbers",
+    value: modelText,
+    required: false,
+    meaning: "Model number of the furnace (required for ac-furnace and furnace).",
+    example: "NV-G60M",
+  },
   {
     key: "nominal_tons",
     header: "Nominal tons",
@@ -74,7 +128,8 @@ export const EQUIPMENT_COLUMNS: readonly EquipmentColumnDef[] = [
     group: "Cooling",
     value: num("btuh", { minimum: 0, maximum: MAX_CAPACITY_BTUH }),
     required: false,
-    meaning: "Total (sensible + latent) cooling capacity at the design conditions, from the matched system's data sheet; blank for a furnace alone.",
+    meaning:
+      "Total (sensible + latent) cooling capacity at the design conditions, from the matched system's data sheet; blank for a furnace alone.",
     example: "28,800",
   },
   {
@@ -83,7 +138,8 @@ export const EQUIPMENT_COLUMNS: readonly EquipmentColumnDef[] = [
     group: "Cooling",
     value: num("btuh", { minimum: 0, maximum: MAX_CAPACITY_BTUH }),
     required: false,
-    meaning: "The sensible part of the cooling capacity at the same conditions (at most the total); the rest is latent capacity.",
+    meaning:
+      "The sensible part of the cooling capacity at the same conditions (at most the total); the rest is latent capacity.",
     example: "21,900",
   },
   {
@@ -101,7 +157,8 @@ export const EQUIPMENT_COLUMNS: readonly EquipmentColumnDef[] = [
     group: "Heating",
     value: num("btuh", { minimum: 0, maximum: MAX_CAPACITY_BTUH }),
     required: false,
-    meaning: "Heat pump heating capacity at 47 °F outdoors (the high-temperature rating point); required for heat pumps.",
+    meaning:
+      "Heat pump heating capacity at 47 °F outdoors (the high-temperature rating point); required for heat pumps.",
     example: "28,000",
   },
   {
@@ -110,7 +167,8 @@ export const EQUIPMENT_COLUMNS: readonly EquipmentColumnDef[] = [
     group: "Heating",
     value: num("btuh", { minimum: 0, maximum: MAX_CAPACITY_BTUH }),
     required: false,
-    meaning: "Heat pump heating capacity at 17 °F outdoors (the low-temperature rating point); required for heat pumps, at most the 47 °F figure.",
+    meaning:
+      "Heat pump heating capacity at 17 °F outdoors (the low-temperature rating point); required for heat pumps, at most the 47 °F figure.",
     example: "17,500",
   },
   {
@@ -119,24 +177,52 @@ export const EQUIPMENT_COLUMNS: readonly EquipmentColumnDef[] = [
     group: "Heating",
     value: num("btuh", { minimum: 0, maximum: MAX_CAPACITY_BTUH }),
     required: false,
-    meaning: "Backup heat of a heat-pump-backup system: electric strips (1 kW = 3,412 Btu/h) or the output of a backup furnace; required for heat-pump-backup.",
+    meaning:
+      "Backup heat of a heat-pump-backup system: electric strips (1 kW = 3,412 Btu/h) or the output of a backup furnace; required for heat-pump-backup.",
     example: "34,100",
   },
-  { key: "seer2", header: "SEER2", group: "Efficiency", value: num("ratio", { minimum: 1, maximum: 40 }), required: false, meaning: "Seasonal cooling efficiency rating of the matched system.", example: "15.2" },
-  { key: "hspf2", header: "HSPF2", group: "Efficiency", value: num("ratio", { minimum: 1, maximum: 20 }), required: false, meaning: "Seasonal heating efficiency rating of a heat pump.", example: "7.8" },
-  { key: "afue_pct", header: "AFUE (%)", group: "Efficiency", value: num("percent", { minimum: 50, maximum: 100 }), required: false, meaning: "Annual fuel utilization efficiency of the furnace.", example: "96%" },
+  {
+    key: "seer2",
+    header: "SEER2",
+    group: "Efficiency",
+    value: num("ratio", { minimum: 1, maximum: 40 }),
+    required: false,
+    meaning: "Seasonal cooling efficiency rating of the matched system.",
+    example: "15.2",
+  },
+  {
+    key: "hspf2",
+    header: "HSPF2",
+    group: "Efficiency",
+    value: num("ratio", { minimum: 1, maximum: 20 }),
+    required: false,
+    meaning: "Seasonal heating efficiency rating of a heat pump.",
+    example: "7.8",
+  },
+  {
+    key: "afue_pct",
+    header: "AFUE (%)",
+    group: "Efficiency",
+    value: num("percent", { minimum: 50, maximum: 100 }),
+    required: false,
+    meaning: "Annual fuel utilization efficiency of the furnace.",
+    example: "96%",
+  },
   {
     key: "price_usd",
     header: "Price (USD)",
     group: "Purchasing",
     value: num("ratio", { minimum: 0, maximum: 1_000_000 }),
     required: false,
-    meaning: "The builder's price for the whole system in US dollars (a leading $ and thousands separators are read: $4,250.00); blank = no price, the schedule shows no cost for it.",
+    meaning:
+      "The builder's price for the whole system in US dollars (a leading $ and thousands separators are read: $4,250.00); blank = no price, the schedule shows no cost for it.",
     example: "$4,250",
   },
 ];
 
-export const EQUIPMENT_COLUMN_BY_KEY: ReadonlyMap<string, EquipmentColumnDef> = new Map(EQUIPMENT_COLUMNS.map((column) => [column.key, column]));
+export const EQUIPMENT_COLUMN_BY_KEY: ReadonlyMap<string, EquipmentColumnDef> = new Map(
+  EQUIPMENT_COLUMNS.map((column) => [column.key, column]),
+);
 
 /** Headers in file order. */
 export const EQUIPMENT_HEADERS: readonly string[] = EQUIPMENT_COLUMNS.map((column) => column.header);
@@ -169,19 +255,30 @@ export interface EquipmentCatalogEntry extends CatalogSystemInput {
   afuePct?: number;
 }
 
-export type EquipmentTableResult = { ok: true; systems: EquipmentCatalogEntry[] } | { ok: false; errors: TableCellError[] };
+export type EquipmentTableResult =
+  { ok: true; systems: EquipmentCatalogEntry[] } | { ok: false; errors: TableCellError[] };
 
 const isHeatPump = (type: SystemType) => type === "heat-pump" || type === "heat-pump-backup";
 const cools = (type: SystemType) => type !== "furnace";
 const hasFurnace = (type: SystemType) => type === "ac-furnace" || type === "furnace";
 
 /** "AC" + "coil" + "furnace" model numbers, as one text for lists and the selection. */
-export function joinModelNumbers(parts: { outdoorModel?: string; indoorModel?: string; furnaceModel?: string }): string {
-  return [parts.outdoorModel, parts.indoorModel, parts.furnaceModel].filter((part): part is string => typeof part === "string" && part !== "").join(" / ");
+export function joinModelNumbers(parts: {
+  outdoorModel?: string;
+  indoorModel?: string;
+  furnaceModel?: string;
+}): string {
+  return [parts.outdoorModel, parts.indoorModel, parts.furnaceModel]
+    .filter((part): part is string => typeof part === "string" && part !== "")
+    .join(" / ");
 }
 
 /** "SEER2 15.2, HSPF2 7.8, AFUE 96 %" (only the ratings given). */
-export function efficiencyText(ratings: { seer2?: number; hspf2?: number; afuePct?: number }): string | undefined {
+export function efficiencyText(ratings: {
+  seer2?: number;
+  hspf2?: number;
+  afuePct?: number;
+}): string | undefined {
   const parts: string[] = [];
   if (ratings.seer2 !== undefined) parts.push(`SEER2 ${ratings.seer2}`);
   if (ratings.hspf2 !== undefined) parts.push(`HSPF2 ${ratings.hspf2}`);
@@ -249,48 +346,111 @@ function crossCheckRow(values: Record<string, unknown>, type: SystemType): { key
   const tons = optionalNumber(values, "nominal_tons");
 
   if (cools(type)) {
-    if (!optionalText(values, "outdoor_model")) problems.push({ key: "outdoor_model", reason: `is required for a ${type} system` });
-    if (total === undefined || total <= 0) problems.push({ key: "cooling_total_btuh", reason: `is required for a ${type} system (its cooling capacity at design, more than 0 Btu/h)` });
-    if (sensible === undefined || sensible <= 0) problems.push({ key: "cooling_sensible_btuh", reason: `is required for a ${type} system (its sensible capacity at design, more than 0 Btu/h)` });
-    if (tons === undefined) problems.push({ key: "nominal_tons", reason: `is required for a ${type} system` });
+    if (!optionalText(values, "outdoor_model"))
+      problems.push({ key: "outdoor_model", reason: `is required for a ${type} system` });
+    if (total === undefined || total <= 0)
+      problems.push({
+        key: "cooling_total_btuh",
+        reason: `is required for a ${type} system (its cooling capacity at design, more than 0 Btu/h)`,
+      });
+    if (sensible === undefined || sensible <= 0)
+      problems.push({
+        key: "cooling_sensible_btuh",
+        reason: `is required for a ${type} system (its sensible capacity at design, more than 0 Btu/h)`,
+      });
+    if (tons === undefined)
+      problems.push({ key: "nominal_tons", reason: `is required for a ${type} system` });
   } else {
-    if (total !== undefined && total > 0) problems.push({ key: "cooling_total_btuh", reason: "a furnace alone has no cooling capacity; leave it blank or choose ac-furnace" });
-    if (sensible !== undefined && sensible > 0) problems.push({ key: "cooling_sensible_btuh", reason: "a furnace alone has no cooling capacity; leave it blank or choose ac-furnace" });
-    if (tons !== undefined) problems.push({ key: "nominal_tons", reason: "a furnace alone has no cooling size; leave it blank or choose ac-furnace" });
-    if (optionalText(values, "outdoor_model")) problems.push({ key: "outdoor_model", reason: "a furnace alone has no outdoor unit; leave it blank or choose ac-furnace" });
+    if (total !== undefined && total > 0)
+      problems.push({
+        key: "cooling_total_btuh",
+        reason: "a furnace alone has no cooling capacity; leave it blank or choose ac-furnace",
+      });
+    if (sensible !== undefined && sensible > 0)
+      problems.push({
+        key: "cooling_sensible_btuh",
+        reason: "a furnace alone has no cooling capacity; leave it blank or choose ac-furnace",
+      });
+    if (tons !== undefined)
+      problems.push({
+        key: "nominal_tons",
+        reason: "a furnace alone has no cooling size; leave it blank or choose ac-furnace",
+      });
+    if (optionalText(values, "outdoor_model"))
+      problems.push({
+        key: "outdoor_model",
+        reason: "a furnace alone has no outdoor unit; leave it blank or choose ac-furnace",
+      });
   }
   if (total !== undefined && sensible !== undefined && sensible > total) {
-    problems.push({ key: "cooling_sensible_btuh", reason: `${sensible} Btu/h is above the cooling total of ${total} Btu/h; sensible capacity is part of the total` });
+    problems.push({
+      key: "cooling_sensible_btuh",
+      reason: `${sensible} Btu/h is above the cooling total of ${total} Btu/h; sensible capacity is part of the total`,
+    });
   }
 
   if (hasFurnace(type)) {
-    if (!optionalText(values, "furnace_model")) problems.push({ key: "furnace_model", reason: `is required for a ${type} system` });
-    if (furnace === undefined || furnace <= 0) problems.push({ key: "furnace_output_btuh", reason: `is required for a ${type} system (the furnace's output, more than 0 Btu/h)` });
+    if (!optionalText(values, "furnace_model"))
+      problems.push({ key: "furnace_model", reason: `is required for a ${type} system` });
+    if (furnace === undefined || furnace <= 0)
+      problems.push({
+        key: "furnace_output_btuh",
+        reason: `is required for a ${type} system (the furnace's output, more than 0 Btu/h)`,
+      });
   } else if (furnace !== undefined) {
     problems.push({
       key: "furnace_output_btuh",
-      reason: type === "heat-pump-backup" ? "a heat pump's backup furnace goes in Backup heat (Btu/h)" : "a heat pump alone has no furnace; choose heat-pump-backup and enter its output as Backup heat (Btu/h)",
+      reason:
+        type === "heat-pump-backup"
+          ? "a heat pump's backup furnace goes in Backup heat (Btu/h)"
+          : "a heat pump alone has no furnace; choose heat-pump-backup and enter its output as Backup heat (Btu/h)",
     });
   }
 
   if (isHeatPump(type)) {
-    if (hp47 === undefined || hp47 <= 0) problems.push({ key: "heat_pump_47f_btuh", reason: `is required for a ${type} system (its heating capacity at 47 °F, more than 0 Btu/h)` });
+    if (hp47 === undefined || hp47 <= 0)
+      problems.push({
+        key: "heat_pump_47f_btuh",
+        reason: `is required for a ${type} system (its heating capacity at 47 °F, more than 0 Btu/h)`,
+      });
     // Both rating points are needed to find the output at a community's design temperature.
-    if (hp17 === undefined) problems.push({ key: "heat_pump_17f_btuh", reason: `is required for a ${type} system (its heating capacity at 17 °F, needed for the output at the heating design temperature)` });
+    if (hp17 === undefined)
+      problems.push({
+        key: "heat_pump_17f_btuh",
+        reason: `is required for a ${type} system (its heating capacity at 17 °F, needed for the output at the heating design temperature)`,
+      });
     // An air-source heat pump gives less heat the colder it is outdoors (common practice).
     if (hp47 !== undefined && hp17 !== undefined && hp17 > hp47) {
-      problems.push({ key: "heat_pump_17f_btuh", reason: `${hp17} Btu/h at 17 °F is above the ${hp47} Btu/h at 47 °F; a heat pump's output falls as it gets colder — are the two columns swapped?` });
+      problems.push({
+        key: "heat_pump_17f_btuh",
+        reason: `${hp17} Btu/h at 17 °F is above the ${hp47} Btu/h at 47 °F; a heat pump's output falls as it gets colder — are the two columns swapped?`,
+      });
     }
   } else {
-    if (hp47 !== undefined) problems.push({ key: "heat_pump_47f_btuh", reason: `a ${type} system has no heat pump; leave it blank or choose heat-pump` });
-    if (hp17 !== undefined) problems.push({ key: "heat_pump_17f_btuh", reason: `a ${type} system has no heat pump; leave it blank or choose heat-pump` });
-    if (optionalNumber(values, "hspf2") !== undefined) problems.push({ key: "hspf2", reason: `HSPF2 rates heat pumps; a ${type} system has none` });
+    if (hp47 !== undefined)
+      problems.push({
+        key: "heat_pump_47f_btuh",
+        reason: `a ${type} system has no heat pump; leave it blank or choose heat-pump`,
+      });
+    if (hp17 !== undefined)
+      problems.push({
+        key: "heat_pump_17f_btuh",
+        reason: `a ${type} system has no heat pump; leave it blank or choose heat-pump`,
+      });
+    if (optionalNumber(values, "hspf2") !== undefined)
+      problems.push({ key: "hspf2", reason: `HSPF2 rates heat pumps; a ${type} system has none` });
   }
   if (type === "heat-pump-backup" && (backup === undefined || backup <= 0)) {
-    problems.push({ key: "backup_heat_btuh", reason: "is required for a heat-pump-backup system (more than 0 Btu/h)" });
+    problems.push({
+      key: "backup_heat_btuh",
+      reason: "is required for a heat-pump-backup system (more than 0 Btu/h)",
+    });
   }
   if (type !== "heat-pump-backup" && backup !== undefined && backup > 0) {
-    problems.push({ key: "backup_heat_btuh", reason: `only a heat-pump-backup system has backup heat; this row is ${type}` });
+    problems.push({
+      key: "backup_heat_btuh",
+      reason: `only a heat-pump-backup system has backup heat; this row is ${type}`,
+    });
   }
   if (optionalNumber(values, "afue_pct") !== undefined && !hasFurnace(type) && type !== "heat-pump-backup") {
     problems.push({ key: "afue_pct", reason: `AFUE rates furnaces; a ${type} system has none` });
@@ -322,9 +482,21 @@ function rowToEntry(values: Record<string, unknown>): EquipmentCatalogEntry {
     efficiency: efficiencyText({ seer2, hspf2, afuePct }),
     priceUsd: optionalNumber(values, "price_usd"),
   };
-  const extras: Partial<EquipmentCatalogEntry> = { outdoorModel, indoorModel, furnaceModel, furnaceOutputBtuh, heatPump47FBtuh, heatPump17FBtuh, seer2, hspf2, afuePct };
-  for (const [key, value] of Object.entries(extras)) if (value !== undefined) (entry as unknown as Record<string, unknown>)[key] = value;
-  for (const key of Object.keys(entry) as (keyof EquipmentCatalogEntry)[]) if (entry[key] === undefined) delete entry[key];
+  const extras: Partial<EquipmentCatalogEntry> = {
+    outdoorModel,
+    indoorModel,
+    furnaceModel,
+    furnaceOutputBtuh,
+    heatPump47FBtuh,
+    heatPump17FBtuh,
+    seer2,
+    hspf2,
+    afuePct,
+  };
+  for (const [key, value] of Object.entries(extras))
+    if (value !== undefined) (entry as unknown as Record<string, unknown>)[key] = value;
+  for (const key of Object.keys(entry) as (keyof EquipmentCatalogEntry)[])
+    if (entry[key] === undefined) delete entry[key];
   return entry;
 }
 
@@ -336,11 +508,19 @@ function rowToEntry(values: Record<string, unknown>): EquipmentCatalogEntry {
  * gives the systems, in file order.
  */
 export function validateEquipmentTable(table: RawTable): EquipmentTableResult {
-  const priceIndex = table.headers.findIndex((text) => matchColumn(EQUIPMENT_COLUMNS, text)?.key === "price_usd");
+  const priceIndex = table.headers.findIndex(
+    (text) => matchColumn(EQUIPMENT_COLUMNS, text)?.key === "price_usd",
+  );
   const prepared: RawTable =
     priceIndex < 0
       ? table
-      : { headers: table.headers, rows: table.rows.map((row) => ({ rowNumber: row.rowNumber, cells: row.cells.map((cell, index) => (index === priceIndex ? normalizePriceText(cell) : cell)) })) };
+      : {
+          headers: table.headers,
+          rows: table.rows.map((row) => ({
+            rowNumber: row.rowNumber,
+            cells: row.cells.map((cell, index) => (index === priceIndex ? normalizePriceText(cell) : cell)),
+          })),
+        };
 
   const read = readTable(prepared, EQUIPMENT_COLUMNS);
   const errors: TableCellError[] = [...read.errors];
@@ -353,7 +533,11 @@ export function validateEquipmentTable(table: RawTable): EquipmentTableResult {
     if (typeof code === "string") {
       const seen = firstRowOfCode.get(code.toLowerCase());
       if (seen !== undefined) {
-        errors.push({ row: row.rowNumber, column: headerOf("system_code"), reason: `system code "${code}" is already used on row ${seen}; system codes must be unique` });
+        errors.push({
+          row: row.rowNumber,
+          column: headerOf("system_code"),
+          reason: `system code "${code}" is already used on row ${seen}; system codes must be unique`,
+        });
         continue;
       }
       firstRowOfCode.set(code.toLowerCase(), row.rowNumber);
@@ -364,20 +548,26 @@ export function validateEquipmentTable(table: RawTable): EquipmentTableResult {
     if (type === undefined) continue;
     const problems = crossCheckRow(row.values, type);
     if (problems.length > 0) {
-      for (const problem of problems) errors.push({ row: row.rowNumber, column: headerOf(problem.key), reason: problem.reason });
+      for (const problem of problems)
+        errors.push({ row: row.rowNumber, column: headerOf(problem.key), reason: problem.reason });
       continue;
     }
     const entry = rowToEntry(row.values);
     const parsed = catalogSystemSchema.safeParse(entry);
     if (!parsed.success) {
       for (const issue of parsed.error.issues) {
-        errors.push({ row: row.rowNumber, column: headerOf(columnForSchemaPath(issue.path.map(String).join("."), type)), reason: issue.message });
+        errors.push({
+          row: row.rowNumber,
+          column: headerOf(columnForSchemaPath(issue.path.map(String).join("."), type)),
+          reason: issue.message,
+        });
       }
       continue;
     }
     systems.push(entry);
   }
-  if (read.rows.length === 0 && errors.length === 0) errors.push({ row: 2, column: headerOf("system_code"), reason: "the table has no system rows" });
+  if (read.rows.length === 0 && errors.length === 0)
+    errors.push({ row: 2, column: headerOf("system_code"), reason: "the table has no system rows" });
   errors.sort((a, b) => a.row - b.row);
   return errors.length > 0 ? { ok: false, errors } : { ok: true, systems };
 }
@@ -393,9 +583,12 @@ export function equipmentEntryToRow(system: EquipmentCatalogEntry): Record<strin
     system_code: system.id,
     system_type: system.type,
     // A system stored without its parts keeps its joined model number in the first model column.
-    outdoor_model: system.outdoorModel ?? (system.type === "furnace" || system.furnaceModel || system.indoorModel ? null : system.modelNumber),
+    outdoor_model:
+      system.outdoorModel ??
+      (system.type === "furnace" || system.furnaceModel || system.indoorModel ? null : system.modelNumber),
     indoor_model: system.indoorModel ?? null,
-    furnace_model: system.furnaceModel ?? (system.type === "furnace" && !system.outdoorModel ? system.modelNumber : null),
+    furnace_model:
+      system.furnaceModel ?? (system.type === "furnace" && !system.outdoorModel ? system.modelNumber : null),
     nominal_tons: system.nominalTons ?? null,
     cooling_total_btuh: blankZero(system.coolingTotalBtuh),
     cooling_sensible_btuh: blankZero(system.coolingSensibleBtuh),
@@ -414,7 +607,10 @@ export function equipmentEntryToRow(system: EquipmentCatalogEntry): Record<strin
  * Systems → the header + cell arrays a CSV/XLSX writer takes (writeCsv / writeXlsx, which
  * escape formula-like text). The result imports again with validateEquipmentTable.
  */
-export function equipmentRowsToTable(systems: readonly EquipmentCatalogEntry[]): { headers: string[]; rows: (string | number | null)[][] } {
+export function equipmentRowsToTable(systems: readonly EquipmentCatalogEntry[]): {
+  headers: string[];
+  rows: (string | number | null)[][];
+} {
   return {
     headers: [...EQUIPMENT_HEADERS],
     rows: systems.map((system) => {
@@ -450,9 +646,15 @@ export class EquipmentInputError extends Error {
  * @example heatPumpOutputAtF({ heatPump47FBtuh: 30_000, heatPump17FBtuh: 18_000 }, 24) // 20,800
  * @throws EquipmentInputError for a temperature outside −60…70 °F (the engine's heating design range)
  */
-export function heatPumpOutputAtF(ratings: { heatPump47FBtuh: number; heatPump17FBtuh: number }, outdoorF: number): number {
+export function heatPumpOutputAtF(
+  ratings: { heatPump47FBtuh: number; heatPump17FBtuh: number },
+  outdoorF: number,
+): number {
   if (!Number.isFinite(outdoorF) || outdoorF < -60 || outdoorF > 70) {
-    throw new EquipmentInputError("heatingOutdoorDbF", `${outdoorF} °F is out of range (valid range -60 to 70 °F)`);
+    throw new EquipmentInputError(
+      "heatingOutdoorDbF",
+      `${outdoorF} °F is out of range (valid range -60 to 70 °F)`,
+    );
   }
   const { heatPump47FBtuh: high, heatPump17FBtuh: low } = ratings;
   const slopeBtuhPerF = (high - low) / (HEAT_PUMP_RATING_HIGH_F - HEAT_PUMP_RATING_LOW_F);
@@ -464,12 +666,25 @@ export function heatPumpOutputAtF(ratings: { heatPump47FBtuh: number; heatPump17
  * pump's `heatingOutputBtuh` becomes its output at the community's heating design dry bulb.
  * Furnaces and entries without both ratings are returned unchanged.
  */
-export function catalogForHeatingDesign(systems: readonly EquipmentCatalogEntry[], heatingOutdoorDbF: number): EquipmentCatalogEntry[] {
+export function catalogForHeatingDesign(
+  systems: readonly EquipmentCatalogEntry[],
+  heatingOutdoorDbF: number,
+): EquipmentCatalogEntry[] {
   return systems.map((system) => {
-    if (!isHeatPump(system.type) || system.heatPump47FBtuh === undefined || system.heatPump17FBtuh === undefined) return { ...system };
+    if (
+      !isHeatPump(system.type) ||
+      system.heatPump47FBtuh === undefined ||
+      system.heatPump17FBtuh === undefined
+    )
+      return { ...system };
     return {
       ...system,
-      heatingOutputBtuh: Math.round(heatPumpOutputAtF({ heatPump47FBtuh: system.heatPump47FBtuh, heatPump17FBtuh: system.heatPump17FBtuh }, heatingOutdoorDbF)),
+      heatingOutputBtuh: Math.round(
+        heatPumpOutputAtF(
+          { heatPump47FBtuh: system.heatPump47FBtuh, heatPump17FBtuh: system.heatPump17FBtuh },
+          heatingOutdoorDbF,
+        ),
+      ),
     };
   });
 }
@@ -505,23 +720,150 @@ export const EQUIPMENT_TEMPLATE_ROW: EquipmentExampleRow = {
  * furnace's input (from memory). Prices are invented.
  */
 export const EXAMPLE_EQUIPMENT_ROWS: readonly EquipmentExampleRow[] = [
-  { system_code: "AC18-F30", system_type: "ac-furnace", outdoor_model: "NV-C18S", indoor_model: "NV-E18A", furnace_model: "NV-G30M", nominal_tons: "1.5", cooling_total_btuh: "17,300", cooling_sensible_btuh: "13,400", furnace_output_btuh: "28,500", seer2: "14.3", afue_pct: "96%", price_usd: "$3,420" },
-  { system_code: "AC24-F30", system_type: "ac-furnace", outdoor_model: "NV-C24S", indoor_model: "NV-E24A", furnace_model: "NV-G30M", nominal_tons: "2", cooling_total_btuh: "23,100", cooling_sensible_btuh: "18,000", furnace_output_btuh: "28,500", seer2: "14.3", afue_pct: "96%", price_usd: "$3,730" },
-  { system_code: "AC30-F40", system_type: "ac-furnace", outdoor_model: "NV-C30S", indoor_model: "NV-E30B", furnace_model: "NV-G40M", nominal_tons: "2.5", cooling_total_btuh: "28,800", cooling_sensible_btuh: "22,400", furnace_output_btuh: "38,000", seer2: "14.3", afue_pct: "96%", price_usd: "$4,090" },
-  { system_code: "AC36-F60", system_type: "ac-furnace", outdoor_model: "NV-C36S", indoor_model: "NV-E36B", furnace_model: "NV-G60M", nominal_tons: "3", cooling_total_btuh: "34,600", cooling_sensible_btuh: "26,600", furnace_output_btuh: "57,000", seer2: "14.3", afue_pct: "96%", price_usd: "$4,540" },
-  { system_code: "AC42-F60", system_type: "ac-furnace", outdoor_model: "NV-C42S", indoor_model: "NV-E42C", furnace_model: "NV-G60M", nominal_tons: "3.5", cooling_total_btuh: "40,300", cooling_sensible_btuh: "31,000", furnace_output_btuh: "57,000", seer2: "14.3", afue_pct: "96%", price_usd: "$4,980" },
-  { system_code: "AC48-F80", system_type: "ac-furnace", outdoor_model: "NV-C48S", indoor_model: "NV-E48C", furnace_model: "NV-G80M", nominal_tons: "4", cooling_total_btuh: "46,100", cooling_sensible_btuh: "35,000", furnace_output_btuh: "76,000", seer2: "14.3", afue_pct: "96%", price_usd: "$5,480" },
-  { system_code: "HP24", system_type: "heat-pump", outdoor_model: "NV-H24V", indoor_model: "NV-A24V", nominal_tons: "2", cooling_total_btuh: "23,000", cooling_sensible_btuh: "17,900", heat_pump_47f_btuh: "23,600", heat_pump_17f_btuh: "14,400", seer2: "16.0", hspf2: "8.1", price_usd: "$5,150" },
-  { system_code: "HP30-B10", system_type: "heat-pump-backup", outdoor_model: "NV-H30V", indoor_model: "NV-A30V", nominal_tons: "2.5", cooling_total_btuh: "28,700", cooling_sensible_btuh: "22,300", heat_pump_47f_btuh: "29,000", heat_pump_17f_btuh: "17,600", backup_heat_btuh: "34,100", seer2: "16.0", hspf2: "8.1", price_usd: "$5,740" },
-  { system_code: "HP36-B10", system_type: "heat-pump-backup", outdoor_model: "NV-H36V", indoor_model: "NV-A36V", nominal_tons: "3", cooling_total_btuh: "34,500", cooling_sensible_btuh: "26,900", heat_pump_47f_btuh: "34,800", heat_pump_17f_btuh: "21,000", backup_heat_btuh: "34,100", seer2: "15.2", hspf2: "7.8", price_usd: "$6,230" },
-  { system_code: "F40", system_type: "furnace", furnace_model: "NV-G40M", furnace_output_btuh: "38,000", afue_pct: "96%", price_usd: "$1,840" },
+  {
+    system_code: "AC18-F30",
+    system_type: "ac-furnace",
+    outdoor_model: "NV-C18S",
+    indoor_model: "NV-E18A",
+    furnace_model: "NV-G30M",
+    nominal_tons: "1.5",
+    cooling_total_btuh: "17,300",
+    cooling_sensible_btuh: "13,400",
+    furnace_output_btuh: "28,500",
+    seer2: "14.3",
+    afue_pct: "96%",
+    price_usd: "$3,420",
+  },
+  {
+    system_code: "AC24-F30",
+    system_type: "ac-furnace",
+    outdoor_model: "NV-C24S",
+    indoor_model: "NV-E24A",
+    furnace_model: "NV-G30M",
+    nominal_tons: "2",
+    cooling_total_btuh: "23,100",
+    cooling_sensible_btuh: "18,000",
+    furnace_output_btuh: "28,500",
+    seer2: "14.3",
+    afue_pct: "96%",
+    price_usd: "$3,730",
+  },
+  {
+    system_code: "AC30-F40",
+    system_type: "ac-furnace",
+    outdoor_model: "NV-C30S",
+    indoor_model: "NV-E30B",
+    furnace_model: "NV-G40M",
+    nominal_tons: "2.5",
+    cooling_total_btuh: "28,800",
+    cooling_sensible_btuh: "22,400",
+    furnace_output_btuh: "38,000",
+    seer2: "14.3",
+    afue_pct: "96%",
+    price_usd: "$4,090",
+  },
+  {
+    system_code: "AC36-F60",
+    system_type: "ac-furnace",
+    outdoor_model: "NV-C36S",
+    indoor_model: "NV-E36B",
+    furnace_model: "NV-G60M",
+    nominal_tons: "3",
+    cooling_total_btuh: "34,600",
+    cooling_sensible_btuh: "26,600",
+    furnace_output_btuh: "57,000",
+    seer2: "14.3",
+    afue_pct: "96%",
+    price_usd: "$4,540",
+  },
+  {
+    system_code: "AC42-F60",
+    system_type: "ac-furnace",
+    outdoor_model: "NV-C42S",
+    indoor_model: "NV-E42C",
+    furnace_model: "NV-G60M",
+    nominal_tons: "3.5",
+    cooling_total_btuh: "40,300",
+    cooling_sensible_btuh: "31,000",
+    furnace_output_btuh: "57,000",
+    seer2: "14.3",
+    afue_pct: "96%",
+    price_usd: "$4,980",
+  },
+  {
+    system_code: "AC48-F80",
+    system_type: "ac-furnace",
+    outdoor_model: "NV-C48S",
+    indoor_model: "NV-E48C",
+    furnace_model: "NV-G80M",
+    nominal_tons: "4",
+    cooling_total_btuh: "46,100",
+    cooling_sensible_btuh: "35,000",
+    furnace_output_btuh: "76,000",
+    seer2: "14.3",
+    afue_pct: "96%",
+    price_usd: "$5,480",
+  },
+  {
+    system_code: "HP24",
+    system_type: "heat-pump",
+    outdoor_model: "NV-H24V",
+    indoor_model: "NV-A24V",
+    nominal_tons: "2",
+    cooling_total_btuh: "23,000",
+    cooling_sensible_btuh: "17,900",
+    heat_pump_47f_btuh: "23,600",
+    heat_pump_17f_btuh: "14,400",
+    seer2: "16.0",
+    hspf2: "8.1",
+    price_usd: "$5,150",
+  },
+  {
+    system_code: "HP30-B10",
+    system_type: "heat-pump-backup",
+    outdoor_model: "NV-H30V",
+    indoor_model: "NV-A30V",
+    nominal_tons: "2.5",
+    cooling_total_btuh: "28,700",
+    cooling_sensible_btuh: "22,300",
+    heat_pump_47f_btuh: "29,000",
+    heat_pump_17f_btuh: "17,600",
+    backup_heat_btuh: "34,100",
+    seer2: "16.0",
+    hspf2: "8.1",
+    price_usd: "$5,740",
+  },
+  {
+    system_code: "HP36-B10",
+    system_type: "heat-pump-backup",
+    outdoor_model: "NV-H36V",
+    indoor_model: "NV-A36V",
+    nominal_tons: "3",
+    cooling_total_btuh: "34,500",
+    cooling_sensible_btuh: "26,900",
+    heat_pump_47f_btuh: "34,800",
+    heat_pump_17f_btuh: "21,000",
+    backup_heat_btuh: "34,100",
+    seer2: "15.2",
+    hspf2: "7.8",
+    price_usd: "$6,230",
+  },
+  {
+    system_code: "F40",
+    system_type: "furnace",
+    furnace_model: "NV-G40M",
+    furnace_output_btuh: "38,000",
+    afue_pct: "96%",
+    price_usd: "$1,840",
+  },
 ];
 
 /** Example rows → cells in column order (unknown keys are a programming error). */
 export function equipmentExampleCells(rows: readonly EquipmentExampleRow[]): string[][] {
   for (const row of rows) {
     for (const key of Object.keys(row)) {
-      if (!EQUIPMENT_COLUMN_BY_KEY.has(key)) throw new Error(`example system ${row.system_code}: unknown column key ${key}`);
+      if (!EQUIPMENT_COLUMN_BY_KEY.has(key))
+        throw new Error(`example system ${row.system_code}: unknown column key ${key}`);
     }
   }
   return rows.map((row) => EQUIPMENT_COLUMNS.map((column) => row[column.key] ?? ""));
@@ -604,7 +946,12 @@ export function renderEquipmentTemplatesDoc(): string {
   ];
   for (const group of EQUIPMENT_COLUMN_GROUPS) {
     const columns = EQUIPMENT_COLUMNS.filter((column) => column.group === group);
-    lines.push(`### ${group}`, "", "| key | header | unit | valid range | meaning | required | example |", "|---|---|---|---|---|---|---|");
+    lines.push(
+      `### ${group}`,
+      "",
+      "| key | header | unit | valid range | meaning | required | example |",
+      "|---|---|---|---|---|---|---|",
+    );
     for (const column of columns) {
       lines.push(
         `| \`${column.key}\` | ${escapeCell(column.header)} | ${escapeCell(unitOf(column))} | ${rangeOf(column)} | ${escapeCell(column.meaning)} | ${column.required ? "**required**" : "see below"} | ${column.example ? `\`${escapeCell(column.example)}\`` : ""} |`,
@@ -619,7 +966,9 @@ export function renderEquipmentTemplatesDoc(): string {
     "",
     `| column | ${SYSTEM_TYPES.map((type) => `\`${type}\``).join(" | ")} |`,
     `|---|${SYSTEM_TYPES.map(() => "---").join("|")}|`,
-    ...Object.entries(FILL_BY_TYPE).map(([key, fill]) => `| \`${key}\` | ${SYSTEM_TYPES.map((type) => fill[type]).join(" | ")} |`),
+    ...Object.entries(FILL_BY_TYPE).map(
+      ([key, fill]) => `| \`${key}\` | ${SYSTEM_TYPES.map((type) => fill[type]).join(" | ")} |`,
+    ),
     "",
     "`system_code` and `system_type` are required on every row; `seer2` and `price_usd` are optional on every type.",
     "",
@@ -645,13 +994,21 @@ export function renderEquipmentTemplatesDoc(): string {
  * same header and example row as the CSV template.
  * @throws Error naming the row, column and reason when an example row does not validate.
  */
-export async function equipmentTemplateFiles(options: { fixedTimestamp?: Date } = {}): Promise<{ name: string; content: string | Uint8Array }[]> {
+export async function equipmentTemplateFiles(
+  options: { fixedTimestamp?: Date } = {},
+): Promise<{ name: string; content: string | Uint8Array }[]> {
   const templateCells = equipmentExampleCells([EQUIPMENT_TEMPLATE_ROW]);
   const templateCsv = writeCsv(EQUIPMENT_HEADERS, templateCells);
   const exampleCsv = writeCsv(EQUIPMENT_HEADERS, equipmentExampleCells(EXAMPLE_EQUIPMENT_ROWS));
-  for (const [name, csv] of [["equipment-catalog-template.csv", templateCsv], ["example-equipment.csv", exampleCsv]] as const) {
+  for (const [name, csv] of [
+    ["equipment-catalog-template.csv", templateCsv],
+    ["example-equipment.csv", exampleCsv],
+  ] as const) {
     const result = validateEquipmentTable(readCsv(csv));
-    if (!result.ok) throw new Error(`${name} does not validate:\n${result.errors.map((e) => `row ${e.row}, column "${e.column}": ${e.reason}`).join("\n")}`);
+    if (!result.ok)
+      throw new Error(
+        `${name} does not validate:\n${result.errors.map((e) => `row ${e.row}, column "${e.column}": ${e.reason}`).join("\n")}`,
+      );
   }
   const templateXlsx = await writeXlsx(EQUIPMENT_HEADERS, templateCells, {
     sheetName: "Equipment catalog",

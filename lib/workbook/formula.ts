@@ -85,7 +85,10 @@ export function evaluateFormula(formulaText: string, resolve: ReferenceResolver)
   for (const match of expression.matchAll(/([A-Za-z_][A-Za-z0-9_.]*)\s*\(/g)) {
     const name = match[1].toUpperCase();
     if (!(FORMULA_FUNCTIONS as readonly string[]).includes(name)) {
-      return { ok: false, reason: `the function ${match[1]} is not offered; use ${FORMULA_FUNCTIONS.join(", ")}` };
+      return {
+        ok: false,
+        reason: `the function ${match[1]} is not offered; use ${FORMULA_FUNCTIONS.join(", ")}`,
+      };
     }
   }
 
@@ -98,7 +101,9 @@ export function evaluateFormula(formulaText: string, resolve: ReferenceResolver)
     const referenced = resolve(name);
     if (referenced.ok) return referenced.value;
     if (asCellAddress && "unknownName" in referenced) {
-      return fail(`${name.toUpperCase()} looks like a spreadsheet cell address; a row's cells are named by column key (for example front_wall_ft2)`);
+      return fail(
+        `${name.toUpperCase()} looks like a spreadsheet cell address; a row's cells are named by column key (for example front_wall_ft2)`,
+      );
     }
     return fail(referenced.reason);
   };
@@ -111,16 +116,24 @@ export function evaluateFormula(formulaText: string, resolve: ReferenceResolver)
     done(lookUp(cell.label.toLowerCase(), true));
   });
   parser.on("callRangeValue", (start, end) => {
-    fail(`${start.label}:${end.label} is a cell range; a row's cells are named by column key, not by address`);
+    fail(
+      `${start.label}:${end.label} is a cell range; a row's cells are named by column key, not by address`,
+    );
   });
 
   const { result, error } = parser.parse(expression);
   if (failure !== undefined) return { ok: false, reason: failure };
   if (error !== null) {
-    return { ok: false, reason: `formula error ${error}: ${PARSER_ERROR_REASONS[error] ?? "the formula cannot be evaluated"}` };
+    return {
+      ok: false,
+      reason: `formula error ${error}: ${PARSER_ERROR_REASONS[error] ?? "the formula cannot be evaluated"}`,
+    };
   }
   if (typeof result !== "number") {
-    return { ok: false, reason: `the formula gives ${result === null ? "nothing" : `a ${typeof result}`}, not a number` };
+    return {
+      ok: false,
+      reason: `the formula gives ${result === null ? "nothing" : `a ${typeof result}`}, not a number`,
+    };
   }
   if (!Number.isFinite(result)) return { ok: false, reason: "the formula gives a number that is not finite" };
   return { ok: true, value: result };
@@ -167,10 +180,15 @@ export function evaluateRow(context: RowFormulaContext): Map<string, RowCellValu
       inProgress.pop();
       const cycleReason = circular.get(key);
       if (cycleReason !== undefined) value = { status: "error", reason: cycleReason };
-      else value = evaluation.ok ? { status: "value", value: evaluation.value, formula: text } : { status: "error", reason: evaluation.reason };
+      else
+        value = evaluation.ok
+          ? { status: "value", value: evaluation.value, formula: text }
+          : { status: "error", reason: evaluation.reason };
     } else {
       const reading = context.readNumber(key, text);
-      value = reading.ok ? { status: "value", value: reading.value } : { status: "error", reason: reading.reason };
+      value = reading.ok
+        ? { status: "value", value: reading.value }
+        : { status: "error", reason: reading.reason };
     }
     results.set(key, value);
     return value;
@@ -179,7 +197,11 @@ export function evaluateRow(context: RowFormulaContext): Map<string, RowCellValu
   const resolveReference = (fromKey: string, name: string): ReferenceResolution => {
     const key = name.toLowerCase();
     if (!context.isColumn(key)) {
-      return { ok: false, reason: `unknown name "${name}"; refer to other columns of the row by their column key`, unknownName: true };
+      return {
+        ok: false,
+        reason: `unknown name "${name}"; refer to other columns of the row by their column key`,
+        unknownName: true,
+      };
     }
     if (!context.isNumberColumn(key)) {
       return { ok: false, reason: `${key} is not a number column and cannot be used in a formula` };
@@ -199,7 +221,8 @@ export function evaluateRow(context: RowFormulaContext): Map<string, RowCellValu
       return { ok: false, reason: `refers to ${key}, which is blank` };
     }
     const cycleReason = circular.get(key);
-    if (cycleReason !== undefined && circular.has(fromKey)) return { ok: false, reason: cycleReason, circular: true };
+    if (cycleReason !== undefined && circular.has(fromKey))
+      return { ok: false, reason: cycleReason, circular: true };
     return { ok: false, reason: `refers to ${key}, which has an error (${referenced.reason})` };
   };
 

@@ -46,7 +46,10 @@ export interface AssemblyUse {
 const FACADE_LABEL: Record<Facade, string> = { front: "Front", left: "Left", back: "Back", right: "Right" };
 
 function layers(baseId: string, cavityR: number, continuousR: number, cavityWord: string): string {
-  const added = [cavityR > 0 ? `R-${cavityR} ${cavityWord}` : "", continuousR > 0 ? `R-${continuousR} continuous` : ""].filter(Boolean);
+  const added = [
+    cavityR > 0 ? `R-${cavityR} ${cavityWord}` : "",
+    continuousR > 0 ? `R-${continuousR} continuous` : "",
+  ].filter(Boolean);
   return added.length > 0 ? `${baseId} + ${added.join(" + ")}` : `${baseId}, no added insulation`;
 }
 
@@ -73,8 +76,24 @@ function construction(
 }
 
 /** A direct value the engine does not use: listed so an entered number never disappears silently. */
-function unused(name: string, directKey: string, value: number, unit: AssemblyUse["unit"], reason: string): AssemblyUse {
-  return { name, appliesTo: "—", directKey, source: "direct", description: unit === U_FACTOR_UNIT ? "direct U-factor" : "direct F-factor", unit, heating: value, cooling: null, notUsed: reason };
+function unused(
+  name: string,
+  directKey: string,
+  value: number,
+  unit: AssemblyUse["unit"],
+  reason: string,
+): AssemblyUse {
+  return {
+    name,
+    appliesTo: "—",
+    directKey,
+    source: "direct",
+    description: unit === U_FACTOR_UNIT ? "direct U-factor" : "direct F-factor",
+    unit,
+    heating: value,
+    cooling: null,
+    notUsed: reason,
+  };
 }
 
 /** Every opaque assembly the plan has, with the U-factor (slab: F-factor) the engine uses. */
@@ -85,25 +104,71 @@ export function planAssemblies(plan: PlanInput): AssemblyUse[] {
   const ownWall = FACADES.filter((facade) => plan.facades[facade].wall !== undefined);
   const planWallFacades = FACADES.filter((facade) => plan.facades[facade].wall === undefined);
   const planWallUse = [
-    planWallFacades.length > 0 ? `${planWallFacades.join(", ")} ${planWallFacades.length === 1 ? "facade" : "facades"}` : "",
+    planWallFacades.length > 0
+      ? `${planWallFacades.join(", ")} ${planWallFacades.length === 1 ? "facade" : "facades"}`
+      : "",
     plan.garage.wallAreaFt2 > 0 ? "wall to garage" : "",
   ].filter(Boolean);
   if (planWallUse.length > 0) {
-    rows.push(construction("Walls", planWallUse.join("; "), "wall_u", plan.wall, wallU(plan.wall, "heating"), wallU(plan.wall, "cooling")));
+    rows.push(
+      construction(
+        "Walls",
+        planWallUse.join("; "),
+        "wall_u",
+        plan.wall,
+        wallU(plan.wall, "heating"),
+        wallU(plan.wall, "cooling"),
+      ),
+    );
   } else if (plan.wall.uFactor !== undefined) {
-    rows.push(unused("Walls", "wall_u", plan.wall.uFactor, U_FACTOR_UNIT, "every facade has its own wall and there is no wall to a garage"));
+    rows.push(
+      unused(
+        "Walls",
+        "wall_u",
+        plan.wall.uFactor,
+        U_FACTOR_UNIT,
+        "every facade has its own wall and there is no wall to a garage",
+      ),
+    );
   }
   for (const facade of ownWall) {
     const wall = plan.facades[facade].wall!;
-    rows.push(construction(`${FACADE_LABEL[facade]} facade wall`, `${facade} facade`, `${facade}_wall_u`, wall, wallU(wall, "heating"), wallU(wall, "cooling")));
+    rows.push(
+      construction(
+        `${FACADE_LABEL[facade]} facade wall`,
+        `${facade} facade`,
+        `${facade}_wall_u`,
+        wall,
+        wallU(wall, "heating"),
+        wallU(wall, "cooling"),
+      ),
+    );
   }
 
   // Attic: the ceiling under it; an encapsulated attic's insulated roof deck.
   const attic = plan.attic;
   if (attic.kind !== "none") {
-    rows.push(construction("Ceiling under the attic", `${attic.kind} attic`, "ceiling_u", attic.ceiling, ceilingU(attic.ceiling, "heating"), ceilingU(attic.ceiling, "cooling"), "insulation"));
+    rows.push(
+      construction(
+        "Ceiling under the attic",
+        `${attic.kind} attic`,
+        "ceiling_u",
+        attic.ceiling,
+        ceilingU(attic.ceiling, "heating"),
+        ceilingU(attic.ceiling, "cooling"),
+        "insulation",
+      ),
+    );
   } else if (attic.ceiling.uFactor !== undefined) {
-    rows.push(unused("Ceiling under the attic", "ceiling_u", attic.ceiling.uFactor, U_FACTOR_UNIT, "the plan has no attic"));
+    rows.push(
+      unused(
+        "Ceiling under the attic",
+        "ceiling_u",
+        attic.ceiling.uFactor,
+        U_FACTOR_UNIT,
+        "the plan has no attic",
+      ),
+    );
   }
   if (attic.kind === "encapsulated") {
     rows.push(
@@ -117,7 +182,17 @@ export function planAssemblies(plan: PlanInput): AssemblyUse[] {
       ),
     );
   } else if (attic.roofDeck.uFactor !== undefined) {
-    rows.push(unused("Roof deck", "roof_deck_u", attic.roofDeck.uFactor, U_FACTOR_UNIT, attic.kind === "vented" ? "a vented attic's roof deck is not insulated (the ceiling carries the insulation)" : "the plan has no attic"));
+    rows.push(
+      unused(
+        "Roof deck",
+        "roof_deck_u",
+        attic.roofDeck.uFactor,
+        U_FACTOR_UNIT,
+        attic.kind === "vented"
+          ? "a vented attic's roof deck is not insulated (the ceiling carries the insulation)"
+          : "the plan has no attic",
+      ),
+    );
   }
 
   const vaulted = plan.vaultedCeiling;
@@ -133,7 +208,15 @@ export function planAssemblies(plan: PlanInput): AssemblyUse[] {
       ),
     );
   } else if (vaulted.construction.uFactor !== undefined) {
-    rows.push(unused("Vaulted ceiling", "vaulted_u", vaulted.construction.uFactor, U_FACTOR_UNIT, "the vaulted ceiling area is 0"));
+    rows.push(
+      unused(
+        "Vaulted ceiling",
+        "vaulted_u",
+        vaulted.construction.uFactor,
+        U_FACTOR_UNIT,
+        "the vaulted ceiling area is 0",
+      ),
+    );
   }
 
   // Floors.
@@ -142,27 +225,84 @@ export function planAssemblies(plan: PlanInput): AssemblyUse[] {
   if (floorOverFoundation && f.floorAreaFt2 > 0) {
     // The engine takes no cooling credit or gain through the floor over an unconditioned basement.
     const cooling = f.kind === "vented-crawlspace" ? floorU(f.floor, "still-air", "cooling") : null;
-    rows.push(construction("Floor over the foundation", `${f.floorAreaFt2} ft² over the ${f.kind}`, "foundation_floor_u", f.floor, floorU(f.floor, "still-air", "heating"), cooling));
+    rows.push(
+      construction(
+        "Floor over the foundation",
+        `${f.floorAreaFt2} ft² over the ${f.kind}`,
+        "foundation_floor_u",
+        f.floor,
+        floorU(f.floor, "still-air", "heating"),
+        cooling,
+      ),
+    );
   } else if (f.floor.uFactor !== undefined) {
-    rows.push(unused("Floor over the foundation", "foundation_floor_u", f.floor.uFactor, U_FACTOR_UNIT, floorOverFoundation ? "the floor area is 0" : `a ${f.kind} foundation has no framed floor over unconditioned space`));
+    rows.push(
+      unused(
+        "Floor over the foundation",
+        "foundation_floor_u",
+        f.floor.uFactor,
+        U_FACTOR_UNIT,
+        floorOverFoundation
+          ? "the floor area is 0"
+          : `a ${f.kind} foundation has no framed floor over unconditioned space`,
+      ),
+    );
   }
   const outdoors = plan.floorOverOutdoors;
   if (outdoors.areaFt2 > 0) {
-    rows.push(construction("Floor over outdoors", `${outdoors.areaFt2} ft²`, "floor_over_outdoors_u", outdoors.construction, floorU(outdoors.construction, "outdoors", "heating"), floorU(outdoors.construction, "outdoors", "cooling")));
+    rows.push(
+      construction(
+        "Floor over outdoors",
+        `${outdoors.areaFt2} ft²`,
+        "floor_over_outdoors_u",
+        outdoors.construction,
+        floorU(outdoors.construction, "outdoors", "heating"),
+        floorU(outdoors.construction, "outdoors", "cooling"),
+      ),
+    );
   } else if (outdoors.construction.uFactor !== undefined) {
-    rows.push(unused("Floor over outdoors", "floor_over_outdoors_u", outdoors.construction.uFactor, U_FACTOR_UNIT, "the floor area is 0"));
+    rows.push(
+      unused(
+        "Floor over outdoors",
+        "floor_over_outdoors_u",
+        outdoors.construction.uFactor,
+        U_FACTOR_UNIT,
+        "the floor area is 0",
+      ),
+    );
   }
   const garage = plan.garage;
   if (garage.floorOverAreaFt2 > 0) {
-    rows.push(construction("Floor over the garage", `${garage.floorOverAreaFt2} ft²`, "floor_over_garage_u", garage.floorOver, floorU(garage.floorOver, "still-air", "heating"), floorU(garage.floorOver, "still-air", "cooling")));
+    rows.push(
+      construction(
+        "Floor over the garage",
+        `${garage.floorOverAreaFt2} ft²`,
+        "floor_over_garage_u",
+        garage.floorOver,
+        floorU(garage.floorOver, "still-air", "heating"),
+        floorU(garage.floorOver, "still-air", "cooling"),
+      ),
+    );
   } else if (garage.floorOver.uFactor !== undefined) {
-    rows.push(unused("Floor over the garage", "floor_over_garage_u", garage.floorOver.uFactor, U_FACTOR_UNIT, "the floor area is 0"));
+    rows.push(
+      unused(
+        "Floor over the garage",
+        "floor_over_garage_u",
+        garage.floorOver.uFactor,
+        U_FACTOR_UNIT,
+        "the floor area is 0",
+      ),
+    );
   }
 
   // Foundation walls: a basement's or a conditioned crawlspace's (not a slab's or a vented crawlspace's).
-  const hasFoundationWalls = f.kind === "conditioned-basement" || f.kind === "conditioned-crawlspace" || f.kind === "unconditioned-basement";
+  const hasFoundationWalls =
+    f.kind === "conditioned-basement" ||
+    f.kind === "conditioned-crawlspace" ||
+    f.kind === "unconditioned-basement";
   const direct = f.foundationWallUFactor;
-  const insulation = f.foundationWallInsulationR > 0 ? `R-${f.foundationWallInsulationR} continuous` : "uninsulated";
+  const insulation =
+    f.foundationWallInsulationR > 0 ? `R-${f.foundationWallInsulationR} continuous` : "uninsulated";
   const aboveArea = f.foundationWallAboveGradeAreaFt2;
   const belowArea = f.foundationWallAreaFt2 - aboveArea;
   const conditioned = f.kind !== "unconditioned-basement";
@@ -180,7 +320,9 @@ export function planAssemblies(plan: PlanInput): AssemblyUse[] {
         description: direct !== undefined ? "direct U-factor" : `8 in concrete, ${insulation}`,
         unit: U_FACTOR_UNIT,
         heating: direct ?? aboveGradeFoundationWallU(f.foundationWallInsulationR, "heating"),
-        cooling: conditioned ? (direct ?? aboveGradeFoundationWallU(f.foundationWallInsulationR, "cooling")) : null,
+        cooling: conditioned
+          ? (direct ?? aboveGradeFoundationWallU(f.foundationWallInsulationR, "cooling"))
+          : null,
       });
     }
     if (belowArea > 0) {
@@ -189,7 +331,10 @@ export function planAssemblies(plan: PlanInput): AssemblyUse[] {
         appliesTo: `${belowArea} ft², ${f.foundationWallDepthBelowGradeFt} ft deep${role}`,
         directKey: "foundation_wall_u",
         source: direct !== undefined ? "direct" : "assembly",
-        description: direct !== undefined ? "direct U-factor (soil included)" : `8 in concrete, ${insulation}, soil path`,
+        description:
+          direct !== undefined
+            ? "direct U-factor (soil included)"
+            : `8 in concrete, ${insulation}, soil path`,
         unit: U_FACTOR_UNIT,
         heating: direct ?? belowGradeWallU(f.foundationWallInsulationR, f.foundationWallDepthBelowGradeFt),
         cooling: null,

@@ -64,7 +64,10 @@ function firstLineSeparators(text: string): { comma: number; semicolon: number; 
 /** Reads CSV text: the first record is the header; records keep their 1-based numbers. */
 export function readCsv(text: string): RawTable {
   const withoutBom = text.replace(/^\uFEFF/, "");
-  if (withoutBom.includes("\u0000")) throw new TableFileError("the file is not text (it holds NUL bytes): is it a workbook or another binary file saved as .csv?");
+  if (withoutBom.includes("\u0000"))
+    throw new TableFileError(
+      "the file is not text (it holds NUL bytes): is it a workbook or another binary file saved as .csv?",
+    );
   // Semicolon- or tab-separated files are refused rather than guessed: such files often write
   // decimals with commas ("12,5"), which would silently read as other numbers.
   const separators = firstLineSeparators(withoutBom);
@@ -109,7 +112,8 @@ function xlsxCellText(cell: ExcelJS.Cell): string {
       // The spreadsheet program's computed result is what the user saw; without one, hand
       // the formula to our own evaluator.
       const result = value.result;
-      if (result === undefined || result === null) return "formula" in value && value.formula ? `=${value.formula}` : "";
+      if (result === undefined || result === null)
+        return "formula" in value && value.formula ? `=${value.formula}` : "";
       if (typeof result === "object" && "error" in result) return String(result.error);
       if (result instanceof Date) return result.toISOString().slice(0, 10);
       return String(result);
@@ -123,13 +127,15 @@ function xlsxCellText(cell: ExcelJS.Cell): string {
 function headerCells(sheet: ExcelJS.Worksheet): string[] {
   const headerRow = sheet.getRow(1);
   const headers: string[] = [];
-  for (let column = 1; column <= sheet.columnCount; column += 1) headers.push(xlsxCellText(headerRow.getCell(column)).trim());
+  for (let column = 1; column <= sheet.columnCount; column += 1)
+    headers.push(xlsxCellText(headerRow.getCell(column)).trim());
   while (headers.length > 0 && headers[headers.length - 1] === "") headers.pop();
   return headers;
 }
 
 /** An XLSX file is a zip archive: it starts with the zip signature "PK\x03\x04". */
-const isZip = (bytes: Uint8Array) => bytes.byteLength >= 4 && bytes[0] === 0x50 && bytes[1] === 0x4b && bytes[2] === 0x03 && bytes[3] === 0x04;
+const isZip = (bytes: Uint8Array) =>
+  bytes.byteLength >= 4 && bytes[0] === 0x50 && bytes[1] === 0x4b && bytes[2] === 0x03 && bytes[3] === 0x04;
 
 const NOT_XLSX = "not a readable XLSX workbook";
 
@@ -142,21 +148,37 @@ export async function readXlsx(data: ArrayBuffer | Uint8Array, sheetName?: strin
   const workbook = new ExcelJS.Workbook();
   const bytes = data instanceof Uint8Array ? data : new Uint8Array(data);
   if (!isZip(bytes)) {
-    const looksLikeText = bytes.byteLength > 0 && !bytes.subarray(0, 512).includes(0) && /[,;\t]/.test(new TextDecoder().decode(bytes.subarray(0, 512)));
-    throw new TableFileError(`the file is ${NOT_XLSX}${looksLikeText ? " (it looks like CSV text: save it with the .csv extension)" : " (an .xlsx file is a zip archive and this one is not)"}`);
+    const looksLikeText =
+      bytes.byteLength > 0 &&
+      !bytes.subarray(0, 512).includes(0) &&
+      /[,;\t]/.test(new TextDecoder().decode(bytes.subarray(0, 512)));
+    throw new TableFileError(
+      `the file is ${NOT_XLSX}${looksLikeText ? " (it looks like CSV text: save it with the .csv extension)" : " (an .xlsx file is a zip archive and this one is not)"}`,
+    );
   }
   try {
     // exceljs' typings want a Node Buffer; a Uint8Array view over the same bytes works.
-    await workbook.xlsx.load(Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength) as unknown as ExcelJS.Buffer);
+    await workbook.xlsx.load(
+      Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength) as unknown as ExcelJS.Buffer,
+    );
   } catch {
-    throw new TableFileError(`the file is ${NOT_XLSX} (it is damaged, password-protected or another kind of zip archive); save it again from the spreadsheet program as .xlsx or .csv`);
+    throw new TableFileError(
+      `the file is ${NOT_XLSX} (it is damaged, password-protected or another kind of zip archive); save it again from the spreadsheet program as .xlsx or .csv`,
+    );
   }
   const sheet = sheetName ? workbook.getWorksheet(sheetName) : workbook.worksheets[0];
-  if (!sheet) throw new TableFileError(sheetName ? `the workbook has no sheet named "${sheetName}"` : "the workbook has no sheets");
-  const otherSheets = workbook.worksheets.filter((other) => other !== sheet).map((other) => ({ name: other.name, headers: headerCells(other) }));
+  if (!sheet)
+    throw new TableFileError(
+      sheetName ? `the workbook has no sheet named "${sheetName}"` : "the workbook has no sheets",
+    );
+  const otherSheets = workbook.worksheets
+    .filter((other) => other !== sheet)
+    .map((other) => ({ name: other.name, headers: headerCells(other) }));
   const headers = headerCells(sheet);
   if (headers.length === 0) {
-    const withData = otherSheets.filter((other) => other.headers.length > 0).map((other) => `"${other.name}"`);
+    const withData = otherSheets
+      .filter((other) => other.headers.length > 0)
+      .map((other) => `"${other.name}"`);
     throw new TableFileError(
       `the first row of the sheet "${sheet.name}" is empty: a header row is needed${withData.length > 0 ? `; the data looks to be on the sheet ${withData.join(" or ")} — move that sheet first, or save it alone` : ""}`,
     );
@@ -166,7 +188,8 @@ export async function readXlsx(data: ArrayBuffer | Uint8Array, sheetName?: strin
   for (let rowNumber = 2; rowNumber <= sheet.rowCount; rowNumber += 1) {
     const row = sheet.getRow(rowNumber);
     const cells: string[] = [];
-    for (let column = 1; column <= Math.max(columnCount, headers.length); column += 1) cells.push(xlsxCellText(row.getCell(column)));
+    for (let column = 1; column <= Math.max(columnCount, headers.length); column += 1)
+      cells.push(xlsxCellText(row.getCell(column)));
     rows.push({ rowNumber, cells });
   }
   return { headers, rows, sheetName: sheet.name, otherSheets };
@@ -177,7 +200,8 @@ export async function readTableFile(fileName: string, data: Uint8Array): Promise
   const lower = fileName.toLowerCase();
   if (lower.endsWith(".csv")) return readCsv(new TextDecoder("utf-8").decode(data));
   if (lower.endsWith(".xlsx")) return readXlsx(data);
-  if (lower.endsWith(".xls")) throw new TableFileError("old .xls workbooks are not read; save the sheet as .xlsx or .csv");
+  if (lower.endsWith(".xls"))
+    throw new TableFileError("old .xls workbooks are not read; save the sheet as .xlsx or .csv");
   throw new TableFileError(`"${fileName}" is neither .csv nor .xlsx`);
 }
 
@@ -187,11 +211,21 @@ export async function readTableFile(fileName: string, data: Uint8Array): Promise
  * With `bom` (default true) the text starts with a UTF-8 byte-order mark so that spreadsheet
  * programs read "ft²" and "°F" as UTF-8; readCsv drops it again.
  */
-export function writeCsv(headers: readonly string[], rows: readonly (readonly OutputCell[])[], options: { bom?: boolean } = {}): string {
+export function writeCsv(
+  headers: readonly string[],
+  rows: readonly (readonly OutputCell[])[],
+  options: { bom?: boolean } = {},
+): string {
   const bom = options.bom === false ? "" : "\uFEFF";
-  return bom + Papa.unparse(
-    { fields: [...headers], data: rows.map((row) => row.map((cell) => (cell === undefined ? null : cell))) },
-    { escapeFormulae: FORMULA_TRIGGER, newline: "\r\n" },
+  return (
+    bom +
+    Papa.unparse(
+      {
+        fields: [...headers],
+        data: rows.map((row) => row.map((cell) => (cell === undefined ? null : cell))),
+      },
+      { escapeFormulae: FORMULA_TRIGGER, newline: "\r\n" },
+    )
   );
 }
 
@@ -218,7 +252,9 @@ export async function writeXlsx(
     workbook.created = options.fixedTimestamp;
     workbook.modified = options.fixedTimestamp;
   }
-  const sheet = workbook.addWorksheet(options.sheetName ?? "Sheet1", { views: [{ state: "frozen", ySplit: 1 }] });
+  const sheet = workbook.addWorksheet(options.sheetName ?? "Sheet1", {
+    views: [{ state: "frozen", ySplit: 1 }],
+  });
   const header = sheet.addRow([...headers]);
   header.font = { bold: true };
   for (const row of rows) {
@@ -230,7 +266,8 @@ export async function writeXlsx(
     });
   }
   headers.forEach((text, index) => {
-    sheet.getColumn(index + 1).width = options.columnWidths?.[index] ?? Math.min(40, Math.max(10, text.length + 2));
+    sheet.getColumn(index + 1).width =
+      options.columnWidths?.[index] ?? Math.min(40, Math.max(10, text.length + 2));
   });
   const buffer = await workbook.xlsx.writeBuffer();
   if (!options.fixedTimestamp) return new Uint8Array(buffer as ArrayBuffer);
@@ -243,7 +280,10 @@ export async function writeXlsx(
   const stamped = new JSZip();
   const names = Object.keys(zip.files).filter((name) => !zip.files[name].dir);
   for (const name of names) {
-    stamped.file(name, await zip.files[name].async("uint8array"), { date: options.fixedTimestamp, createFolders: false });
+    stamped.file(name, await zip.files[name].async("uint8array"), {
+      date: options.fixedTimestamp,
+      createFolders: false,
+    });
   }
   return stamped.generateAsync({ type: "uint8array", compression: "DEFLATE" });
 }
@@ -279,7 +319,8 @@ export function placePastedBlock(
   editableKeys: ReadonlySet<string> = new Set(visibleKeys),
 ): { cells: PastedCell[]; droppedCells: number; readOnlyCells: number } {
   const start = visibleKeys.indexOf(startKey);
-  if (start < 0) throw new TableFileError(`the paste starts in "${startKey}", which is not a column of the grid`);
+  if (start < 0)
+    throw new TableFileError(`the paste starts in "${startKey}", which is not a column of the grid`);
   const cells: PastedCell[] = [];
   let droppedCells = 0;
   let readOnlyCells = 0;

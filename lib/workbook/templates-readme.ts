@@ -55,7 +55,7 @@ export function renderTemplatesReadme(): string {
     "- **Every bad cell is reported** with its row, column header and reason, and nothing is imported",
     "  unless every row is good. Plan codes must be unique (case-insensitive).",
     "- **Blank cells** take the default shown below (the engine's own default). Columns marked",
-    "  \"blank (see meaning)\" are left to the engine to compute (for example occupants = bedrooms + 1).",
+    '  "blank (see meaning)" are left to the engine to compute (for example occupants = bedrooms + 1).',
     "- **Direct U-factors**: every wall, ceiling, roof deck, vaulted ceiling, floor and foundation wall has",
     "  a `…_u` column. Filled, it is the whole assembly's U-factor (rated or separately calculated) and",
     "  replaces the base assembly plus added insulation in both seasons; blank, the U-factor is computed",
@@ -94,7 +94,12 @@ export function renderTemplatesReadme(): string {
   for (const group of PLAN_COLUMN_GROUPS) {
     const columns = PLAN_COLUMNS.filter((column) => column.group === group);
     if (columns.length === 0) continue;
-    lines.push(`### ${group}`, "", "| key | header | unit | meaning | default | example |", "|---|---|---|---|---|---|");
+    lines.push(
+      `### ${group}`,
+      "",
+      "| key | header | unit | meaning | default | example |",
+      "|---|---|---|---|---|---|",
+    );
     for (const column of columns) {
       lines.push(
         `| \`${column.key}\` | ${escapeCell(column.header)} | ${escapeCell(unitOf(column))} | ${escapeCell(column.meaning)} | ${defaultOf(column)} | ${column.example ? `\`${escapeCell(column.example)}\`` : ""} |`,
@@ -110,7 +115,10 @@ export function renderTemplatesReadme(): string {
     "",
     "| key | header | unit | meaning |",
     "|---|---|---|---|",
-    ...PLAN_RESULT_COLUMNS.map((column) => `| \`${column.key}\` | ${escapeCell(column.header)} | ${column.unit} | ${escapeCell(column.meaning)} |`),
+    ...PLAN_RESULT_COLUMNS.map(
+      (column) =>
+        `| \`${column.key}\` | ${escapeCell(column.header)} | ${column.unit} | ${escapeCell(column.meaning)} |`,
+    ),
     "",
     "## Not in the table",
     "",

@@ -44,7 +44,14 @@ export type QuantityKind = (typeof QUANTITY_KINDS)[number];
 /** What each kind is, for error messages, headers and the templates README. */
 export const QUANTITY_KIND_INFO: Record<
   QuantityKind,
-  { label: string; unit: string; allowsThousands: boolean; minimum?: number; maximum?: number; integer?: boolean }
+  {
+    label: string;
+    unit: string;
+    allowsThousands: boolean;
+    minimum?: number;
+    maximum?: number;
+    integer?: boolean;
+  }
 > = {
   areaFt2: { label: "area", unit: "ft²", allowsThousands: true, minimum: 0 },
   lengthFt: { label: "length", unit: "ft", allowsThousands: true },
@@ -84,23 +91,73 @@ type UnitToken = {
 const UNIT_TOKENS: readonly UnitToken[] = [
   {
     name: "ft²",
-    spellings: ["sf", "s.f.", "sq ft", "sq. ft.", "sq. ft", "sq.ft.", "sq.ft", "sqft", "ft2", "ft^2", "ft²", "square feet", "square foot", "sq feet"],
+    spellings: [
+      "sf",
+      "s.f.",
+      "sq ft",
+      "sq. ft.",
+      "sq. ft",
+      "sq.ft.",
+      "sq.ft",
+      "sqft",
+      "ft2",
+      "ft^2",
+      "ft²",
+      "square feet",
+      "square foot",
+      "sq feet",
+    ],
     kinds: { areaFt2: 1 },
   },
   { name: "ft", spellings: ["'", "ft", "ft.", "feet", "foot", "′"], kinds: { lengthFt: 1 } },
   // 12 in = 1 ft by definition.
   { name: "in", spellings: ['"', "in", "in.", "inch", "inches", "″"], kinds: { lengthFt: 1 / 12 } },
-  { name: "R", spellings: ["r", "r-value", "r value", "h·ft²·°f/btu", "h-ft2-f/btu", "hr-ft2-f/btu"], kinds: { rValue: 1 } },
-  { name: "U", spellings: ["u", "u-factor", "u factor", "u-value", "btu/h·ft²·°f", "btu/hr-ft2-f", "btu/h-ft2-f"], kinds: { uFactor: 1 } },
+  {
+    name: "R",
+    spellings: ["r", "r-value", "r value", "h·ft²·°f/btu", "h-ft2-f/btu", "hr-ft2-f/btu"],
+    kinds: { rValue: 1 },
+  },
+  {
+    name: "U",
+    spellings: ["u", "u-factor", "u factor", "u-value", "btu/h·ft²·°f", "btu/hr-ft2-f", "btu/h-ft2-f"],
+    kinds: { uFactor: 1 },
+  },
   // "F" alone is read as the F-factor's letter only in an F-factor column (readQuantity); elsewhere it is °F.
-  { name: "F-factor", spellings: ["f-factor", "f factor", "btu/h·ft·°f", "btu/hr-ft-f", "btu/h-ft-f", "btu/h·ft·f"], kinds: { fFactor: 1 } },
+  {
+    name: "F-factor",
+    spellings: ["f-factor", "f factor", "btu/h·ft·°f", "btu/hr-ft-f", "btu/h-ft-f", "btu/h·ft·f"],
+    kinds: { fFactor: 1 },
+  },
   { name: "SHGC", spellings: ["shgc"], kinds: { shgc: 1 } },
-  { name: "ACH50", spellings: ["ach50", "ach 50", "ach@50", "ach @ 50", "ach@50pa", "ach50 pa"], kinds: { ach50: 1 } },
+  {
+    name: "ACH50",
+    spellings: ["ach50", "ach 50", "ach@50", "ach @ 50", "ach@50pa", "ach50 pa"],
+    kinds: { ach50: 1 },
+  },
   { name: "CFM50", spellings: ["cfm50", "cfm 50", "cfm@50", "cfm @ 50", "cfm@50pa"], kinds: { cfm50: 1 } },
   { name: "cfm", spellings: ["cfm", "ft3/min", "ft³/min"], kinds: { cfm: 1 } },
   // Square inches are read only as a leakage area; ft² is not converted into one (rejected with the reason).
-  { name: "in²", spellings: ["in2", "in^2", "in²", "sq in", "sq. in.", "sq. in", "sqin", "square inches", "square inch", "ela"], kinds: { leakageAreaIn2: 1 } },
-  { name: "°F", spellings: ["°f", "f", "deg f", "degf", "º f", "ºf", "° f", "degrees f", "fahrenheit"], kinds: { temperatureF: 1, temperatureDifferenceF: 1 } },
+  {
+    name: "in²",
+    spellings: [
+      "in2",
+      "in^2",
+      "in²",
+      "sq in",
+      "sq. in.",
+      "sq. in",
+      "sqin",
+      "square inches",
+      "square inch",
+      "ela",
+    ],
+    kinds: { leakageAreaIn2: 1 },
+  },
+  {
+    name: "°F",
+    spellings: ["°f", "f", "deg f", "degf", "º f", "ºf", "° f", "degrees f", "fahrenheit"],
+    kinds: { temperatureF: 1, temperatureDifferenceF: 1 },
+  },
   { name: "%", spellings: ["%", "pct", "percent"], kinds: { percent: 1, fraction: 0.01 } },
   { name: "Btu/h", spellings: ["btu/h", "btuh", "btu/hr", "btu/hour", "btu"], kinds: { btuh: 1 } },
   { name: "°", spellings: ["°", "deg", "degrees", "º"], kinds: { degrees: 1 } },
@@ -109,14 +166,58 @@ const UNIT_TOKENS: readonly UnitToken[] = [
     spellings: ["ft3", "ft^3", "ft³", "cu ft", "cu. ft.", "cu.ft.", "cuft", "cf", "cubic feet", "cubic foot"],
     kinds: { volumeFt3: 1 },
   },
-  { name: "in per 12 in", spellings: ["/12", ":12", "in 12", "in/12", "in/ft", "in 12 in", "in/12 in", "in:12"], kinds: { pitchIn12: 1 } },
+  {
+    name: "in per 12 in",
+    spellings: ["/12", ":12", "in 12", "in/12", "in/ft", "in 12 in", "in/12 in", "in:12"],
+    kinds: { pitchIn12: 1 },
+  },
 ];
 
 // Units we recognise but do not convert, so the message can say so instead of "junk".
 const METRIC_SPELLINGS: readonly string[] = [
-  "m2", "m²", "m^2", "m3", "m³", "m^3", "l", "sq m", "sqm", "square meters", "square metres", "m", "cm", "mm", "meter", "meters", "metre", "metres",
-  "rsi", "w/m2k", "w/m²k", "w/m2·k", "w/m²·k", "w/(m2·k)", "w/(m²·k)", "w/m2-k", "m2k/w", "m²k/w", "m²·k/w",
-  "l/s", "m3/h", "m³/h", "m3/s", "m³/s", "°c", "c", "deg c", "degc", "ºc", "° c", "k", "w", "kw",
+  "m2",
+  "m²",
+  "m^2",
+  "m3",
+  "m³",
+  "m^3",
+  "l",
+  "sq m",
+  "sqm",
+  "square meters",
+  "square metres",
+  "m",
+  "cm",
+  "mm",
+  "meter",
+  "meters",
+  "metre",
+  "metres",
+  "rsi",
+  "w/m2k",
+  "w/m²k",
+  "w/m2·k",
+  "w/m²·k",
+  "w/(m2·k)",
+  "w/(m²·k)",
+  "w/m2-k",
+  "m2k/w",
+  "m²k/w",
+  "m²·k/w",
+  "l/s",
+  "m3/h",
+  "m³/h",
+  "m3/s",
+  "m³/s",
+  "°c",
+  "c",
+  "deg c",
+  "degc",
+  "ºc",
+  "° c",
+  "k",
+  "w",
+  "kw",
 ];
 
 // Prefix forms that read naturally before the number ("R-19", "U-0.30", "SHGC 0.25", "ACH50 3").
@@ -156,12 +257,18 @@ function readPlainNumber(text: string, kind: QuantityKind): NumberRead {
   const match = NUMBER_PATTERN.exec(text);
   if (!match || (match[2] === "" && match[3] === undefined)) {
     if (/^[+-]?\d+,\d+/.test(text) || /^[+-]?\d{1,3}(\.\d{3})+,\d+$/.test(text)) {
-      return { ok: false, reason: `"${text}" has a comma we cannot read unambiguously (a decimal comma?); write the number with a decimal point, e.g. 1250 or 0.30` };
+      return {
+        ok: false,
+        reason: `"${text}" has a comma we cannot read unambiguously (a decimal comma?); write the number with a decimal point, e.g. 1250 or 0.30`,
+      };
     }
     return { ok: false, reason: `"${text}" is not a number` };
   }
   if (match[2].includes(",") && !QUANTITY_KIND_INFO[kind].allowsThousands) {
-    return { ok: false, reason: `"${text}": a thousands separator is not expected in ${describeKind(kind)} and could be a decimal comma; write it without the comma` };
+    return {
+      ok: false,
+      reason: `"${text}": a thousands separator is not expected in ${describeKind(kind)} and could be a decimal comma; write it without the comma`,
+    };
   }
   const value = Number(text.replace(/,/g, ""));
   if (!Number.isFinite(value)) return { ok: false, reason: `"${text}" is not a finite number` };
@@ -173,14 +280,23 @@ export function checkKindRange(value: number, kind: QuantityKind): UnitReadResul
   const info = QUANTITY_KIND_INFO[kind];
   if (!Number.isFinite(value)) return { ok: false, reason: "is not a finite number" };
   if (info.integer && !Number.isInteger(value)) {
-    return { ok: false, reason: `${value} is not a whole number; ${describeKind(kind)} must be a whole number` };
+    return {
+      ok: false,
+      reason: `${value} is not a whole number; ${describeKind(kind)} must be a whole number`,
+    };
   }
   if (info.minimum !== undefined && value < info.minimum) {
-    return { ok: false, reason: `${value} is negative; ${describeKind(kind)} cannot be below ${info.minimum}` };
+    return {
+      ok: false,
+      reason: `${value} is negative; ${describeKind(kind)} cannot be below ${info.minimum}`,
+    };
   }
   if (info.maximum !== undefined && value > info.maximum) {
     const hint = kind === "fraction" ? ` (write 70% or 0.70, not 70)` : "";
-    return { ok: false, reason: `${value} is above ${info.maximum}; ${describeKind(kind)} must be between ${info.minimum ?? "-∞"} and ${info.maximum}${hint}` };
+    return {
+      ok: false,
+      reason: `${value} is above ${info.maximum}; ${describeKind(kind)} must be between ${info.minimum ?? "-∞"} and ${info.maximum}${hint}`,
+    };
   }
   return { ok: true, value };
 }
@@ -200,7 +316,10 @@ export function readQuantity(text: string, kind: QuantityKind): UnitReadResult {
   const raw = text.trim().replace(/\u2212/g, "-"); // U+2212 minus sign, as pasted from documents
   if (raw === "") return { ok: false, reason: "is blank" };
   if (/^\d{4}-\d{2}-\d{2}(?:T[\d:.]+Z?)?$/.test(raw)) {
-    return { ok: false, reason: `"${raw}" is a date: the spreadsheet program may have turned an entry such as 6/12 into a date; format the cell as text or enter a plain number` };
+    return {
+      ok: false,
+      reason: `"${raw}" is a date: the spreadsheet program may have turned an entry such as 6/12 into a date; format the cell as text or enter a plain number`,
+    };
   }
 
   if (kind === "lengthFt") {
@@ -213,13 +332,18 @@ export function readQuantity(text: string, kind: QuantityKind): UnitReadResult {
   // Split into number and unit: either "<unit> <number>" (R-19, U-0.30) or "<number> <unit>".
   let numberText = raw;
   let unitText = "";
-  const prefix = PREFIX_PATTERN.exec(raw) ?? (kind === "fFactor" ? /^(f)\s*(?:-|=|:|\s)?\s*(.+)$/i.exec(raw) : null);
+  const prefix =
+    PREFIX_PATTERN.exec(raw) ?? (kind === "fFactor" ? /^(f)\s*(?:-|=|:|\s)?\s*(.+)$/i.exec(raw) : null);
   if (prefix && /^[+-]?[\d.,]/.test(prefix[2])) {
     unitText = prefix[1];
     numberText = prefix[2].trim();
   } else {
     const suffix = /^([+-]?[\d.,]*\d(?:[eE][+-]?\d+)?)\s*(.*)$/.exec(raw);
-    if (!suffix) return { ok: false, reason: `"${raw}" is not a number${kind === "count" ? "" : ` in ${QUANTITY_KIND_INFO[kind].unit}`}` };
+    if (!suffix)
+      return {
+        ok: false,
+        reason: `"${raw}" is not a number${kind === "count" ? "" : ` in ${QUANTITY_KIND_INFO[kind].unit}`}`,
+      };
     numberText = suffix[1];
     unitText = suffix[2];
   }
@@ -231,16 +355,25 @@ export function readQuantity(text: string, kind: QuantityKind): UnitReadResult {
     const unit = findUnit(unitText);
     if (!unit) {
       if (kind === "ach50" && /^ach$/i.test(unitText.trim())) {
-        return { ok: false, reason: `"ACH" alone could mean natural air changes; write the blower-door figure as ACH50 (air changes per hour at 50 Pa)` };
+        return {
+          ok: false,
+          reason: `"ACH" alone could mean natural air changes; write the blower-door figure as ACH50 (air changes per hour at 50 Pa)`,
+        };
       }
       if (isMetric(unitText)) {
-        return { ok: false, reason: `"${unitText.trim()}" is a metric unit, which is not converted; enter ${describeKind(kind)}` };
+        return {
+          ok: false,
+          reason: `"${unitText.trim()}" is a metric unit, which is not converted; enter ${describeKind(kind)}`,
+        };
       }
       return { ok: false, reason: `"${unitText.trim()}" is not a unit we read for ${describeKind(kind)}` };
     }
     const unitFactor = unit.kinds[kind];
     if (unitFactor === undefined) {
-      return { ok: false, reason: `${unit.name} is a unit of ${kindsOf(unit)}; this column takes ${describeKind(kind)}` };
+      return {
+        ok: false,
+        reason: `${unit.name} is a unit of ${kindsOf(unit)}; this column takes ${describeKind(kind)}`,
+      };
     }
     factor = unitFactor;
   }

@@ -3,7 +3,18 @@
  * recompute 10,000 lots, for each load procedure. Figures are printed, never asserted. A
  * procedure the engine refuses is reported as such (its figures are not faked).
  */
-import { computeFacingLoads, computePlanFacings, LOAD_PROCEDURE_LABELS, LOAD_PROCEDURES, LoadInputError, parsePlanInput, parseSiteConditions, type LoadProcedure, type PlanInput, type SiteConditions } from "../../lib/load";
+import {
+  computeFacingLoads,
+  computePlanFacings,
+  LOAD_PROCEDURE_LABELS,
+  LOAD_PROCEDURES,
+  LoadInputError,
+  parsePlanInput,
+  parseSiteConditions,
+  type LoadProcedure,
+  type PlanInput,
+  type SiteConditions,
+} from "../../lib/load";
 import { CEDAR_BEND_SITE, EXAMPLE_PLANS } from "../../tests/fixtures/engine/example-plans";
 
 export interface ProcedureBenchResult {
@@ -27,35 +38,44 @@ function timeIt(fn: () => void): number {
   return Number(process.hrtime.bigint() - start) / 1e6;
 }
 
-function benchProcedure(procedure: LoadProcedure, plans: PlanInput[], site: SiteConditions): ProcedureBenchResult & { sink: number } {
+function benchProcedure(
+  procedure: LoadProcedure,
+  plans: PlanInput[],
+  site: SiteConditions,
+): ProcedureBenchResult & { sink: number } {
   const options = { validated: true, procedure } as const;
   let sink = 0;
 
   // Warm-up (JIT), not timed.
-  for (let i = 0; i < 2000; i++) sink += computeFacingLoads(plans[i % 3], site, (i * 7) % 360, options).cooling.totalBtuh;
+  for (let i = 0; i < 2000; i++)
+    sink += computeFacingLoads(plans[i % 3], site, (i * 7) % 360, options).cooling.totalBtuh;
 
   // 1. Warm: plan and site prepared once (the bulk-recompute case); each call is one plan-facing.
   const warmN = 60_000;
   const warmMs = timeIt(() => {
-    for (let i = 0; i < warmN; i++) sink += computeFacingLoads(plans[i % 3], site, (i * 15) % 360, options).cooling.totalBtuh;
+    for (let i = 0; i < warmN; i++)
+      sink += computeFacingLoads(plans[i % 3], site, (i * 15) % 360, options).cooling.totalBtuh;
   });
 
   // 2. Cold: a fresh plan object each call, so the plan's U-factors, leakage and heating are redone too.
   const coldN = 20_000;
   const coldMs = timeIt(() => {
-    for (let i = 0; i < coldN; i++) sink += computeFacingLoads({ ...plans[i % 3] }, site, (i * 15) % 360, options).cooling.totalBtuh;
+    for (let i = 0; i < coldN; i++)
+      sink += computeFacingLoads({ ...plans[i % 3] }, site, (i * 15) % 360, options).cooling.totalBtuh;
   });
 
   // 3. Plan library: a fresh plan each time, all four facings (front to N, E, S, W) = 4 plan-facings.
   const libraryN = 10_000;
   const libraryMs = timeIt(() => {
-    for (let i = 0; i < libraryN; i++) sink += computePlanFacings({ ...plans[i % 3] }, site, options).worst.coolingTotalBtuh;
+    for (let i = 0; i < libraryN; i++)
+      sink += computePlanFacings({ ...plans[i % 3] }, site, options).worst.coolingTotalBtuh;
   });
 
   // 4. 10,000 lots: three models spread over lots at 8 compass facings plus odd angles.
   const lots = Array.from({ length: 10_000 }, (_, i) => ({ plan: plans[i % 3], facingDeg: (i * 37) % 360 }));
   const lotsMs = timeIt(() => {
-    for (const lot of lots) sink += computeFacingLoads(lot.plan, site, lot.facingDeg, options).cooling.totalBtuh;
+    for (const lot of lots)
+      sink += computeFacingLoads(lot.plan, site, lot.facingDeg, options).cooling.totalBtuh;
   });
 
   return {
@@ -81,7 +101,13 @@ export function runEngineBenchmark(): EngineBenchResult {
     try {
       const r = benchProcedure(procedure, plans, site);
       sink += r.sink;
-      procedures.push({ procedure: r.procedure, warmCalcsPerSecond: r.warmCalcsPerSecond, coldCalcsPerSecond: r.coldCalcsPerSecond, libraryCalcsPerSecond: r.libraryCalcsPerSecond, tenThousandLotsMs: r.tenThousandLotsMs });
+      procedures.push({
+        procedure: r.procedure,
+        warmCalcsPerSecond: r.warmCalcsPerSecond,
+        coldCalcsPerSecond: r.coldCalcsPerSecond,
+        libraryCalcsPerSecond: r.libraryCalcsPerSecond,
+        tenThousandLotsMs: r.tenThousandLotsMs,
+      });
       lines.push(
         `    plan-facing calcs/s, plan prepared once : ${fmt(r.warmCalcsPerSecond)}`,
         `    plan-facing calcs/s, plan redone each   : ${fmt(r.coldCalcsPerSecond)}`,
@@ -94,6 +120,9 @@ export function runEngineBenchmark(): EngineBenchResult {
       lines.push(`    not run: the engine refuses it (${error.message})`);
     }
   }
-  lines.push(`  target: ≥ 20,000 plan-facing calcs/s (hourly method); 10,000 lots in < 500 ms`, `  (checksum ${Math.round(sink) % 100000})`);
+  lines.push(
+    `  target: ≥ 20,000 plan-facing calcs/s (hourly method); 10,000 lots in < 500 ms`,
+    `  (checksum ${Math.round(sink) % 100000})`,
+  );
   return { procedures, refused, lines };
 }

@@ -41,15 +41,35 @@ export async function runLotsImportBenchmark(): Promise<{ lines: string[] }> {
   await seedDatabase(db);
   const [account] = await db.select().from(accounts).where(eq(accounts.slug, "marrow-finch"));
   const [user] = await db.select().from(users).where(eq(users.email, "designer@marrowfinch.test"));
-  const codes = (await db.select({ code: plans.planCode }).from(plans).where(eq(plans.accountId, account.id))).map((p) => p.code);
-  const lines = ["", "Lots import (XLSX, end to end on the test MariaDB) vs floor (exceljs read + one bulk insert):"];
+  const codes = (
+    await db.select({ code: plans.planCode }).from(plans).where(eq(plans.accountId, account.id))
+  ).map((p) => p.code);
+  const lines = [
+    "",
+    "Lots import (XLSX, end to end on the test MariaDB) vs floor (exceljs read + one bulk insert):",
+  ];
 
   for (const count of [2000, 10000]) {
-    const rows = Array.from({ length: count }, (_, i) => [`L${i + 1}`, `${i + 1} Bench Street`, codes[i % codes.length], COMPASS[i % 8], "", "planned", ""]);
+    const rows = Array.from({ length: count }, (_, i) => [
+      `L${i + 1}`,
+      `${i + 1} Bench Street`,
+      codes[i % codes.length],
+      COMPASS[i % 8],
+      "",
+      "planned",
+      "",
+    ]);
     const xlsx = await writeXlsx(LOT_HEADERS, rows);
 
     // Floor: exceljs reads the file, then one bulk insert of its rows into a fresh community.
-    const [{ id: floorCommunity }] = await db.insert(communities).values({ accountId: account.id, name: `Floor ${count}`, conditions: (await db.select().from(communities).limit(1))[0].conditions }).$returningId();
+    const [{ id: floorCommunity }] = await db
+      .insert(communities)
+      .values({
+        accountId: account.id,
+        name: `Floor ${count}`,
+        conditions: (await db.select().from(communities).limit(1))[0].conditions,
+      })
+      .$returningId();
     const f0 = performance.now();
     const workbook = new ExcelJS.Workbook();
     await workbook.xlsx.load(Buffer.from(xlsx) as unknown as ExcelJS.Buffer);
@@ -57,7 +77,13 @@ export async function runLotsImportBenchmark(): Promise<{ lines: string[] }> {
     const values: (typeof lots.$inferInsert)[] = [];
     sheet.eachRow((row, n) => {
       if (n === 1) return;
-      values.push({ accountId: account.id, communityId: floorCommunity, lotNumber: String(row.getCell(1).value), address: String(row.getCell(2).value), facingDeg: "0" });
+      values.push({
+        accountId: account.id,
+        communityId: floorCommunity,
+        lotNumber: String(row.getCell(1).value),
+        address: String(row.getCell(2).value),
+        facingDeg: "0",
+      });
     });
     const fRead = ms(f0);
     await db.transaction(async (tx) => {
@@ -66,15 +92,34 @@ export async function runLotsImportBenchmark(): Promise<{ lines: string[] }> {
     const floorMs = ms(f0);
 
     // End to end.
-    const [{ id: communityId }] = await db.insert(communities).values({ accountId: account.id, name: `Bench ${count}`, conditions: (await db.select().from(communities).limit(1))[0].conditions }).$returningId();
-    const [{ id: importId }] = await db.insert(imports).values({ accountId: account.id, userId: user.id, kind: "lots", communityId, fileName: `bench-${count}.xlsx`, fileSizeBytes: xlsx.byteLength, state: "received" }).$returningId();
+    const [{ id: communityId }] = await db
+      .insert(communities)
+      .values({
+        accountId: account.id,
+        name: `Bench ${count}`,
+        conditions: (await db.select().from(communities).limit(1))[0].conditions,
+      })
+      .$returningId();
+    const [{ id: importId }] = await db
+      .insert(imports)
+      .values({
+        accountId: account.id,
+        userId: user.id,
+        kind: "lots",
+        communityId,
+        fileName: `bench-${count}.xlsx`,
+        fileSizeBytes: xlsx.byteLength,
+        state: "received",
+      })
+      .$returningId();
     global.gc?.();
     const rssBefore = process.memoryUsage().rss;
     let peak = rssBefore;
     const sampler = setInterval(() => (peak = Math.max(peak, process.memoryUsage().rss)), 20);
     const e0 = performance.now();
     const result = await runImportJob({ db, importId, data: xlsx });
-    if (result.state !== "succeeded") throw new Error(`the benchmark import did not succeed: ${JSON.stringify(result)}`);
+    if (result.state !== "succeeded")
+      throw new Error(`the benchmark import did not succeed: ${JSON.stringify(result)}`);
     const endMs = ms(e0);
     clearInterval(sampler);
     peak = Math.max(peak, process.memoryUsage().rss);

@@ -9,8 +9,19 @@ import { readFileSync } from "node:fs";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
 import { loadsFromFacing, selectEquipment } from "../../lib/equipment";
-import { computeFacingLoads, LOAD_PROCEDURES, LoadInputError, parseSiteConditions, type LoadProcedure } from "../../lib/load";
-import { lotReportFromResults, renderLotReportsPdf, systemChoiceFromSelection, type LotReport } from "../../lib/reports";
+import {
+  computeFacingLoads,
+  LOAD_PROCEDURES,
+  LoadInputError,
+  parseSiteConditions,
+  type LoadProcedure,
+} from "../../lib/load";
+import {
+  lotReportFromResults,
+  renderLotReportsPdf,
+  systemChoiceFromSelection,
+  type LotReport,
+} from "../../lib/reports";
 import { catalogForHeatingDesign, validateEquipmentTable } from "../../lib/workbook/equipment-columns";
 import { validatePlanTable } from "../../lib/workbook/plan-columns";
 import { readCsv } from "../../lib/workbook/table-io";
@@ -49,11 +60,20 @@ export function examplePacketReports(lotCount = 100, procedure: LoadProcedure = 
       builderAccountName: "Wrenfield Homes (invented)",
       communityName: "Prairie Lantern (invented)",
       lot: { lotNumber: String(1 + i), address: `${100 + 4 * i} Lantern Way` },
-      plan: { code: plan.planCode, name: plan.planName, revisionNumber: 1 + (i % 3), status: i % 4 === 0 ? "draft" : "approved", input: plan.input },
+      plan: {
+        code: plan.planCode,
+        name: plan.planName,
+        revisionNumber: 1 + (i % 3),
+        status: i % 4 === 0 ? "draft" : "approved",
+        input: plan.input,
+      },
       site: siteRaw,
       loads,
       selection: systemChoiceFromSelection(selection),
-      approval: i % 4 === 0 ? null : { reviewerName: "Morgan Ellery (invented)", credential: "PE", approvedOn: "2026-11-28" },
+      approval:
+        i % 4 === 0
+          ? null
+          : { reviewerName: "Morgan Ellery (invented)", credential: "PE", approvedOn: "2026-11-28" },
       generatedAt,
     });
   });

@@ -17,19 +17,23 @@ export function runRlfBenchmark(): { lines: string[] } {
   const site = parseSiteConditions(CEDAR_BEND_SITE);
   const plans: PlanInput[] = EXAMPLE_PLANS.map((p) => parsePlanInput(p));
   let sink = 0;
-  for (let i = 0; i < 2000; i++) sink += computeResidentialLoadFactorFacing(plans[i % 3], site, (i * 7) % 360).cooling.totalBtuh;
+  for (let i = 0; i < 2000; i++)
+    sink += computeResidentialLoadFactorFacing(plans[i % 3], site, (i * 7) % 360).cooling.totalBtuh;
 
   const warmN = 60_000;
   const warmMs = timeIt(() => {
-    for (let i = 0; i < warmN; i++) sink += computeResidentialLoadFactorFacing(plans[i % 3], site, (i * 15) % 360).cooling.totalBtuh;
+    for (let i = 0; i < warmN; i++)
+      sink += computeResidentialLoadFactorFacing(plans[i % 3], site, (i * 15) % 360).cooling.totalBtuh;
   });
   const coldN = 20_000;
   const coldMs = timeIt(() => {
-    for (let i = 0; i < coldN; i++) sink += computeResidentialLoadFactorFacing({ ...plans[i % 3] }, site, (i * 15) % 360).cooling.totalBtuh;
+    for (let i = 0; i < coldN; i++)
+      sink += computeResidentialLoadFactorFacing({ ...plans[i % 3] }, site, (i * 15) % 360).cooling.totalBtuh;
   });
   const lots = Array.from({ length: 10_000 }, (_, i) => ({ plan: plans[i % 3], facingDeg: (i * 37) % 360 }));
   const lotsMs = timeIt(() => {
-    for (const lot of lots) sink += computeResidentialLoadFactorFacing(lot.plan, site, lot.facingDeg).cooling.totalBtuh;
+    for (const lot of lots)
+      sink += computeResidentialLoadFactorFacing(lot.plan, site, lot.facingDeg).cooling.totalBtuh;
   });
   if (!Number.isFinite(sink)) throw new Error("benchmark produced a non-finite load");
   return {

@@ -5,7 +5,9 @@ test("an admin switches the load procedure; the lots follow; another role only s
   await signInAs(page, "admin@marrowfinch.test");
   await page.getByTestId("main-nav").getByRole("link", { name: "Account" }).click();
   const panel = page.getByTestId("load-procedure");
-  await expect(panel.getByTestId("procedure-in-use")).toContainText("Handbook residential load-factor procedure");
+  await expect(panel.getByTestId("procedure-in-use")).toContainText(
+    "Handbook residential load-factor procedure",
+  );
   await panel.getByLabel(/Hourly design day/).check();
   await panel.getByRole("button", { name: "Use this procedure and recompute lots" }).click();
   await expect(panel.getByTestId("procedure-notice")).toContainText("lots recomputed by the new procedure");
@@ -25,7 +27,12 @@ test("an admin switches the load procedure; the lots follow; another role only s
   // Back to the default for the other tests.
   await signInAs(page, "admin@marrowfinch.test");
   await page.goto("/account");
-  await page.getByTestId("load-procedure").getByLabel(/Handbook residential load-factor/).check();
+  await page
+    .getByTestId("load-procedure")
+    .getByLabel(/Handbook residential load-factor/)
+    .check();
   await page.getByRole("button", { name: "Use this procedure and recompute lots" }).click();
-  await expect(page.getByTestId("procedure-in-use")).toContainText("Handbook residential load-factor procedure");
+  await expect(page.getByTestId("procedure-in-use")).toContainText(
+    "Handbook residential load-factor procedure",
+  );
 });

@@ -14,15 +14,20 @@ interface ApiLot {
   loads: { coolingTotalBtuh: number; heatingBtuh: number };
 }
 
-const lotCell = (page: Page, lotId: number, colId: string) => page.locator(`[row-id="${lotId}"] [col-id="${colId}"]`).first();
+const lotCell = (page: Page, lotId: number, colId: string) =>
+  page.locator(`[row-id="${lotId}"] [col-id="${colId}"]`).first();
 
-test("create a community from a preset, import lots, turn lots, freeze one for permit, download the schedule", async ({ page }, testInfo) => {
+test("create a community from a preset, import lots, turn lots, freeze one for permit, download the schedule", async ({
+  page,
+}, testInfo) => {
   await signInAs(page, "designer@marrowfinch.test");
   await page.getByTestId("main-nav").getByRole("link", { name: "Communities" }).click();
   await page.getByRole("button", { name: "New community" }).click();
   const form = page.getByTestId("conditions-form");
   await form.getByLabel("Start from a climate preset").selectOption("southeast-mixed-humid");
-  await expect(page.getByTestId("preset-caution")).toContainText("Approximate — verify with your local code's design conditions");
+  await expect(page.getByTestId("preset-caution")).toContainText(
+    "Approximate — verify with your local code's design conditions",
+  );
   await expect(form.getByLabel("Heating outdoor dry bulb (°F)")).toHaveValue("23");
   await form.getByLabel("Community name").fill("Fernbrook Phase 2");
   await form.getByLabel("Heating outdoor dry bulb (°F)").fill("22");
@@ -32,13 +37,17 @@ test("create a community from a preset, import lots, turn lots, freeze one for p
   const communityId = Number(/communities\/(\d+)/.exec(page.url())![1]);
 
   // import the demo lots file, with the progress bar to the end
-  await page.locator("#lot-import-file").setInputFiles(path.resolve(__dirname, "../../templates/demo-lots.csv"));
+  await page
+    .locator("#lot-import-file")
+    .setInputFiles(path.resolve(__dirname, "../../templates/demo-lots.csv"));
   await page.getByTestId("lot-import").getByRole("button", { name: "Import" }).click();
   await expect(page.getByTestId("import-progress")).toBeVisible();
   await expect(page.getByTestId("lot-import-result")).toContainText("40 lots created");
   await expect(page.getByTestId("lot-count")).toHaveText("40 lots");
 
-  const lotsNow = async () => ((await (await page.request.get(`/api/communities/${communityId}/lots`)).json()) as { lots: ApiLot[] }).lots;
+  const lotsNow = async () =>
+    ((await (await page.request.get(`/api/communities/${communityId}/lots`)).json()) as { lots: ApiLot[] })
+      .lots;
   let lots = await lotsNow();
   expect(lots.every((l) => l.loads.coolingTotalBtuh > 0)).toBe(true);
   await expect(lotCell(page, lots[0].id, "coolingTotalBtuh")).not.toHaveText("");
@@ -58,7 +67,10 @@ test("create a community from a preset, import lots, turn lots, freeze one for p
     await expect(lotCell(page, l.id, "coolingTotalBtuh")).not.toHaveText(before.get(l.id)!);
   }
   await page.screenshot({ path: testInfo.outputPath("lots-grid.png"), fullPage: true });
-  await testInfo.attach("lots-grid", { path: testInfo.outputPath("lots-grid.png"), contentType: "image/png" });
+  await testInfo.attach("lots-grid", {
+    path: testInfo.outputPath("lots-grid.png"),
+    contentType: "image/png",
+  });
 
   // submit one lot for permit through the status cell
   lots = await lotsNow();
@@ -72,9 +84,13 @@ test("create a community from a preset, import lots, turn lots, freeze one for p
   const frozenCool = await lotCell(page, target.id, "coolingTotalBtuh").innerText();
 
   // a plan edit recomputes the open lots but not the frozen copy; the lot says the plan differs
-  const library = (await (await page.request.get("/api/plans")).json()) as { plans: { id: number; planCode: string; version: number }[] };
+  const library = (await (await page.request.get("/api/plans")).json()) as {
+    plans: { id: number; planCode: string; version: number }[];
+  };
   const plan = library.plans.find((p) => p.planCode === target.planCode)!;
-  const edit = await page.request.patch("/api/plans", { data: { changes: [{ planId: plan.id, version: plan.version, cells: { blower_door_ach50: "8" } }] } });
+  const edit = await page.request.patch("/api/plans", {
+    data: { changes: [{ planId: plan.id, version: plan.version, cells: { blower_door_ach50: "8" } }] },
+  });
   expect(edit.status()).toBe(200);
   await page.reload();
   await expect(lotCell(page, target.id, "snapshot")).toHaveText("frozen · plan differs");

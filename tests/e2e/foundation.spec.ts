@@ -4,7 +4,13 @@ import { signIn, signInAs, signOut } from "./fixtures";
 const NAV = ["Plans", "Communities", "Equipment", "Schedules", "Imports", "History", "Team", "Account"];
 // Every role reads every page (a viewer "reads everything, changes nothing", lib/auth/permissions.ts); what a role
 // may change is hidden on the pages and refused by the server.
-const ROLE_NAV: Record<string, string[]> = { admin: NAV, designer: NAV, reviewer: NAV, purchasing: NAV, viewer: NAV };
+const ROLE_NAV: Record<string, string[]> = {
+  admin: NAV,
+  designer: NAV,
+  reviewer: NAV,
+  purchasing: NAV,
+  viewer: NAV,
+};
 
 for (const [role, items] of Object.entries(ROLE_NAV)) {
   test(`${role} signs in and sees the navigation for the role`, async ({ page }) => {
@@ -17,7 +23,9 @@ for (const [role, items] of Object.entries(ROLE_NAV)) {
 
 test("a wrong password shows a clear error", async ({ page }) => {
   await signIn(page, "designer@marrowfinch.test", "not-the-password");
-  await expect(page.getByTestId("sign-in-error")).toHaveText("That e-mail and password do not match an account.");
+  await expect(page.getByTestId("sign-in-error")).toHaveText(
+    "That e-mail and password do not match an account.",
+  );
   await expect(page).toHaveURL(/sign-in/);
 });
 
@@ -30,7 +38,9 @@ test("a consultant in two accounts picks the account and sees only its data", as
   await expect(page.getByTestId("plan-grid")).not.toContainText("AS-1450");
 });
 
-test("an admin invites a member, the mail arrives, the link sets a password and the member signs in", async ({ page }) => {
+test("an admin invites a member, the mail arrives, the link sets a password and the member signs in", async ({
+  page,
+}) => {
   const email = `site.super.${Date.now()}@marrowfinch.test`;
   await signInAs(page, "admin@marrowfinch.test");
   await page.getByTestId("main-nav").getByRole("link", { name: "Team" }).click();
@@ -47,7 +57,9 @@ test("an admin invites a member, the mail arrives, the link sets a password and 
   const message = page.getByTestId("mail-message").filter({ hasText: email }).first();
   await expect(async () => {
     await page.reload();
-    await expect(message.getByTestId("mail-subject")).toContainText("invited you to Marrow & Finch Homes", { timeout: 2_000 });
+    await expect(message.getByTestId("mail-subject")).toContainText("invited you to Marrow & Finch Homes", {
+      timeout: 2_000,
+    });
   }).toPass({ timeout: 60_000 });
   const body = await message.getByTestId("mail-body").innerText();
   const link = /http\S+\/invitation\/\S+/.exec(body)?.[0];
@@ -76,7 +88,9 @@ test("a viewer sees the team read-only and the server refuses a role change", as
   const team = await page.request.get("/api/team");
   const { members } = (await team.json()) as { members: { membershipId: number; email: string }[] };
   const designer = members.find((m) => m.email === "designer@marrowfinch.test")!;
-  const res = await page.request.patch(`/api/team/members/${designer.membershipId}`, { data: { role: "admin" } });
+  const res = await page.request.patch(`/api/team/members/${designer.membershipId}`, {
+    data: { role: "admin" },
+  });
   expect(res.status()).toBe(403);
   expect(((await res.json()) as { error: { message: string } }).error.message).toContain("viewer");
 });

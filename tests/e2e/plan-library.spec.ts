@@ -14,21 +14,26 @@ async function plansFromApi(page: Page): Promise<ApiPlan[]> {
   return ((await (await page.request.get("/api/plans")).json()) as { plans: ApiPlan[] }).plans;
 }
 
-const cell = (page: Page, planId: number, colId: string) => page.locator(`[row-id="${planId}"] [col-id="${colId}"]`).first();
+const cell = (page: Page, planId: number, colId: string) =>
+  page.locator(`[row-id="${planId}"] [col-id="${colId}"]`).first();
 
 /** Brings a column of the wide grid into view with the grid's own "Go to column" control. */
 async function goToColumn(page: Page, key: string) {
   await page.locator("#jump-column").selectOption(key);
 }
 
-test("a designer imports the template, edits with a formula, bulk-raises insulation, pastes a block; a reviewer approves", async ({ page }, testInfo) => {
+test("a designer imports the template, edits with a formula, bulk-raises insulation, pastes a block; a reviewer approves", async ({
+  page,
+}, testInfo) => {
   // A long scenario on a shared machine: room for slow steps, not a measure of speed (that is npm run bench).
   test.setTimeout(180_000);
   await signInAs(page, "designer@marrowfinch.test");
   await expect(page.getByTestId("plan-grid")).toBeVisible();
 
   // import the template from templates/
-  await page.locator("#plan-import-file").setInputFiles(path.resolve(__dirname, "../../templates/plan-library-template.csv"));
+  await page
+    .locator("#plan-import-file")
+    .setInputFiles(path.resolve(__dirname, "../../templates/plan-library-template.csv"));
   await page.getByTestId("plan-import").getByRole("button", { name: "Import" }).click();
   await expect(page.getByTestId("plan-import-result")).toContainText("1 created");
 
@@ -58,7 +63,8 @@ test("a designer imports the template, edits with a formula, bulk-raises insulat
   // bulk: raise ceiling insulation on three models
   plans = await plansFromApi(page);
   const three = plans.filter((p) => ["AS-1450", "BR-1820", "CO-2360"].includes(p.planCode));
-  for (const p of three) await page.locator(`[row-id="${p.id}"] .ag-selection-checkbox input`).first().check();
+  for (const p of three)
+    await page.locator(`[row-id="${p.id}"] .ag-selection-checkbox input`).first().check();
   await page.locator("#bulk-column").selectOption("ceiling_cavity_r");
   await page.locator("#bulk-value").fill("R-49");
   await page.getByTestId("bulk-edit").getByRole("button", { name: "Apply" }).click();
@@ -78,7 +84,9 @@ test("a designer imports the template, edits with a formula, bulk-raises insulat
   await page.evaluate(() => {
     const data = new DataTransfer();
     data.setData("text/plain", "4\t6\n5\t7\n");
-    document.activeElement!.dispatchEvent(new ClipboardEvent("paste", { clipboardData: data, bubbles: true, cancelable: true }));
+    document.activeElement!.dispatchEvent(
+      new ClipboardEvent("paste", { clipboardData: data, bubbles: true, cancelable: true }),
+    );
   });
   await expect(page.getByTestId("grid-notice")).toContainText("Saved 2 plan models");
   await expect(cell(page, ordered[0].id, "occupants")).toHaveText("6");
@@ -100,7 +108,10 @@ test("a designer imports the template, edits with a formula, bulk-raises insulat
   await expect(cell(page, aster.id, "wall_u")).toHaveText("0.05");
 
   await page.screenshot({ path: testInfo.outputPath("plan-grid.png"), fullPage: true });
-  await testInfo.attach("plan-grid", { path: testInfo.outputPath("plan-grid.png"), contentType: "image/png" });
+  await testInfo.attach("plan-grid", {
+    path: testInfo.outputPath("plan-grid.png"),
+    contentType: "image/png",
+  });
   await signOut(page);
 
   // the reviewer approves the Aster's revision
@@ -116,7 +127,9 @@ test("a designer imports the template, edits with a formula, bulk-raises insulat
   await expect(page.getByTestId("assembly-ceiling_u")).toContainText("base assembly + added insulation");
   // Both procedures side by side, the account's (the handbook's, by default) marked as sizing equipment.
   await expect(page.getByTestId("facing-procedure")).toContainText("Handbook load-factor");
-  await expect(page.getByTestId("sizing-procedure")).toContainText("Handbook residential load-factor procedure");
+  await expect(page.getByTestId("sizing-procedure")).toContainText(
+    "Handbook residential load-factor procedure",
+  );
   await expect(page.getByTestId("compare-facings").locator("tbody tr")).toHaveCount(4);
   await expect(page.getByTestId("compare-sensible-components")).toContainText("Total");
   const form = page.getByTestId("approve-form");
@@ -127,7 +140,10 @@ test("a designer imports the template, edits with a formula, bulk-raises insulat
   await expect(page.getByTestId("plan-history")).toContainText("Approved AS-1450");
   await expect(page.getByTestId("caution")).toBeVisible();
   await page.screenshot({ path: testInfo.outputPath("plan-sheet.png"), fullPage: true });
-  await testInfo.attach("plan-sheet", { path: testInfo.outputPath("plan-sheet.png"), contentType: "image/png" });
+  await testInfo.attach("plan-sheet", {
+    path: testInfo.outputPath("plan-sheet.png"),
+    contentType: "image/png",
+  });
 });
 
 test("a viewer sees the library read-only", async ({ page }) => {

@@ -16,12 +16,18 @@ async function watchPolicy(page: Page): Promise<string[]> {
     if (/Content Security Policy/i.test(m.text())) refused.push(m.text());
   });
   await page.addInitScript(() => {
-    document.addEventListener("securitypolicyviolation", (e) => console.error(`Content Security Policy violation: ${e.violatedDirective} ${e.blockedURI} at ${location.pathname} in ${e.sourceFile}:${e.lineNumber}:${e.columnNumber}`));
+    document.addEventListener("securitypolicyviolation", (e) =>
+      console.error(
+        `Content Security Policy violation: ${e.violatedDirective} ${e.blockedURI} at ${location.pathname} in ${e.sourceFile}:${e.lineNumber}:${e.columnNumber}`,
+      ),
+    );
   });
   return refused;
 }
 
-test("the pages work under their content security policy: sign-in, plan grid, plan sheet charts, lots grid, equipment catalog", async ({ page }) => {
+test("the pages work under their content security policy: sign-in, plan grid, plan sheet charts, lots grid, equipment catalog", async ({
+  page,
+}) => {
   const refused = await watchPolicy(page);
   const signInPage = await page.goto("/sign-in");
   const policy = signInPage!.headers()["content-security-policy"];
@@ -39,7 +45,11 @@ test("the pages work under their content security policy: sign-in, plan grid, pl
   const plans = ((await (await page.request.get("/api/plans")).json()) as { plans: { id: number }[] }).plans;
   await page.goto(`/plans/${plans[0].id}`);
   await expect(page.getByTestId("chart-profile").locator("svg").first()).toBeVisible(); // recharts
-  const communities = ((await (await page.request.get("/api/communities")).json()) as { communities: { id: number; name: string }[] }).communities;
+  const communities = (
+    (await (await page.request.get("/api/communities")).json()) as {
+      communities: { id: number; name: string }[];
+    }
+  ).communities;
   await page.goto(`/communities/${communities.find((c) => c.name === "Cedar Hollow")!.id}`);
   await expect(page.getByTestId("lots-grid").locator(".ag-row").first()).toBeVisible();
   await page.goto("/equipment");
@@ -59,7 +69,10 @@ test("API answers are not cached and carry the headers", async ({ page }) => {
 
 test("a write from another origin is refused with 403", async ({ page }) => {
   await signInAs(page, "designer@marrowfinch.test");
-  const res = await page.request.patch("/api/plans", { data: { changes: [] }, headers: { origin: "http://127.0.0.1:9" } });
+  const res = await page.request.patch("/api/plans", {
+    data: { changes: [] },
+    headers: { origin: "http://127.0.0.1:9" },
+  });
   expect(res.status()).toBe(403);
   const own = await page.request.patch("/api/plans", { data: { changes: [] }, headers: { origin: base } });
   expect(own.status()).toBe(400); // past the Origin check; an empty edit is refused as such
@@ -79,14 +92,27 @@ test("the development mailbox refuses signed-out callers and non-admins", async 
 });
 
 /** A raw HTTP request from a chosen loopback address (the server listens on 127.0.0.1; all of 127/8 is this machine). */
-function send(from: string, method: string, path: string, { headers = {}, body }: { headers?: Record<string, string>; body?: string } = {}): Promise<{ status: number; headers: Record<string, string | string[] | undefined>; text: string }> {
+function send(
+  from: string,
+  method: string,
+  path: string,
+  { headers = {}, body }: { headers?: Record<string, string>; body?: string } = {},
+): Promise<{ status: number; headers: Record<string, string | string[] | undefined>; text: string }> {
   return new Promise((resolve, reject) => {
-    const req = httpRequest(`${base}${path}`, { method, localAddress: from, headers: { ...headers, ...(body ? { "content-length": String(Buffer.byteLength(body)) } : {}) } }, (res) => {
-      let text = "";
-      res.setEncoding("utf8");
-      res.on("data", (chunk) => (text += chunk));
-      res.on("end", () => resolve({ status: res.statusCode ?? 0, headers: res.headers, text }));
-    });
+    const req = httpRequest(
+      `${base}${path}`,
+      {
+        method,
+        localAddress: from,
+        headers: { ...headers, ...(body ? { "content-length": String(Buffer.byteLength(body)) } : {}) },
+      },
+      (res) => {
+        let text = "";
+        res.setEncoding("utf8");
+        res.on("data", (chunk) => (text += chunk));
+        res.on("end", () => resolve({ status: res.statusCode ?? 0, headers: res.headers, text }));
+      },
+    );
     req.on("error", reject);
     if (body) req.write(body);
     req.end();
@@ -94,12 +120,29 @@ function send(from: string, method: string, path: string, { headers = {}, body }
 }
 
 /** next-auth's credentials sign-in as the browser form makes it: CSRF token, then the form post. */
-async function signInFrom(from: string, email: string, password: string, forged: Record<string, string> = {}): Promise<string> {
+async function signInFrom(
+  from: string,
+  email: string,
+  password: string,
+  forged: Record<string, string> = {},
+): Promise<string> {
   const csrf = await send(from, "GET", "/api/auth/csrf");
-  const cookie = ([] as string[]).concat(csrf.headers["set-cookie"] ?? []).map((c) => c.split(";")[0]).join("; ");
+  const cookie = ([] as string[])
+    .concat(csrf.headers["set-cookie"] ?? [])
+    .map((c) => c.split(";")[0])
+    .join("; ");
   const { csrfToken } = JSON.parse(csrf.text) as { csrfToken: string };
-  const body = new URLSearchParams({ email, password, csrfToken, callbackUrl: `${base}/accounts`, json: "true" }).toString();
-  const res = await send(from, "POST", "/api/auth/callback/credentials", { headers: { cookie, origin: base, "content-type": "application/x-www-form-urlencoded", ...forged }, body });
+  const body = new URLSearchParams({
+    email,
+    password,
+    csrfToken,
+    callbackUrl: `${base}/accounts`,
+    json: "true",
+  }).toString();
+  const res = await send(from, "POST", "/api/auth/callback/credentials", {
+    headers: { cookie, origin: base, "content-type": "application/x-www-form-urlencoded", ...forged },
+    body,
+  });
   const url = new URL((JSON.parse(res.text) as { url: string }).url);
   return url.searchParams.get("error") ?? "signed in";
 }
@@ -109,18 +152,31 @@ test("the sign-in limit counts the real client address: forged headers do not sp
   const email = `limit.e2e.${Date.now()}@marrowfinch.test`;
   const { db, close } = connect(E2E_DATABASE);
   try {
-    await db.insert(users).values({ email, name: "Limit Owner", passwordHash: await hashPassword("limit-owner-pass") });
+    await db
+      .insert(users)
+      .values({ email, name: "Limit Owner", passwordHash: await hashPassword("limit-owner-pass") });
   } finally {
     await close();
   }
   const attacker = "127.0.0.2";
   // one failure for each of many e-mails (no e-mail is slowed down), each claiming another address
   for (let i = 0; i < ADDRESS.failures; i++) {
-    const forged = { "x-forwarded-for": `10.20.${i}.1`, "x-real-ip": `10.21.${i}.1`, "x-platload-client-address": `10.22.${i}.1` };
-    expect(await signInFrom(attacker, `nobody.${i}.${Date.now()}@example.test`, "guess", forged)).toBe("That e-mail and password do not match an account.");
+    const forged = {
+      "x-forwarded-for": `10.20.${i}.1`,
+      "x-real-ip": `10.21.${i}.1`,
+      "x-platload-client-address": `10.22.${i}.1`,
+    };
+    expect(await signInFrom(attacker, `nobody.${i}.${Date.now()}@example.test`, "guess", forged)).toBe(
+      "That e-mail and password do not match an account.",
+    );
   }
   // all of them were counted on the socket's address: it is blocked now, whatever it claims
-  expect(await signInFrom(attacker, email, "limit-owner-pass", { "x-forwarded-for": "10.99.0.1", "x-platload-client-address": "10.99.0.2" })).toMatch(/^Too many failed sign-ins from this address\./);
+  expect(
+    await signInFrom(attacker, email, "limit-owner-pass", {
+      "x-forwarded-for": "10.99.0.1",
+      "x-platload-client-address": "10.99.0.2",
+    }),
+  ).toMatch(/^Too many failed sign-ins from this address\./);
   // another address is not locked out
   expect(await signInFrom("127.0.0.3", email, "limit-owner-pass")).toBe("signed in");
 });

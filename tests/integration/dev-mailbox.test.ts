@@ -32,8 +32,16 @@ describe("the development mailbox", () => {
     ids = await seededIds(getDb());
     demoAdmin = await sessionCookie({ userId: ids.roleUsers.admin, accountId: ids.demoAccountId });
     otherAdmin = await sessionCookie({ userId: ids.otherAdminId, accountId: ids.otherAccountId });
-    for (const [cookie, email] of [[demoAdmin, toDemoInvitee], [otherAdmin, toOtherInvitee]]) {
-      const res = await callRoute(invitationsRoute.POST, { path: "/api/team/invitations", method: "POST", cookie, body: { email, name: "Mailbox Check", role: "viewer" } });
+    for (const [cookie, email] of [
+      [demoAdmin, toDemoInvitee],
+      [otherAdmin, toOtherInvitee],
+    ]) {
+      const res = await callRoute(invitationsRoute.POST, {
+        path: "/api/team/invitations",
+        method: "POST",
+        cookie,
+        body: { email, name: "Mailbox Check", role: "viewer" },
+      });
       expect(res.status).toBe(200);
     }
   });
@@ -57,10 +65,12 @@ describe("the development mailbox", () => {
     const theirs = await waitForMessage(otherAdmin, toOtherInvitee);
     expect(theirs?.subject).toContain("Bramblewood Residential");
     // each admin's list holds none of the other account's messages
-    const demoList = (await callRoute(mailboxRoute.GET, { path: "/api/dev/mailbox", cookie: demoAdmin })).json.messages as { to: string[]; accountId: string }[];
+    const demoList = (await callRoute(mailboxRoute.GET, { path: "/api/dev/mailbox", cookie: demoAdmin })).json
+      .messages as { to: string[]; accountId: string }[];
     expect(demoList.some((m) => m.to.includes(toOtherInvitee))).toBe(false);
     expect(demoList.every((m) => m.accountId === String(ids.demoAccountId))).toBe(true);
-    const otherList = (await callRoute(mailboxRoute.GET, { path: "/api/dev/mailbox", cookie: otherAdmin })).json.messages as { to: string[] }[];
+    const otherList = (await callRoute(mailboxRoute.GET, { path: "/api/dev/mailbox", cookie: otherAdmin }))
+      .json.messages as { to: string[] }[];
     expect(otherList.some((m) => m.to.includes(toDemoInvitee))).toBe(false);
   });
 
@@ -89,6 +99,7 @@ describe("the development mailbox", () => {
     expect(isRoute(PHASE_DEVELOPMENT_SERVER, undefined)).toEqual([true, true]);
     // and every other page and route stays a page or route in a production build
     const production = createValidFileMatcher(pageExtensionsFor(PHASE_PRODUCTION_BUILD, undefined), "app");
-    for (const file of routeFiles().filter((f) => !mailboxFiles.includes(f))) expect(production.isAppRouterPage(file), file).toBe(true);
+    for (const file of routeFiles().filter((f) => !mailboxFiles.includes(f)))
+      expect(production.isAppRouterPage(file), file).toBe(true);
   });
 });

@@ -31,20 +31,50 @@ describe("import fuzzing through the routes and the worker", () => {
     // the plans the lots files name
     const form = new FormData();
     form.append("file", new File([EXAMPLE_PLANS_CSV], "example-plans.csv"));
-    const res = await callRoute(planImportRoute.POST, { path: "/x", method: "POST", cookie: account.cookie, form });
+    const res = await callRoute(planImportRoute.POST, {
+      path: "/x",
+      method: "POST",
+      cookie: account.cookie,
+      form,
+    });
     expect((await waitForImport(account.cookie, res.json.importId)).state).toBe("succeeded");
   });
 
   const rowsOf = async (kind: ImportKind) => {
     const db = getDb();
     const n = async (q: Promise<{ n: number }[]>) => (await q)[0].n;
-    const history = await n(db.select({ n: count() }).from(auditLog).where(eq(auditLog.accountId, account.accountId)));
-    if (kind === "plans") return [history, await n(db.select({ n: count() }).from(plans).where(eq(plans.accountId, account.accountId))), await n(db.select({ n: count() }).from(planRevisions).where(eq(planRevisions.accountId, account.accountId)))];
-    if (kind === "lots") return [history, await n(db.select({ n: count() }).from(lots).where(eq(lots.communityId, account.communityId)))];
-    return [history, await n(db.select({ n: count() }).from(equipmentSystems).where(eq(equipmentSystems.accountId, account.accountId)))];
+    const history = await n(
+      db.select({ n: count() }).from(auditLog).where(eq(auditLog.accountId, account.accountId)),
+    );
+    if (kind === "plans")
+      return [
+        history,
+        await n(db.select({ n: count() }).from(plans).where(eq(plans.accountId, account.accountId))),
+        await n(
+          db.select({ n: count() }).from(planRevisions).where(eq(planRevisions.accountId, account.accountId)),
+        ),
+      ];
+    if (kind === "lots")
+      return [
+        history,
+        await n(db.select({ n: count() }).from(lots).where(eq(lots.communityId, account.communityId))),
+      ];
+    return [
+      history,
+      await n(
+        db
+          .select({ n: count() })
+          .from(equipmentSystems)
+          .where(eq(equipmentSystems.accountId, account.accountId)),
+      ),
+    ];
   };
 
-  const routes = { plans: planImportRoute.POST, lots: lotImportRoute.POST, equipment: catalogImportRoute.POST };
+  const routes = {
+    plans: planImportRoute.POST,
+    lots: lotImportRoute.POST,
+    equipment: catalogImportRoute.POST,
+  };
 
   for (const kind of ["plans", "lots", "equipment"] as ImportKind[]) {
     it(`${kind}: ${PER_IMPORTER} generated files answer 202 or a clear 4xx, finish, and a failure writes nothing`, async () => {
@@ -54,7 +84,13 @@ describe("import fuzzing through the routes and the worker", () => {
         const before = await rowsOf(kind);
         const form = new FormData();
         form.append("file", new File([file.data as BlobPart], file.fileName));
-        const res = await callRoute(routes[kind], { path: "/x", method: "POST", cookie: account.cookie, params: { communityId: String(account.communityId) }, form });
+        const res = await callRoute(routes[kind], {
+          path: "/x",
+          method: "POST",
+          cookie: account.cookie,
+          params: { communityId: String(account.communityId) },
+          form,
+        });
         expect(res.status, `${file.how}: ${res.text}`).toBeLessThan(500);
         if (res.status !== 202) {
           expect(res.status, file.how).toBeGreaterThanOrEqual(400);
@@ -70,7 +106,10 @@ describe("import fuzzing through the routes and the worker", () => {
           expect(done.errorCount, file.how).toBeGreaterThan(0);
           expect(done.errors.length, file.how).toBeLessThanOrEqual(200);
           expect(await rowsOf(kind), file.how).toEqual(before);
-          const [record] = await getDb().select({ fileKey: imports.fileKey }).from(imports).where(and(eq(imports.id, res.json.importId)));
+          const [record] = await getDb()
+            .select({ fileKey: imports.fileKey })
+            .from(imports)
+            .where(and(eq(imports.id, res.json.importId)));
           expect(record.fileKey, `${file.how}: a failed file is deleted`).toBeNull();
         }
       }

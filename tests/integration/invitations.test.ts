@@ -16,16 +16,35 @@ describe("invitation links", () => {
     ids = await seededIds(getDb());
   });
 
-  const invite = (email: string) => createInvitation({ db: getDb(), accountId: ids.demoAccountId, invitedByUserId: ids.roleUsers.admin, email, name: "Link Check", role: "designer" });
-  const accept = (token: string) => callRoute(acceptRoute.POST, { path: "/api/invitations/x", method: "POST", params: { token }, body: { name: "Link Check", password: "a-long-enough-pw" } });
-  const look = (token: string) => callRoute(acceptRoute.GET, { path: "/api/invitations/x", params: { token } });
-  const userCount = async (email: string) => (await getDb().select({ n: count() }).from(users).where(eq(users.email, email)))[0].n;
+  const invite = (email: string) =>
+    createInvitation({
+      db: getDb(),
+      accountId: ids.demoAccountId,
+      invitedByUserId: ids.roleUsers.admin,
+      email,
+      name: "Link Check",
+      role: "designer",
+    });
+  const accept = (token: string) =>
+    callRoute(acceptRoute.POST, {
+      path: "/api/invitations/x",
+      method: "POST",
+      params: { token },
+      body: { name: "Link Check", password: "a-long-enough-pw" },
+    });
+  const look = (token: string) =>
+    callRoute(acceptRoute.GET, { path: "/api/invitations/x", params: { token } });
+  const userCount = async (email: string) =>
+    (await getDb().select({ n: count() }).from(users).where(eq(users.email, email)))[0].n;
 
   it("expire: a link past its date is refused on opening and on accepting, and makes no one", async () => {
     const email = `expired.${stamp}@example.test`;
     const { token, invitationId } = await invite(email);
     expect((await look(token)).status).toBe(200);
-    await getDb().update(invitations).set({ expiresAt: new Date(Date.now() - 1000) }).where(eq(invitations.id, invitationId));
+    await getDb()
+      .update(invitations)
+      .set({ expiresAt: new Date(Date.now() - 1000) })
+      .where(eq(invitations.id, invitationId));
     const opened = await look(token);
     expect(opened.status).toBe(404);
     expect(opened.json.error.message).toMatch(/not valid any more/);
@@ -47,7 +66,9 @@ describe("invitation links", () => {
     const results = await Promise.all([accept(token), accept(token)]);
     expect(results.map((r) => r.status).sort()).toEqual([200, 404]);
     const [user] = await getDb().select().from(users).where(eq(users.email, email));
-    expect((await getDb().select({ n: count() }).from(memberships).where(eq(memberships.userId, user.id)))[0].n).toBe(1);
+    expect(
+      (await getDb().select({ n: count() }).from(memberships).where(eq(memberships.userId, user.id)))[0].n,
+    ).toBe(1);
     expect((await look(token)).status).toBe(404);
     expect((await accept(token)).status).toBe(404);
   });

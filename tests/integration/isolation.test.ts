@@ -70,7 +70,12 @@ const lotsFile = () => {
   return form;
 };
 const noFile = () => new FormData();
-const approval = (t: Records) => ({ revisionId: t.revisionId, approverName: "Casey Moreau", approverCredential: "PE 0000", approvedOn: "2026-12-01" });
+const approval = (t: Records) => ({
+  revisionId: t.revisionId,
+  approverName: "Casey Moreau",
+  approverCredential: "PE 0000",
+  approvedOn: "2026-12-01",
+});
 
 const SAMPLES: Record<string, Samples> = {
   "GET /api/account/load-procedure": () => [{ kind: "own-read" }],
@@ -79,29 +84,74 @@ const SAMPLES: Record<string, Samples> = {
   "PUT /api/account/sizing-limits": () => [{ kind: "own-write", body: {} }],
   "GET /api/communities": () => [{ kind: "own-read" }],
   "POST /api/communities": () => [{ kind: "own-write", body: {} }],
-  "GET /api/communities/[communityId]": (t) => [{ kind: "foreign", params: { communityId: String(t.communityId) } }],
-  "PATCH /api/communities/[communityId]": (t) => [{ kind: "foreign", params: { communityId: String(t.communityId) }, body: { name: "X", locality: "", version: 1, conditions: {} } }],
-  "GET /api/communities/[communityId]/equipment-schedule": (t) => [{ kind: "foreign", params: { communityId: String(t.communityId) }, query: "?format=json" }],
-  "GET /api/communities/[communityId]/lots": (t) => [{ kind: "foreign", params: { communityId: String(t.communityId) } }],
-  "PATCH /api/communities/[communityId]/lots": (t, own) => [
-    { kind: "foreign", params: { communityId: String(t.communityId) }, body: { changes: [{ lotId: t.lotId, version: 1, facing: "N" }] } },
-    // the caller's own community, the other account's lot
-    { kind: "foreign", params: { communityId: String(own.plannedLot.communityId) }, body: { changes: [{ lotId: t.lotId, version: 1, facing: "N" }] } },
+  "GET /api/communities/[communityId]": (t) => [
+    { kind: "foreign", params: { communityId: String(t.communityId) } },
   ],
-  "POST /api/communities/[communityId]/lots/import": (t) => [{ kind: "foreign", params: { communityId: String(t.communityId) }, form: lotsFile }],
-  "GET /api/communities/[communityId]/lots/template": (t) => [{ kind: "foreign", params: { communityId: String(t.communityId) }, query: "?format=csv" }],
-  "GET /api/communities/[communityId]/packets": (t) => [{ kind: "foreign", params: { communityId: String(t.communityId) } }],
+  "PATCH /api/communities/[communityId]": (t) => [
+    {
+      kind: "foreign",
+      params: { communityId: String(t.communityId) },
+      body: { name: "X", locality: "", version: 1, conditions: {} },
+    },
+  ],
+  "GET /api/communities/[communityId]/equipment-schedule": (t) => [
+    { kind: "foreign", params: { communityId: String(t.communityId) }, query: "?format=json" },
+  ],
+  "GET /api/communities/[communityId]/lots": (t) => [
+    { kind: "foreign", params: { communityId: String(t.communityId) } },
+  ],
+  "PATCH /api/communities/[communityId]/lots": (t, own) => [
+    {
+      kind: "foreign",
+      params: { communityId: String(t.communityId) },
+      body: { changes: [{ lotId: t.lotId, version: 1, facing: "N" }] },
+    },
+    // the caller's own community, the other account's lot
+    {
+      kind: "foreign",
+      params: { communityId: String(own.plannedLot.communityId) },
+      body: { changes: [{ lotId: t.lotId, version: 1, facing: "N" }] },
+    },
+  ],
+  "POST /api/communities/[communityId]/lots/import": (t) => [
+    { kind: "foreign", params: { communityId: String(t.communityId) }, form: lotsFile },
+  ],
+  "GET /api/communities/[communityId]/lots/template": (t) => [
+    { kind: "foreign", params: { communityId: String(t.communityId) }, query: "?format=csv" },
+  ],
+  "GET /api/communities/[communityId]/packets": (t) => [
+    { kind: "foreign", params: { communityId: String(t.communityId) } },
+  ],
   "POST /api/communities/[communityId]/packets": (t, own) => [
     { kind: "foreign", params: { communityId: String(t.communityId) }, body: {} },
     // the other account's lot in the caller's own community is refused like a lot of no community (400, same message)
-    { kind: "foreign", params: { communityId: String(own.plannedLot.communityId) }, body: { lotIds: [t.lotId] }, status: 400 },
+    {
+      kind: "foreign",
+      params: { communityId: String(own.plannedLot.communityId) },
+      body: { lotIds: [t.lotId] },
+      status: 400,
+    },
   ],
-  "GET /api/communities/[communityId]/permit-schedule": (t) => [{ kind: "foreign", params: { communityId: String(t.communityId) }, query: "?format=csv" }],
-  "POST /api/communities/[communityId]/send": (t) => [{ kind: "foreign", params: { communityId: String(t.communityId) }, body: { to: ["permit.desk@county-office.test"], what: "permit-schedule" } }],
+  "GET /api/communities/[communityId]/permit-schedule": (t) => [
+    { kind: "foreign", params: { communityId: String(t.communityId) }, query: "?format=csv" },
+  ],
+  "POST /api/communities/[communityId]/send": (t) => [
+    {
+      kind: "foreign",
+      params: { communityId: String(t.communityId) },
+      body: { to: ["permit.desk@county-office.test"], what: "permit-schedule" },
+    },
+  ],
   "GET /api/dev/mailbox": () => [{ kind: "own-read" }],
   "GET /api/equipment": () => [{ kind: "own-read" }],
   "GET /api/equipment/[systemId]": (t) => [{ kind: "foreign", params: { systemId: String(t.systemId) } }],
-  "PATCH /api/equipment/[systemId]": (t) => [{ kind: "foreign", params: { systemId: String(t.systemId) }, body: { version: 1, cells: { price_usd: 1 } } }],
+  "PATCH /api/equipment/[systemId]": (t) => [
+    {
+      kind: "foreign",
+      params: { systemId: String(t.systemId) },
+      body: { version: 1, cells: { price_usd: 1 } },
+    },
+  ],
   "GET /api/equipment/export": () => [{ kind: "own-read", query: "?format=csv" }],
   "POST /api/equipment/import": () => [{ kind: "own-write", form: noFile }],
   "GET /api/equipment/template": () => [{ kind: "own-read", query: "?format=csv" }],
@@ -113,68 +163,172 @@ const SAMPLES: Record<string, Samples> = {
   "POST /api/lots/[lotId]/equipment": (t, own) => [
     { kind: "foreign", params: { lotId: String(t.lotId) }, body: { version: 1, systemId: null } },
     // the caller's own lot, the other account's system
-    { kind: "foreign", params: { lotId: String(own.plannedLot.id) }, body: { version: own.plannedLot.version, systemId: t.systemId } },
+    {
+      kind: "foreign",
+      params: { lotId: String(own.plannedLot.id) },
+      body: { version: own.plannedLot.version, systemId: t.systemId },
+    },
   ],
   "GET /api/lots/[lotId]/report": (t) => [{ kind: "foreign", params: { lotId: String(t.lotId) } }],
-  "POST /api/lots/[lotId]/status": (t) => [{ kind: "foreign", params: { lotId: String(t.lotId) }, body: { version: 1, status: "permit_submitted" } }],
+  "POST /api/lots/[lotId]/status": (t) => [
+    { kind: "foreign", params: { lotId: String(t.lotId) }, body: { version: 1, status: "permit_submitted" } },
+  ],
   // (the packet rows made here have no stored file, so the caller's own one is not fetched)
-  "GET /api/packets/[packetId]": (t) => [{ kind: "foreign", params: { packetId: String(t.packetId) }, control: false }],
-  "GET /api/packets/[packetId]/status": (t) => [{ kind: "foreign", params: { packetId: String(t.packetId) } }],
-  "GET /api/plans": (t) => [{ kind: "own-read" }, { kind: "foreign", query: `?communityId=${t.communityId}` }],
-  "PATCH /api/plans": (t) => [{ kind: "foreign", body: { changes: [{ planId: t.planId, version: 1, cells: { bedrooms: "2" } }] } }],
-  "POST /api/plans": (t) => [{ kind: "foreign", body: { fromPlanId: t.planId, planCode: "ZZ-ISO", name: "Copy" } }],
+  "GET /api/packets/[packetId]": (t) => [
+    { kind: "foreign", params: { packetId: String(t.packetId) }, control: false },
+  ],
+  "GET /api/packets/[packetId]/status": (t) => [
+    { kind: "foreign", params: { packetId: String(t.packetId) } },
+  ],
+  "GET /api/plans": (t) => [
+    { kind: "own-read" },
+    { kind: "foreign", query: `?communityId=${t.communityId}` },
+  ],
+  "PATCH /api/plans": (t) => [
+    { kind: "foreign", body: { changes: [{ planId: t.planId, version: 1, cells: { bedrooms: "2" } }] } },
+  ],
+  "POST /api/plans": (t) => [
+    { kind: "foreign", body: { fromPlanId: t.planId, planCode: "ZZ-ISO", name: "Copy" } },
+  ],
   "GET /api/plans/[planId]": (t, own) => [
     { kind: "foreign", params: { planId: String(t.planId) } },
     // the caller's own plan with the other account's community's conditions
     { kind: "foreign", params: { planId: String(own.planId) }, query: `?communityId=${t.communityId}` },
   ],
-  "POST /api/plans/[planId]/approve": (t) => [{ kind: "foreign", params: { planId: String(t.planId) }, body: approval(t) }],
+  "POST /api/plans/[planId]/approve": (t) => [
+    { kind: "foreign", params: { planId: String(t.planId) }, body: approval(t) },
+  ],
   "GET /api/plans/codes": () => [{ kind: "own-read" }],
-  "GET /api/plans/export": (t) => [{ kind: "own-read", query: "?format=csv" }, { kind: "foreign", query: `?format=csv&communityId=${t.communityId}` }],
+  "GET /api/plans/export": (t) => [
+    { kind: "own-read", query: "?format=csv" },
+    { kind: "foreign", query: `?format=csv&communityId=${t.communityId}` },
+  ],
   "POST /api/plans/import": () => [{ kind: "own-write", form: noFile }],
   "GET /api/plans/template": () => [{ kind: "own-read", query: "?format=csv" }],
   "POST /api/plans/undo": (t) => [{ kind: "foreign", body: { entryId: t.planEntryId } }],
   "GET /api/session/account": () => [{ kind: "own-read" }],
   // (the consultant does belong to both accounts and may choose either)
-  "POST /api/session/account": (t, _own, caller) => (caller.memberOfTarget ? [] : [{ kind: "foreign", body: { accountId: t.accountId } }]),
+  "POST /api/session/account": (t, _own, caller) =>
+    caller.memberOfTarget ? [] : [{ kind: "foreign", body: { accountId: t.accountId } }],
   "GET /api/team": () => [{ kind: "own-read" }],
   "POST /api/team/invitations": () => [{ kind: "own-write", body: {} }],
-  "DELETE /api/team/invitations/[invitationId]": (t) => [{ kind: "foreign", params: { invitationId: String(t.invitationId) } }],
-  "PATCH /api/team/members/[membershipId]": (t) => [{ kind: "foreign", params: { membershipId: String(t.membershipId) }, body: { role: "viewer" } }],
-  "DELETE /api/team/members/[membershipId]": (t) => [{ kind: "foreign", params: { membershipId: String(t.membershipId) } }],
+  "DELETE /api/team/invitations/[invitationId]": (t) => [
+    { kind: "foreign", params: { invitationId: String(t.invitationId) } },
+  ],
+  "PATCH /api/team/members/[membershipId]": (t) => [
+    { kind: "foreign", params: { membershipId: String(t.membershipId) }, body: { role: "viewer" } },
+  ],
+  "DELETE /api/team/members/[membershipId]": (t) => [
+    { kind: "foreign", params: { membershipId: String(t.membershipId) } },
+  ],
 };
 
 /** Who calls: every role of the demo account against the second account, and back. */
-const CALLERS: { label: string; email: string; account: "demo" | "other"; role: Role; memberOfTarget?: boolean }[] = [
-  ...DEMO_ACCOUNT.users.map((u) => ({ label: `${u.role} of ${DEMO_ACCOUNT.name}`, email: u.email, account: "demo" as const, role: u.role as Role })),
+const CALLERS: {
+  label: string;
+  email: string;
+  account: "demo" | "other";
+  role: Role;
+  memberOfTarget?: boolean;
+}[] = [
+  ...DEMO_ACCOUNT.users.map((u) => ({
+    label: `${u.role} of ${DEMO_ACCOUNT.name}`,
+    email: u.email,
+    account: "demo" as const,
+    role: u.role as Role,
+  })),
   // a member of both accounts, working in the demo account: the other account's records stay out of reach
-  { label: `consultant (reviewer) in ${DEMO_ACCOUNT.name}`, email: DEMO_CONSULTANT.email, account: "demo", role: "reviewer", memberOfTarget: true },
-  { label: `admin of ${OTHER_ACCOUNT.name}`, email: OTHER_ACCOUNT.users[0].email, account: "other", role: "admin" },
+  {
+    label: `consultant (reviewer) in ${DEMO_ACCOUNT.name}`,
+    email: DEMO_CONSULTANT.email,
+    account: "demo",
+    role: "reviewer",
+    memberOfTarget: true,
+  },
+  {
+    label: `admin of ${OTHER_ACCOUNT.name}`,
+    email: OTHER_ACCOUNT.users[0].email,
+    account: "other",
+    role: "admin",
+  },
 ];
 
 const routes = await loadRoutes();
-const handlers = routes.flatMap((r) => r.handlers).filter((h) => !NOT_MEMBER_ROUTES[`${h.method} ${h.path}`] || NOT_MEMBER_ROUTES[`${h.method} ${h.path}`].kind === "session");
+const handlers = routes
+  .flatMap((r) => r.handlers)
+  .filter(
+    (h) =>
+      !NOT_MEMBER_ROUTES[`${h.method} ${h.path}`] ||
+      NOT_MEMBER_ROUTES[`${h.method} ${h.path}`].kind === "session",
+  );
 
 async function recordsOf(accountId: number, userId: number): Promise<Records> {
   const db = getDb();
   const ids = await seededIds(db);
   const base = accountId === ids.demoAccountId ? ids.demoRecords : ids.otherRecords;
   const [plan] = await db.select().from(plans).where(eq(plans.id, base.planId));
-  const [plannedLot] = await db.select().from(lots).where(and(eq(lots.accountId, accountId), eq(lots.status, "planned"))).limit(1);
-  const { invitationId } = await createInvitation({ db, accountId, invitedByUserId: userId, email: `isolation.${accountId}.${Date.now()}@example.test`, name: "Isolation Check", role: "viewer" });
+  const [plannedLot] = await db
+    .select()
+    .from(lots)
+    .where(and(eq(lots.accountId, accountId), eq(lots.status, "planned")))
+    .limit(1);
+  const { invitationId } = await createInvitation({
+    db,
+    accountId,
+    invitedByUserId: userId,
+    email: `isolation.${accountId}.${Date.now()}@example.test`,
+    name: "Isolation Check",
+    role: "viewer",
+  });
   const [{ id: packetId }] = await db
     .insert(packets)
-    .values({ accountId, communityId: base.communityId, kind: "permit-schedule", fileName: "permit-schedule.csv", fileKey: `isolation/${accountId}.csv`, contentType: "text/csv", sizeBytes: 1, createdByUserId: userId })
+    .values({
+      accountId,
+      communityId: base.communityId,
+      kind: "permit-schedule",
+      fileName: "permit-schedule.csv",
+      fileKey: `isolation/${accountId}.csv`,
+      contentType: "text/csv",
+      sizeBytes: 1,
+      createdByUserId: userId,
+    })
     .$returningId();
-  let [entry] = await db.select({ id: auditLog.id }).from(auditLog).where(and(eq(auditLog.accountId, accountId), eq(auditLog.entityType, "plan"), eq(auditLog.action, "plan_edit"))).limit(1);
+  let [entry] = await db
+    .select({ id: auditLog.id })
+    .from(auditLog)
+    .where(
+      and(
+        eq(auditLog.accountId, accountId),
+        eq(auditLog.entityType, "plan"),
+        eq(auditLog.action, "plan_edit"),
+      ),
+    )
+    .limit(1);
   if (!entry) {
     const [{ id }] = await db
       .insert(auditLog)
-      .values({ accountId, userId, action: "plan_edit", entityType: "plan", entityId: plan.id, summary: `Edited ${plan.planCode}: Bedrooms`, before: [{ planId: plan.id, planCode: plan.planCode, cells: { bedrooms: "3" } }], after: [{ planId: plan.id, planCode: plan.planCode, cells: { bedrooms: "4" } }] })
+      .values({
+        accountId,
+        userId,
+        action: "plan_edit",
+        entityType: "plan",
+        entityId: plan.id,
+        summary: `Edited ${plan.planCode}: Bedrooms`,
+        before: [{ planId: plan.id, planCode: plan.planCode, cells: { bedrooms: "3" } }],
+        after: [{ planId: plan.id, planCode: plan.planCode, cells: { bedrooms: "4" } }],
+      })
       .$returningId();
     entry = { id };
   }
-  return { accountId, ...base, revisionId: plan.currentRevisionId!, plannedLot: { id: plannedLot.id, version: plannedLot.version, communityId: plannedLot.communityId }, invitationId, packetId, planEntryId: entry.id };
+  return {
+    accountId,
+    ...base,
+    revisionId: plan.currentRevisionId!,
+    plannedLot: { id: plannedLot.id, version: plannedLot.version, communityId: plannedLot.communityId },
+    invitationId,
+    packetId,
+    planEntryId: entry.id,
+  };
 }
 
 /** Names only the other account has: none may appear in an answer to the caller. */
@@ -182,10 +336,25 @@ async function namesOnlyIn(accountId: number, otherAccountId: number): Promise<s
   const db = getDb();
   const names = async (id: number) => {
     const [account] = await db.select({ name: accounts.name }).from(accounts).where(eq(accounts.id, id));
-    const planCodes = (await db.select({ v: plans.planCode }).from(plans).where(eq(plans.accountId, id))).map((r) => r.v);
-    const communityNames = (await db.select({ v: communities.name }).from(communities).where(eq(communities.accountId, id))).map((r) => r.v);
-    const systemCodes = (await db.select({ v: equipmentSystems.systemCode }).from(equipmentSystems).where(eq(equipmentSystems.accountId, id))).map((r) => r.v);
-    const emails = (await db.select({ v: users.email }).from(users).innerJoin(memberships, eq(memberships.userId, users.id)).where(eq(memberships.accountId, id))).map((r) => r.v);
+    const planCodes = (await db.select({ v: plans.planCode }).from(plans).where(eq(plans.accountId, id))).map(
+      (r) => r.v,
+    );
+    const communityNames = (
+      await db.select({ v: communities.name }).from(communities).where(eq(communities.accountId, id))
+    ).map((r) => r.v);
+    const systemCodes = (
+      await db
+        .select({ v: equipmentSystems.systemCode })
+        .from(equipmentSystems)
+        .where(eq(equipmentSystems.accountId, id))
+    ).map((r) => r.v);
+    const emails = (
+      await db
+        .select({ v: users.email })
+        .from(users)
+        .innerJoin(memberships, eq(memberships.userId, users.id))
+        .where(eq(memberships.accountId, id))
+    ).map((r) => r.v);
     return new Set([account.name, ...planCodes, ...communityNames, ...systemCodes, ...emails]);
   };
   const mine = await names(otherAccountId);
@@ -194,26 +363,72 @@ async function namesOnlyIn(accountId: number, otherAccountId: number): Promise<s
 
 async function tableCounts() {
   const db = getDb();
-  const tables = { auditLog, plans, planRevisions, communities, lots, equipmentSystems, imports, invitations, memberships, packets };
-  const entries = await Promise.all(Object.entries(tables).map(async ([name, table]) => [name, (await db.select({ n: count() }).from(table))[0].n] as const));
+  const tables = {
+    auditLog,
+    plans,
+    planRevisions,
+    communities,
+    lots,
+    equipmentSystems,
+    imports,
+    invitations,
+    memberships,
+    packets,
+  };
+  const entries = await Promise.all(
+    Object.entries(tables).map(
+      async ([name, table]) => [name, (await db.select({ n: count() }).from(table))[0].n] as const,
+    ),
+  );
   return Object.fromEntries(entries);
 }
 
 async function versionsOf(r: Records) {
   const db = getDb();
   const [plan] = await db.select({ v: plans.version }).from(plans).where(eq(plans.id, r.planId));
-  const [community] = await db.select({ v: communities.version }).from(communities).where(eq(communities.id, r.communityId));
-  const lotVersions = await db.select({ id: lots.id, v: lots.version }).from(lots).where(inArray(lots.id, [r.lotId, r.plannedLot.id]));
-  const [system] = await db.select({ v: equipmentSystems.version }).from(equipmentSystems).where(eq(equipmentSystems.id, r.systemId));
-  const roles = await db.select({ role: memberships.role }).from(memberships).where(eq(memberships.accountId, r.accountId));
-  const [revision] = await db.select({ status: planRevisions.status }).from(planRevisions).where(eq(planRevisions.id, r.revisionId));
-  return { plan: plan.v, community: community.v, lots: lotVersions, system: system.v, roles: roles.map((x) => x.role).sort(), revision: revision.status };
+  const [community] = await db
+    .select({ v: communities.version })
+    .from(communities)
+    .where(eq(communities.id, r.communityId));
+  const lotVersions = await db
+    .select({ id: lots.id, v: lots.version })
+    .from(lots)
+    .where(inArray(lots.id, [r.lotId, r.plannedLot.id]));
+  const [system] = await db
+    .select({ v: equipmentSystems.version })
+    .from(equipmentSystems)
+    .where(eq(equipmentSystems.id, r.systemId));
+  const roles = await db
+    .select({ role: memberships.role })
+    .from(memberships)
+    .where(eq(memberships.accountId, r.accountId));
+  const [revision] = await db
+    .select({ status: planRevisions.status })
+    .from(planRevisions)
+    .where(eq(planRevisions.id, r.revisionId));
+  return {
+    plan: plan.v,
+    community: community.v,
+    lots: lotVersions,
+    system: system.v,
+    roles: roles.map((x) => x.role).sort(),
+    revision: revision.status,
+  };
 }
-
 
 /** Routes whose answers quote free text the caller's own account wrote (see the name check below). */
 const FREE_TEXT_ROUTES = new Set(["GET /api/imports", "GET /api/dev/mailbox"]);
-const FREE_TEXT_FIELDS = new Set(["errors", "message", "reason", "text", "body", "subject", "html", "value", "cells"]);
+const FREE_TEXT_FIELDS = new Set([
+  "errors",
+  "message",
+  "reason",
+  "text",
+  "body",
+  "subject",
+  "html",
+  "value",
+  "cells",
+]);
 
 /** The answer as text without the free-text fields (row errors, message bodies and subjects). */
 function withoutFreeText(json: unknown): string {
@@ -236,7 +451,13 @@ describe("account isolation matrix", () => {
     foreignNames.other = await namesOnlyIn(ids.demoAccountId, ids.otherAccountId);
     for (const caller of CALLERS) {
       const [user] = await db.select({ id: users.id }).from(users).where(eq(users.email, caller.email));
-      cookies.set(caller.label, await sessionCookie({ userId: user.id, accountId: caller.account === "demo" ? ids.demoAccountId : ids.otherAccountId }));
+      cookies.set(
+        caller.label,
+        await sessionCookie({
+          userId: user.id,
+          accountId: caller.account === "demo" ? ids.demoAccountId : ids.otherAccountId,
+        }),
+      );
     }
     countsBefore = await tableCounts();
     versionsBefore = { demo: await versionsOf(records.demo), other: await versionsOf(records.other) };
@@ -244,8 +465,14 @@ describe("account isolation matrix", () => {
 
   it("has a sample request for every handler, and none for a handler that is gone", () => {
     const keys = handlers.map((h) => `${h.method} ${h.path}`);
-    expect(keys.filter((k) => !SAMPLES[k]), "add a sample request for these routes").toEqual([]);
-    expect(Object.keys(SAMPLES).filter((k) => !keys.includes(k)), "these samples name no route").toEqual([]);
+    expect(
+      keys.filter((k) => !SAMPLES[k]),
+      "add a sample request for these routes",
+    ).toEqual([]);
+    expect(
+      Object.keys(SAMPLES).filter((k) => !keys.includes(k)),
+      "these samples name no route",
+    ).toEqual([]);
     expect(keys.length).toBeGreaterThan(40);
   });
 
@@ -260,11 +487,23 @@ describe("account isolation matrix", () => {
         const own = records[caller.account];
         const target = records[caller.account === "demo" ? "other" : "demo"];
         const permitted = permission === null || can(caller.role, permission);
-        const controls = h.method === "GET" && permitted ? samples(own, own, { memberOfTarget: true }).filter((c) => c.kind === "foreign" && c.control !== false) : [];
+        const controls =
+          h.method === "GET" && permitted
+            ? samples(own, own, { memberOfTarget: true }).filter(
+                (c) => c.kind === "foreign" && c.control !== false,
+              )
+            : [];
         for (const control of controls) {
           // the same read with the caller's own ids works: the 404s below are the account's doing
-          const res = await callRoute(h.handler, { path: `/api/x${control.query ?? ""}`, params: control.params ?? {}, cookie: cookies.get(caller.label) });
-          if (res.status !== 200) wrong.push(`${caller.label}, own ids ${JSON.stringify(control.params ?? {})}${control.query ?? ""}: ${res.status} (expected 200) ${res.text.slice(0, 160)}`);
+          const res = await callRoute(h.handler, {
+            path: `/api/x${control.query ?? ""}`,
+            params: control.params ?? {},
+            cookie: cookies.get(caller.label),
+          });
+          if (res.status !== 200)
+            wrong.push(
+              `${caller.label}, own ids ${JSON.stringify(control.params ?? {})}${control.query ?? ""}: ${res.status} (expected 200) ${res.text.slice(0, 160)}`,
+            );
         }
         for (const sample of samples(target, own, { memberOfTarget: !!caller.memberOfTarget })) {
           const res = await callRoute(h.handler, {
@@ -275,10 +514,18 @@ describe("account isolation matrix", () => {
             form: sample.form?.(),
             cookie: cookies.get(caller.label),
           });
-          const expected = !permitted ? 403 : sample.kind === "foreign" ? (sample.status ?? 404) : sample.kind === "own-write" ? 400 : 200;
+          const expected = !permitted
+            ? 403
+            : sample.kind === "foreign"
+              ? (sample.status ?? 404)
+              : sample.kind === "own-write"
+                ? 400
+                : 200;
           const label = `${caller.label}, ${sample.kind}${sample.query ?? ""} ${JSON.stringify(sample.params ?? {})}`;
-          if (res.status !== expected) wrong.push(`${label}: ${res.status} (expected ${expected}) ${res.text.slice(0, 160)}`);
-          if (res.status === 404 && res.json?.error?.code !== "not_found") wrong.push(`${label}: 404 without the error shape`);
+          if (res.status !== expected)
+            wrong.push(`${label}: ${res.status} (expected ${expected}) ${res.text.slice(0, 160)}`);
+          if (res.status === 404 && res.json?.error?.code !== "not_found")
+            wrong.push(`${label}: 404 without the error shape`);
           if (sample.kind === "own-read" && res.status === 200) {
             const shared = caller.email === DEMO_CONSULTANT.email && key === "GET /api/session/account"; // the consultant's own two accounts
             // Rows of free text written by the caller's own account (an import's row errors quote the
@@ -298,20 +545,37 @@ describe("account isolation matrix", () => {
 
   it("wrote nothing in either account", async () => {
     expect(await tableCounts()).toEqual(countsBefore);
-    expect({ demo: await versionsOf(records.demo), other: await versionsOf(records.other) }).toEqual(versionsBefore);
+    expect({ demo: await versionsOf(records.demo), other: await versionsOf(records.other) }).toEqual(
+      versionsBefore,
+    );
   });
 
   it("the account settings routes read and write the caller's own account only", async () => {
     const ids = await seededIds(getDb());
-    const route = (method: string) => handlers.find((h) => h.method === method && h.path === "/api/account/load-procedure")!.handler;
-    const procedureOf = async (accountId: number) => (await getDb().select({ procedure: accounts.loadProcedure }).from(accounts).where(eq(accounts.id, accountId)))[0].procedure;
-    const own = await callRoute(route("GET"), { path: "/api/account/load-procedure", cookie: cookies.get(`admin of ${OTHER_ACCOUNT.name}`) });
+    const route = (method: string) =>
+      handlers.find((h) => h.method === method && h.path === "/api/account/load-procedure")!.handler;
+    const procedureOf = async (accountId: number) =>
+      (
+        await getDb()
+          .select({ procedure: accounts.loadProcedure })
+          .from(accounts)
+          .where(eq(accounts.id, accountId))
+      )[0].procedure;
+    const own = await callRoute(route("GET"), {
+      path: "/api/account/load-procedure",
+      cookie: cookies.get(`admin of ${OTHER_ACCOUNT.name}`),
+    });
     expect(own.status).toBe(200);
     expect(own.json.procedure).toBe(await procedureOf(ids.otherAccountId));
     // choosing the other account in the cookie does not reach it: not a member there
     const demo = await procedureOf(ids.demoAccountId);
     const cookie = await sessionCookie({ userId: ids.otherAdminId, accountId: ids.demoAccountId });
-    const refused = await callRoute(route("PUT"), { path: "/x", method: "PUT", cookie, body: { procedure: demo === "hourly" ? "residential-load-factor" : "hourly", from: demo } });
+    const refused = await callRoute(route("PUT"), {
+      path: "/x",
+      method: "PUT",
+      cookie,
+      body: { procedure: demo === "hourly" ? "residential-load-factor" : "hourly", from: demo },
+    });
     expect(refused.status).toBe(403);
     expect(await procedureOf(ids.demoAccountId)).toBe(demo);
   });

@@ -40,19 +40,34 @@ describe("the account's load procedure", () => {
   let cookies: Record<"admin" | "designer" | "reviewer" | "purchasing" | "viewer", string>;
   let otherAdmin: string;
 
-  const accountProcedure = async (accountId: number) => (await getDb().select({ p: accounts.loadProcedure }).from(accounts).where(eq(accounts.id, accountId)))[0].p;
-  const put = (cookie: string, body: unknown) => callRoute(procedureRoute.PUT, { path: "/api/account/load-procedure", method: "PUT", cookie, body });
+  const accountProcedure = async (accountId: number) =>
+    (await getDb().select({ p: accounts.loadProcedure }).from(accounts).where(eq(accounts.id, accountId)))[0]
+      .p;
+  const put = (cookie: string, body: unknown) =>
+    callRoute(procedureRoute.PUT, { path: "/api/account/load-procedure", method: "PUT", cookie, body });
   const accountLots = () => getDb().select().from(lots).where(eq(lots.accountId, ids.demoAccountId));
   /** The report route's PDF bytes (callRoute reads bodies as text). */
   const reportBytes = async (lotId: number) => {
-    const response = await reportRoute.GET(new NextRequest(new URL(`/api/lots/${lotId}/report`, "http://127.0.0.1:3720"), { headers: { cookie: cookies.viewer } }), { params: Promise.resolve({ lotId: String(lotId) }) });
+    const response = await reportRoute.GET(
+      new NextRequest(new URL(`/api/lots/${lotId}/report`, "http://127.0.0.1:3720"), {
+        headers: { cookie: cookies.viewer },
+      }),
+      { params: Promise.resolve({ lotId: String(lotId) }) },
+    );
     expect(response.status, `report of lot ${lotId}`).toBe(200);
     return new Uint8Array(await response.arrayBuffer());
   };
 
   beforeAll(async () => {
     ids = await seededIds(getDb());
-    cookies = Object.fromEntries(await Promise.all(Object.entries(ids.roleUsers).map(async ([role, userId]) => [role, await sessionCookie({ userId, accountId: ids.demoAccountId })]))) as typeof cookies;
+    cookies = Object.fromEntries(
+      await Promise.all(
+        Object.entries(ids.roleUsers).map(async ([role, userId]) => [
+          role,
+          await sessionCookie({ userId, accountId: ids.demoAccountId }),
+        ]),
+      ),
+    ) as typeof cookies;
     otherAdmin = await sessionCookie({ userId: ids.otherAdminId, accountId: ids.otherAccountId });
   });
 
@@ -69,7 +84,10 @@ describe("the account's load procedure", () => {
 
   it("only an admin may change it: every other role gets 403 and nothing is written", async () => {
     const before = await accountProcedure(ids.demoAccountId);
-    const historyLength = async () => (await getDb().select({ n: count() }).from(auditLog).where(eq(auditLog.accountId, ids.demoAccountId)))[0].n;
+    const historyLength = async () =>
+      (
+        await getDb().select({ n: count() }).from(auditLog).where(eq(auditLog.accountId, ids.demoAccountId))
+      )[0].n;
     const entriesBefore = await historyLength();
     for (const role of ["designer", "reviewer", "purchasing", "viewer"] as const) {
       const res = await put(cookies[role], { procedure: otherThan(before), from: before });
@@ -85,7 +103,11 @@ describe("the account's load procedure", () => {
     const bad = await put(cookies.admin, { procedure: "monthly", from: before });
     expect(bad.status).toBe(400);
     expect(bad.json.error.fieldErrors.map((f: { field: string }) => f.field)).toContain("procedure");
-    const unknownKey = await put(cookies.admin, { procedure: otherThan(before), from: before, recompute: false });
+    const unknownKey = await put(cookies.admin, {
+      procedure: otherThan(before),
+      from: before,
+      recompute: false,
+    });
     expect(unknownKey.status).toBe(400);
     const stale = await put(cookies.admin, { procedure: before, from: otherThan(before) });
     expect(stale.status).toBe(409);
@@ -99,10 +121,22 @@ describe("the account's load procedure", () => {
     const after = otherThan(before);
 
     // Freeze one lot for permit under the current procedure: its snapshot keeps the procedure.
-    const grid = (await callRoute(lotsRoute.GET, { path: "/x", params: { communityId: String(ids.demoRecords.communityId) }, cookie: cookies.designer })).json;
+    const grid = (
+      await callRoute(lotsRoute.GET, {
+        path: "/x",
+        params: { communityId: String(ids.demoRecords.communityId) },
+        cookie: cookies.designer,
+      })
+    ).json;
     expect(grid.accountProcedure).toBe(before);
     const target = grid.lots.find((l: { frozen: boolean; planId: number | null }) => !l.frozen && l.planId);
-    const frozen = await callRoute(statusRoute.POST, { path: "/x", method: "POST", params: { lotId: String(target.id) }, cookie: cookies.designer, body: { version: target.version, status: "permit_submitted" } });
+    const frozen = await callRoute(statusRoute.POST, {
+      path: "/x",
+      method: "POST",
+      params: { lotId: String(target.id) },
+      cookie: cookies.designer,
+      body: { version: target.version, status: "permit_submitted" },
+    });
     expect(frozen.status, JSON.stringify(frozen.json)).toBe(200);
     const [frozenRow] = await db.select().from(lots).where(eq(lots.id, target.id));
     const snapshot = frozenRow.permitSnapshot as PermitSnapshot;
@@ -110,9 +144,20 @@ describe("the account's load procedure", () => {
     expect(snapshot.result.procedure).toBe(before);
     expect(snapshot.summary.procedure).toBe(before);
 
-    const frozenBefore = await db.select({ id: lots.id, permitSnapshot: lots.permitSnapshot, selection: lots.selection, equipmentSystemId: lots.equipmentSystemId }).from(lots).where(and(eq(lots.accountId, ids.demoAccountId), isNotNull(lots.permitSnapshot)));
+    const frozenBefore = await db
+      .select({
+        id: lots.id,
+        permitSnapshot: lots.permitSnapshot,
+        selection: lots.selection,
+        equipmentSystemId: lots.equipmentSystemId,
+      })
+      .from(lots)
+      .where(and(eq(lots.accountId, ids.demoAccountId), isNotNull(lots.permitSnapshot)));
     expect(frozenBefore.length).toBeGreaterThan(0);
-    const otherAccountBefore = await db.select({ id: lots.id, results: lots.results }).from(lots).where(eq(lots.accountId, ids.otherAccountId));
+    const otherAccountBefore = await db
+      .select({ id: lots.id, results: lots.results })
+      .from(lots)
+      .where(eq(lots.accountId, ids.otherAccountId));
     const allLots = await accountLots();
 
     const res = await put(cookies.admin, { procedure: after, from: before });
@@ -132,10 +177,18 @@ describe("the account's load procedure", () => {
     const liveOfTarget = now.find((l) => l.id === target.id)!.results as LotResults;
     expect(Math.round(liveOfTarget.coolingTotalBtuh)).not.toBe(Math.round(snapshot.summary.coolingTotalBtuh));
     // The other account is not touched.
-    expect(await db.select({ id: lots.id, results: lots.results }).from(lots).where(eq(lots.accountId, ids.otherAccountId))).toEqual(otherAccountBefore);
+    expect(
+      await db
+        .select({ id: lots.id, results: lots.results })
+        .from(lots)
+        .where(eq(lots.accountId, ids.otherAccountId)),
+    ).toEqual(otherAccountBefore);
 
     // One history entry, naming both procedures.
-    const entries = await db.select().from(auditLog).where(and(eq(auditLog.accountId, ids.demoAccountId), eq(auditLog.action, "load_procedure")));
+    const entries = await db
+      .select()
+      .from(auditLog)
+      .where(and(eq(auditLog.accountId, ids.demoAccountId), eq(auditLog.action, "load_procedure")));
     expect(entries).toHaveLength(1);
     expect(entries[0].before).toEqual({ procedure: before });
     expect(entries[0].after).toMatchObject({ procedure: after, lotsRecomputed: allLots.length });
@@ -143,15 +196,31 @@ describe("the account's load procedure", () => {
     expect(entries[0].summary).toContain(LOAD_PROCEDURE_LABELS[after]);
 
     // The lots grid: live lots by the new procedure, the frozen lot by its snapshot's, and it says the current plan differs.
-    const gridAfter = (await callRoute(lotsRoute.GET, { path: "/x", params: { communityId: String(ids.demoRecords.communityId) }, cookie: cookies.viewer })).json;
+    const gridAfter = (
+      await callRoute(lotsRoute.GET, {
+        path: "/x",
+        params: { communityId: String(ids.demoRecords.communityId) },
+        cookie: cookies.viewer,
+      })
+    ).json;
     expect(gridAfter.accountProcedure).toBe(after);
     const frozenInGrid = gridAfter.lots.find((l: { id: number }) => l.id === target.id);
-    expect(frozenInGrid).toMatchObject({ frozen: true, procedure: before, liveProcedure: after, currentDiffers: true });
+    expect(frozenInGrid).toMatchObject({
+      frozen: true,
+      procedure: before,
+      liveProcedure: after,
+      currentDiffers: true,
+    });
     expect(frozenInGrid.loads.coolingTotalBtuh).toBe(snapshot.summary.coolingTotalBtuh);
-    for (const l of gridAfter.lots.filter((x: { frozen: boolean; loads: unknown }) => !x.frozen && x.loads)) expect(l.procedure).toBe(after);
+    for (const l of gridAfter.lots.filter((x: { frozen: boolean; loads: unknown }) => !x.frozen && x.loads))
+      expect(l.procedure).toBe(after);
 
     // The permit schedule's procedure column: the snapshot's for the frozen lot, the account's for the others.
-    const csv = await callRoute(scheduleRoute.GET, { path: "/x?format=csv", params: { communityId: String(ids.demoRecords.communityId) }, cookie: cookies.viewer });
+    const csv = await callRoute(scheduleRoute.GET, {
+      path: "/x?format=csv",
+      params: { communityId: String(ids.demoRecords.communityId) },
+      cookie: cookies.viewer,
+    });
     const table = readCsv(csv.text);
     const column = table.headers.indexOf("Load procedure");
     expect(column).toBeGreaterThan(-1);
@@ -161,30 +230,59 @@ describe("the account's load procedure", () => {
       const expected = lot.procedure === null ? "" : LOAD_PROCEDURE_LABELS[lot.frozen ? before : after];
       expect(row.cells[column], `lot ${row.cells[0]}`).toBe(expected);
     }
-    expect(table.rows.find((r) => r.cells[0] === target.lotNumber)!.cells[column]).toBe(LOAD_PROCEDURE_LABELS[before]);
+    expect(table.rows.find((r) => r.cells[0] === target.lotNumber)!.cells[column]).toBe(
+      LOAD_PROCEDURE_LABELS[before],
+    );
 
     // The equipment schedule counts the lots by the procedure they were sized by.
-    const equipment = await callRoute(equipmentScheduleRoute.GET, { path: "/x?format=json", params: { communityId: String(ids.demoRecords.communityId) }, cookie: cookies.viewer });
+    const equipment = await callRoute(equipmentScheduleRoute.GET, {
+      path: "/x?format=json",
+      params: { communityId: String(ids.demoRecords.communityId) },
+      cookie: cookies.viewer,
+    });
     expect(equipment.status).toBe(200);
     expect(equipment.json.accountProcedure).toBe(after);
-    const counts = Object.fromEntries(equipment.json.procedures.map((p: { procedure: string; lotCount: number }) => [p.procedure, p.lotCount]));
+    const counts = Object.fromEntries(
+      equipment.json.procedures.map((p: { procedure: string; lotCount: number }) => [
+        p.procedure,
+        p.lotCount,
+      ]),
+    );
     const withLoads = gridAfter.lots.filter((l: { loads: unknown }) => l.loads);
     expect(counts[before]).toBe(withLoads.filter((l: { frozen: boolean }) => l.frozen).length);
     expect(counts[after]).toBe(withLoads.filter((l: { frozen: boolean }) => !l.frozen).length);
 
     // The lot reports state the procedure: the frozen lot its snapshot's, a live lot the account's.
-    const liveLot = gridAfter.lots.find((l: { frozen: boolean; planId: number | null }) => !l.frozen && l.planId);
-    expect(await pdfText(await reportBytes(target.id))).toContain(squash(`Load procedure ${PROCEDURE_STATEMENTS[before]}`));
-    expect(await pdfText(await reportBytes(liveLot.id))).toContain(squash(`Load procedure ${PROCEDURE_STATEMENTS[after]}`));
+    const liveLot = gridAfter.lots.find(
+      (l: { frozen: boolean; planId: number | null }) => !l.frozen && l.planId,
+    );
+    expect(await pdfText(await reportBytes(target.id))).toContain(
+      squash(`Load procedure ${PROCEDURE_STATEMENTS[before]}`),
+    );
+    expect(await pdfText(await reportBytes(liveLot.id))).toContain(
+      squash(`Load procedure ${PROCEDURE_STATEMENTS[after]}`),
+    );
 
     // The plan library computes by the new procedure; the plan sheet shows both, the new one sizing equipment.
     const library = (await callRoute(plansRoute.GET, { path: "/api/plans", cookie: cookies.viewer })).json;
     expect(library.procedure).toBe(after);
-    for (const plan of library.plans.filter((p: { loads: unknown }) => p.loads)) expect(plan.loads.procedure).toBe(after);
-    const sheet = (await callRoute(planRoute.GET, { path: `/api/plans/${target.planId}`, params: { planId: String(target.planId) }, cookie: cookies.viewer })).json;
+    for (const plan of library.plans.filter((p: { loads: unknown }) => p.loads))
+      expect(plan.loads.procedure).toBe(after);
+    const sheet = (
+      await callRoute(planRoute.GET, {
+        path: `/api/plans/${target.planId}`,
+        params: { planId: String(target.planId) },
+        cookie: cookies.viewer,
+      })
+    ).json;
     expect(sheet.accountProcedure).toBe(after);
     expect(sheet.result.procedure).toBe(after);
-    expect(sheet.procedures.map((p: { procedure: string; sizesEquipment: boolean }) => [p.procedure, p.sizesEquipment])).toEqual(LOAD_PROCEDURES.map((p) => [p, p === after]));
+    expect(
+      sheet.procedures.map((p: { procedure: string; sizesEquipment: boolean }) => [
+        p.procedure,
+        p.sizesEquipment,
+      ]),
+    ).toEqual(LOAD_PROCEDURES.map((p) => [p, p === after]));
     for (const p of sheet.procedures) {
       expect(p.error, p.procedure).toBeNull();
       expect(p.result.procedure).toBe(p.procedure);
@@ -193,7 +291,13 @@ describe("the account's load procedure", () => {
 
     // A new snapshot, taken explicitly, is by the procedure in force now.
     const [refreshed] = await db.select().from(lots).where(eq(lots.id, target.id));
-    const retake = await callRoute(statusRoute.POST, { path: "/x", method: "POST", params: { lotId: String(target.id) }, cookie: cookies.reviewer, body: { version: refreshed.version, status: refreshed.status, refresh: true } });
+    const retake = await callRoute(statusRoute.POST, {
+      path: "/x",
+      method: "POST",
+      params: { lotId: String(target.id) },
+      cookie: cookies.reviewer,
+      body: { version: refreshed.version, status: refreshed.status, refresh: true },
+    });
     expect(retake.status, JSON.stringify(retake.json)).toBe(200);
     const [retaken] = await db.select().from(lots).where(eq(lots.id, target.id));
     expect((retaken.permitSnapshot as PermitSnapshot).procedure).toBe(after);
@@ -204,18 +308,31 @@ describe("the account's load procedure", () => {
     for (const lot of await accountLots()) expect((lot.results as LotResults).procedure).toBe(before);
     const again = await put(cookies.admin, { procedure: before, from: before });
     expect(again.json).toMatchObject({ changed: false, lotsRecomputed: 0 });
-    expect(await db.select().from(auditLog).where(and(eq(auditLog.accountId, ids.demoAccountId), eq(auditLog.action, "load_procedure")))).toHaveLength(2);
+    expect(
+      await db
+        .select()
+        .from(auditLog)
+        .where(and(eq(auditLog.accountId, ids.demoAccountId), eq(auditLog.action, "load_procedure"))),
+    ).toHaveLength(2);
   });
 
   it("an admin of another account changes only that account's procedure", async () => {
     const demoBefore = await accountProcedure(ids.demoAccountId);
     const otherBefore = await accountProcedure(ids.otherAccountId);
-    const demoLotsBefore = await getDb().select({ id: lots.id, results: lots.results }).from(lots).where(eq(lots.accountId, ids.demoAccountId));
+    const demoLotsBefore = await getDb()
+      .select({ id: lots.id, results: lots.results })
+      .from(lots)
+      .where(eq(lots.accountId, ids.demoAccountId));
     const res = await put(otherAdmin, { procedure: otherThan(otherBefore), from: otherBefore });
     expect(res.status, JSON.stringify(res.json)).toBe(200);
     expect(await accountProcedure(ids.otherAccountId)).toBe(otherThan(otherBefore));
     expect(await accountProcedure(ids.demoAccountId)).toBe(demoBefore);
-    expect(await getDb().select({ id: lots.id, results: lots.results }).from(lots).where(eq(lots.accountId, ids.demoAccountId))).toEqual(demoLotsBefore);
+    expect(
+      await getDb()
+        .select({ id: lots.id, results: lots.results })
+        .from(lots)
+        .where(eq(lots.accountId, ids.demoAccountId)),
+    ).toEqual(demoLotsBefore);
     await put(otherAdmin, { procedure: otherBefore, from: otherThan(otherBefore) });
   });
 });

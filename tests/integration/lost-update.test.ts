@@ -32,7 +32,10 @@ interface Tally {
  * Runs the writers at once. Each reads, writes with what it read, and on 409 reads again, until
  * its write is accepted (at most WRITERS + 5 tries).
  */
-async function race(read: () => Promise<string>, write: (writer: number, version: string) => Promise<number>): Promise<Tally> {
+async function race(
+  read: () => Promise<string>,
+  write: (writer: number, version: string) => Promise<number>,
+): Promise<Tally> {
   const tally: Tally = { winners: new Map(), refused: 0, other: [], firstRound: { won: 0, refused: 0 } };
   const firstReads = await Promise.all(Array.from({ length: WRITERS }, () => read()));
   await Promise.all(
@@ -62,38 +65,90 @@ describe("lost updates", () => {
     account = await privateAccount(getDb(), "lost-update");
     const form = new FormData();
     form.append("file", new File([EXAMPLE_PLANS_CSV], "example-plans.csv"));
-    const res = await callRoute(planImportRoute.POST, { path: "/x", method: "POST", cookie: account.cookie, form });
+    const res = await callRoute(planImportRoute.POST, {
+      path: "/x",
+      method: "POST",
+      cookie: account.cookie,
+      form,
+    });
     expect((await waitForImport(account.cookie, res.json.importId)).state).toBe("succeeded");
-    const lotsCsv = ["Lot,Plan code,Facing", ...Array.from({ length: 3 }, (_, i) => `LU-${i + 1},${EXAMPLE_PLAN_CODES[i]},S`)].join("\n");
+    const lotsCsv = [
+      "Lot,Plan code,Facing",
+      ...Array.from({ length: 3 }, (_, i) => `LU-${i + 1},${EXAMPLE_PLAN_CODES[i]},S`),
+    ].join("\n");
     const lotForm = new FormData();
     lotForm.append("file", new File([lotsCsv], "lots.csv"));
-    const lotRes = await callRoute(lotImportRoute.POST, { path: "/x", method: "POST", cookie: account.cookie, params: { communityId: String(account.communityId) }, form: lotForm });
+    const lotRes = await callRoute(lotImportRoute.POST, {
+      path: "/x",
+      method: "POST",
+      cookie: account.cookie,
+      params: { communityId: String(account.communityId) },
+      form: lotForm,
+    });
     expect((await waitForImport(account.cookie, lotRes.json.importId)).state).toBe("succeeded");
   });
 
   function expectNoLostUpdate(tally: Tally, label: string) {
     const versions = [...tally.winners.keys()];
-    console.log(`${label}: ${WRITERS} writers; first round ${tally.firstRound.won} won, ${tally.firstRound.refused} got 409; in all ${WRITERS} writes accepted over ${versions.length} versions, ${tally.refused} refusals (409), ${tally.other.length} other answers`);
+    console.log(
+      `${label}: ${WRITERS} writers; first round ${tally.firstRound.won} won, ${tally.firstRound.refused} got 409; in all ${WRITERS} writes accepted over ${versions.length} versions, ${tally.refused} refusals (409), ${tally.other.length} other answers`,
+    );
     expect(tally.firstRound).toEqual({ won: 1, refused: WRITERS - 1 });
     expect(tally.other).toEqual([]);
     expect(versions).toHaveLength(WRITERS);
     for (const version of versions) expect(tally.winners.get(version), `version ${version}`).toHaveLength(1);
-    expect([...tally.winners.values()].flat().sort((a, b) => a - b)).toEqual(Array.from({ length: WRITERS }, (_, i) => i));
+    expect([...tally.winners.values()].flat().sort((a, b) => a - b)).toEqual(
+      Array.from({ length: WRITERS }, (_, i) => i),
+    );
   }
 
   it("50 writers on one plan: one wins per version, the rest get 409, nothing is lost", async () => {
-    const [plan] = await getDb().select().from(plans).where(and(eq(plans.accountId, account.accountId), eq(plans.planCode, EXAMPLE_PLAN_CODES[0])));
-    const lastEntry = (await getDb().select({ id: max(auditLog.id) }).from(auditLog))[0].id ?? 0;
-    const read = async () => String((await getDb().select({ version: plans.version }).from(plans).where(eq(plans.id, plan.id)))[0].version);
+    const [plan] = await getDb()
+      .select()
+      .from(plans)
+      .where(and(eq(plans.accountId, account.accountId), eq(plans.planCode, EXAMPLE_PLAN_CODES[0])));
+    const lastEntry =
+      (
+        await getDb()
+          .select({ id: max(auditLog.id) })
+          .from(auditLog)
+      )[0].id ?? 0;
+    const read = async () =>
+      String(
+        (await getDb().select({ version: plans.version }).from(plans).where(eq(plans.id, plan.id)))[0]
+          .version,
+      );
     const tally = await race(read, async (writer, version) => {
-      const res = await callRoute(plansRoute.PATCH, { path: "/api/plans", method: "PATCH", cookie: account.cookie, body: { changes: [{ planId: plan.id, version: Number(version), cells: { plan_name: `Written by ${writer}` } }] } });
+      const res = await callRoute(plansRoute.PATCH, {
+        path: "/api/plans",
+        method: "PATCH",
+        cookie: account.cookie,
+        body: {
+          changes: [
+            { planId: plan.id, version: Number(version), cells: { plan_name: `Written by ${writer}` } },
+          ],
+        },
+      });
       return res.status;
     });
     expectNoLostUpdate(tally, "plan");
     const [after] = await getDb().select().from(plans).where(eq(plans.id, plan.id));
     expect(after.version).toBe(plan.version + WRITERS);
     // one history entry per accepted write, each one starting from the one before
-    const entries = (await getDb().select().from(auditLog).where(and(eq(auditLog.accountId, account.accountId), eq(auditLog.entityId, plan.id), eq(auditLog.action, "plan_edit"), gt(auditLog.id, lastEntry))).orderBy(asc(auditLog.id))).map((e) => ({
+    const entries = (
+      await getDb()
+        .select()
+        .from(auditLog)
+        .where(
+          and(
+            eq(auditLog.accountId, account.accountId),
+            eq(auditLog.entityId, plan.id),
+            eq(auditLog.action, "plan_edit"),
+            gt(auditLog.id, lastEntry),
+          ),
+        )
+        .orderBy(asc(auditLog.id))
+    ).map((e) => ({
       before: (e.before as { cells: { plan_name: string } }[])[0].cells.plan_name,
       after: (e.after as { cells: { plan_name: string } }[])[0].cells.plan_name,
     }));
@@ -104,19 +159,49 @@ describe("lost updates", () => {
   }, 120_000);
 
   it("50 writers on the same three lots: one wins per version, the rest get 409, nothing is lost", async () => {
-    const lotRows = await getDb().select().from(lots).where(eq(lots.communityId, account.communityId)).orderBy(asc(lots.lotNumber));
+    const lotRows = await getDb()
+      .select()
+      .from(lots)
+      .where(eq(lots.communityId, account.communityId))
+      .orderBy(asc(lots.lotNumber));
     expect(lotRows).toHaveLength(3);
     const ids = lotRows.map((l) => l.id);
-    const read = async () => JSON.stringify((await getDb().select({ id: lots.id, version: lots.version }).from(lots).where(inArray(lots.id, ids)).orderBy(asc(lots.id))).map((l) => l.version));
+    const read = async () =>
+      JSON.stringify(
+        (
+          await getDb()
+            .select({ id: lots.id, version: lots.version })
+            .from(lots)
+            .where(inArray(lots.id, ids))
+            .orderBy(asc(lots.id))
+        ).map((l) => l.version),
+      );
     const tally = await race(read, async (writer, versions) => {
       const v = JSON.parse(versions) as number[];
-      const res = await callRoute(lotsRoute.PATCH, { path: "/x", method: "PATCH", cookie: account.cookie, params: { communityId: String(account.communityId) }, body: { changes: [...ids].sort((a, b) => a - b).map((lotId, i) => ({ lotId, version: v[i], optionsNote: `note of writer ${writer}` })) } });
+      const res = await callRoute(lotsRoute.PATCH, {
+        path: "/x",
+        method: "PATCH",
+        cookie: account.cookie,
+        params: { communityId: String(account.communityId) },
+        body: {
+          changes: [...ids]
+            .sort((a, b) => a - b)
+            .map((lotId, i) => ({ lotId, version: v[i], optionsNote: `note of writer ${writer}` })),
+        },
+      });
       return res.status;
     });
     expectNoLostUpdate(tally, "three lots");
     const after = await getDb().select().from(lots).where(inArray(lots.id, ids));
-    for (const lot of after) expect(lot.version).toBe(lotRows.find((l) => l.id === lot.id)!.version + WRITERS);
-    const entries = (await getDb().select().from(auditLog).where(and(eq(auditLog.accountId, account.accountId), eq(auditLog.action, "lot_bulk_edit"))).orderBy(asc(auditLog.id))).map((e) => ({
+    for (const lot of after)
+      expect(lot.version).toBe(lotRows.find((l) => l.id === lot.id)!.version + WRITERS);
+    const entries = (
+      await getDb()
+        .select()
+        .from(auditLog)
+        .where(and(eq(auditLog.accountId, account.accountId), eq(auditLog.action, "lot_bulk_edit")))
+        .orderBy(asc(auditLog.id))
+    ).map((e) => ({
       before: (e.before as { optionsNote: string }[]).map((l) => l.optionsNote),
       after: (e.after as { optionsNote: string }[]).map((l) => l.optionsNote),
     }));

@@ -16,7 +16,15 @@ describe("seed", () => {
     handle.close = close;
     const counts = async () => {
       const out: Record<string, number> = {};
-      for (const [name, table] of Object.entries({ accounts, users, memberships, plans, communities, lots, equipmentSystems })) {
+      for (const [name, table] of Object.entries({
+        accounts,
+        users,
+        memberships,
+        plans,
+        communities,
+        lots,
+        equipmentSystems,
+      })) {
         const [row] = await db.select({ n: count() }).from(table);
         out[name] = row.n;
       }

@@ -20,12 +20,19 @@ const ownerAddress = "198.51.100.20";
 
 /** Headers of one request as route handlers see them after the edge. */
 function headersFrom(socketAddress: string, sent: Record<string, string> = {}): Record<string, unknown> {
-  const request = { headers: { ...sent } as Record<string, string | string[] | undefined>, socket: { remoteAddress: socketAddress } as never };
+  const request = {
+    headers: { ...sent } as Record<string, string | string[] | undefined>,
+    socket: { remoteAddress: socketAddress } as never,
+  };
   stampClientAddress(request, 0);
   return request.headers;
 }
 
-async function signIn(email: string, password: string, headers: Record<string, unknown>): Promise<{ ok: true } | { ok: false; message: string }> {
+async function signIn(
+  email: string,
+  password: string,
+  headers: Record<string, unknown>,
+): Promise<{ ok: true } | { ok: false; message: string }> {
   try {
     await authorizeSignIn({ email, password }, headers);
     return { ok: true };
@@ -42,7 +49,9 @@ const wait = (seconds: number) => {
 
 describe("sign-in limits on the shared store", () => {
   beforeAll(async () => {
-    await getDb().insert(users).values({ email: owner, name: "Limit Owner", passwordHash: await hashPassword(PASSWORD) });
+    await getDb()
+      .insert(users)
+      .values({ email: owner, name: "Limit Owner", passwordHash: await hashPassword(PASSWORD) });
     vi.useFakeTimers({ toFake: ["Date"] });
     vi.setSystemTime(clock);
     markClientAddressesStamped(); // what scripts/serve.ts does at start
@@ -56,27 +65,47 @@ describe("sign-in limits on the shared store", () => {
   it("a forged X-Forwarded-For or client-address header gives no new tries, and the right password from another address still signs in", async () => {
     for (let i = 0; i < PAIR.failures; i++) {
       wait(EMAIL.maxWaitS);
-      const forged = { "x-forwarded-for": `10.0.${i}.1`, "x-real-ip": `10.1.${i}.1`, "x-platload-client-address": `10.2.${i}.1` };
-      expect(await signIn(owner, `guess-${i}`, headersFrom(attacker, forged))).toEqual({ ok: false, message: "That e-mail and password do not match an account." });
+      const forged = {
+        "x-forwarded-for": `10.0.${i}.1`,
+        "x-real-ip": `10.1.${i}.1`,
+        "x-platload-client-address": `10.2.${i}.1`,
+      };
+      expect(await signIn(owner, `guess-${i}`, headersFrom(attacker, forged))).toEqual({
+        ok: false,
+        message: "That e-mail and password do not match an account.",
+      });
     }
     wait(EMAIL.maxWaitS);
     // the attacker's socket is blocked for this e-mail, whatever it claims, even with the right password
-    const again = await signIn(owner, PASSWORD, headersFrom(attacker, { "x-forwarded-for": "10.99.0.1", "x-platload-client-address": "10.99.0.2" }));
-    expect(again).toEqual({ ok: false, message: expect.stringMatching(/^Too many failed sign-ins from this address\. Wait 1[45] minutes and try again\.$/) });
+    const again = await signIn(
+      owner,
+      PASSWORD,
+      headersFrom(attacker, { "x-forwarded-for": "10.99.0.1", "x-platload-client-address": "10.99.0.2" }),
+    );
+    expect(again).toEqual({
+      ok: false,
+      message: expect.stringMatching(
+        /^Too many failed sign-ins from this address\. Wait 1[45] minutes and try again\.$/,
+      ),
+    });
     // the owner, elsewhere, is not locked out
     expect(await signIn(owner, PASSWORD, headersFrom(ownerAddress))).toEqual({ ok: true });
   });
 
   it("after failures from everywhere an e-mail is slowed down (a wait of at most a minute), never locked", async () => {
     const email = `limit.slow.${stamp}@marrowfinch.test`;
-    await getDb().insert(users).values({ email, name: "Slow Owner", passwordHash: await hashPassword(PASSWORD) });
+    await getDb()
+      .insert(users)
+      .values({ email, name: "Slow Owner", passwordHash: await hashPassword(PASSWORD) });
     for (let i = 0; i < EMAIL.freeFailures + 3; i++) {
       wait(EMAIL.maxWaitS);
       await signIn(email, `guess-${i}`, headersFrom(`192.0.2.${i + 1}`));
     }
     const right = await signIn(email, PASSWORD, headersFrom(ownerAddress));
     expect(right.ok).toBe(false);
-    expect(right.ok ? "" : right.message).toMatch(/^Too many failed sign-ins for this e-mail\. Wait \d+ seconds and try again\.$/);
+    expect(right.ok ? "" : right.message).toMatch(
+      /^Too many failed sign-ins for this e-mail\. Wait \d+ seconds and try again\.$/,
+    );
     const seconds = Number(/Wait (\d+) seconds/.exec(right.ok ? "" : right.message)?.[1]);
     expect(seconds).toBeLessThanOrEqual(EMAIL.maxWaitS);
     wait(seconds);
@@ -85,21 +114,31 @@ describe("sign-in limits on the shared store", () => {
 
   it(`blocks an address after ${ADDRESS.failures} failures for any e-mails; other addresses go on`, async () => {
     const sprayer = "203.0.113.99";
-    for (let i = 0; i < ADDRESS.failures; i++) await signIn(`nobody.${stamp}.${i}@example.test`, "guess", headersFrom(sprayer));
-    expect(await signIn(owner, PASSWORD, headersFrom(sprayer))).toEqual({ ok: false, message: "Too many failed sign-ins from this address. Wait 15 minutes and try again." });
+    for (let i = 0; i < ADDRESS.failures; i++)
+      await signIn(`nobody.${stamp}.${i}@example.test`, "guess", headersFrom(sprayer));
+    expect(await signIn(owner, PASSWORD, headersFrom(sprayer))).toEqual({
+      ok: false,
+      message: "Too many failed sign-ins from this address. Wait 15 minutes and try again.",
+    });
     wait(EMAIL.maxWaitS);
     expect(await signIn(owner, PASSWORD, headersFrom("198.51.100.77"))).toEqual({ ok: true });
   });
 
   it("the counters are shared: another app instance on its own pool sees the block", async () => {
-    const database = (getPool().pool as unknown as { config: { connectionConfig: { database: string } } }).config.connectionConfig.database;
+    const database = (getPool().pool as unknown as { config: { connectionConfig: { database: string } } })
+      .config.connectionConfig.database;
     const { createPool } = await import("@/db");
     const otherPool = createPool(process.env.DATABASE_URL!);
     try {
       const otherInstance = SignInLimiter.onPool(otherPool, database);
       wait(EMAIL.maxWaitS);
-      expect(await otherInstance.check({ email: owner, clientAddress: attacker })).toMatchObject({ refused: true, by: "pair" });
-      expect(await otherInstance.check({ email: owner, clientAddress: ownerAddress })).toMatchObject({ refused: false });
+      expect(await otherInstance.check({ email: owner, clientAddress: attacker })).toMatchObject({
+        refused: true,
+        by: "pair",
+      });
+      expect(await otherInstance.check({ email: owner, clientAddress: ownerAddress })).toMatchObject({
+        refused: false,
+      });
     } finally {
       await otherPool.end();
     }
@@ -121,7 +160,10 @@ describe("sign-in limits on the shared store", () => {
     markClientAddressesStamped(false);
     try {
       const res = await signIn(owner, PASSWORD, { "x-platload-client-address": "198.51.100.20" });
-      expect(res).toEqual({ ok: false, message: expect.stringContaining("must be started with its own web server") });
+      expect(res).toEqual({
+        ok: false,
+        message: expect.stringContaining("must be started with its own web server"),
+      });
     } finally {
       markClientAddressesStamped();
     }

@@ -39,20 +39,72 @@ describe("the sweep", () => {
     const db = getDb();
     const old = new Date(Date.now() - LOST_AFTER_MS - 60_000);
     const leftKey = await storedFile("left.csv");
-    const [{ id: failedId }] = await db.insert(imports).values({ accountId: account.accountId, userId: account.userId, kind: "plans", fileName: "left.csv", fileSizeBytes: 12, fileKey: leftKey, state: "failed", errors: [] }).$returningId();
-    const [{ id: lostId }] = await db.insert(imports).values({ accountId: account.accountId, userId: account.userId, kind: "plans", fileName: "lost.csv", fileSizeBytes: 12, fileKey: await storedFile("lost.csv"), state: "received", createdAt: old }).$returningId();
-    const [{ id: gaveUpId }] = await db.insert(imports).values({ accountId: account.accountId, userId: account.userId, kind: "plans", fileName: "gave-up.csv", fileSizeBytes: 12, fileKey: await storedFile("gave-up.csv"), state: "computing", createdAt: old }).$returningId();
-    const [{ id: recentId }] = await db.insert(imports).values({ accountId: account.accountId, userId: account.userId, kind: "plans", fileName: "recent.csv", fileSizeBytes: 12, state: "received" }).$returningId();
+    const [{ id: failedId }] = await db
+      .insert(imports)
+      .values({
+        accountId: account.accountId,
+        userId: account.userId,
+        kind: "plans",
+        fileName: "left.csv",
+        fileSizeBytes: 12,
+        fileKey: leftKey,
+        state: "failed",
+        errors: [],
+      })
+      .$returningId();
+    const [{ id: lostId }] = await db
+      .insert(imports)
+      .values({
+        accountId: account.accountId,
+        userId: account.userId,
+        kind: "plans",
+        fileName: "lost.csv",
+        fileSizeBytes: 12,
+        fileKey: await storedFile("lost.csv"),
+        state: "received",
+        createdAt: old,
+      })
+      .$returningId();
+    const [{ id: gaveUpId }] = await db
+      .insert(imports)
+      .values({
+        accountId: account.accountId,
+        userId: account.userId,
+        kind: "plans",
+        fileName: "gave-up.csv",
+        fileSizeBytes: 12,
+        fileKey: await storedFile("gave-up.csv"),
+        state: "computing",
+        createdAt: old,
+      })
+      .$returningId();
+    const [{ id: recentId }] = await db
+      .insert(imports)
+      .values({
+        accountId: account.accountId,
+        userId: account.userId,
+        kind: "plans",
+        fileName: "recent.csv",
+        fileSizeBytes: 12,
+        state: "received",
+      })
+      .$returningId();
     // the job of "gave up" failed for good without its row being told (as when it stalls too often)
     const [gaveUp] = await db.select().from(imports).where(eq(imports.id, gaveUpId));
     await queue.add("import", { importId: gaveUpId }, { jobId: workJobId("import", gaveUp), attempts: 1 });
     const failing = startJobWorker({
       url: TEST_REDIS_URL,
       prefix: queue.opts.prefix,
-      handlers: { import: async () => Promise.reject(new UnrecoverableError("stalled more than allowable limit")), packet: async () => undefined, mail: async () => undefined, sweep: async () => undefined },
+      handlers: {
+        import: async () => Promise.reject(new UnrecoverableError("stalled more than allowable limit")),
+        packet: async () => undefined,
+        mail: async () => undefined,
+        sweep: async () => undefined,
+      },
       onFinalFailure: async () => undefined,
     });
-    for (let i = 0; i < 100 && (await queue.getFailedCount()) === 0; i++) await new Promise((r) => setTimeout(r, 100));
+    for (let i = 0; i < 100 && (await queue.getFailedCount()) === 0; i++)
+      await new Promise((r) => setTimeout(r, 100));
     await failing.close();
     expect(await queue.getFailedCount()).toBe(1);
 
@@ -74,6 +126,8 @@ describe("the sweep", () => {
     expect(result).toMatchObject({ failed: 1 });
     // sweeping again queues nothing twice
     await sweep({ db, queue });
-    expect((await queue.getJobs(["wait", "delayed", "prioritized"])).filter((j) => j.data.importId === lostId)).toHaveLength(1);
+    expect(
+      (await queue.getJobs(["wait", "delayed", "prioritized"])).filter((j) => j.data.importId === lostId),
+    ).toHaveLength(1);
   });
 });

@@ -28,17 +28,36 @@ import { EXAMPLE_PLANS_CSV, privateAccount } from "../support/private-account";
 import { killWorkerHard, startWorkerProcess, stopWorkerProcess } from "../support/queue";
 import { callRoute } from "../support/requests";
 import { EXAMPLE_PLAN_CODES } from "../support/import-fuzz";
-import { INTEGRATION_DATABASE, serviceEnv, TEST_MAILBOX_DIR, TEST_REDIS_URL, testDatabaseUrl } from "../support/test-env";
+import {
+  INTEGRATION_DATABASE,
+  serviceEnv,
+  TEST_MAILBOX_DIR,
+  TEST_REDIS_URL,
+  testDatabaseUrl,
+} from "../support/test-env";
 
 const LOTS = 6000;
 const PREFIX = `platload-crash-${process.pid}`;
 // A short claim (3 s) and a check every second, so a dead worker's job is picked up in seconds.
-const WORKER_ENV = { ...serviceEnv(INTEGRATION_DATABASE, PREFIX), PLATLOAD_JOB_LOCK_MS: "3000", PLATLOAD_JOB_STALLED_CHECK_MS: "1000", PLATLOAD_WORKER_CONCURRENCY: "1" };
+const WORKER_ENV = {
+  ...serviceEnv(INTEGRATION_DATABASE, PREFIX),
+  PLATLOAD_JOB_LOCK_MS: "3000",
+  PLATLOAD_JOB_STALLED_CHECK_MS: "1000",
+  PLATLOAD_WORKER_CONCURRENCY: "1",
+};
 const pause = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
 const COMPASS = ["N", "NE", "E", "SE", "S", "SW", "W", "NW"];
 
 function lotsCsv(prefix: string, n = LOTS) {
-  const rows = Array.from({ length: n }, (_, i) => [`${prefix}-${String(i + 1).padStart(5, "0")}`, `${i + 1} Crash Lane`, EXAMPLE_PLAN_CODES[i % EXAMPLE_PLAN_CODES.length], COMPASS[i % 8], "", "planned", ""]);
+  const rows = Array.from({ length: n }, (_, i) => [
+    `${prefix}-${String(i + 1).padStart(5, "0")}`,
+    `${i + 1} Crash Lane`,
+    EXAMPLE_PLAN_CODES[i % EXAMPLE_PLAN_CODES.length],
+    COMPASS[i % 8],
+    "",
+    "planned",
+    "",
+  ]);
   return new TextEncoder().encode([LOT_HEADERS.join(","), ...rows.map((r) => r.join(","))].join("\n"));
 }
 
@@ -53,17 +72,37 @@ describe("a worker killed mid-job", () => {
     workers.push(worker);
     return worker;
   };
-  const state = async (importId: number) => (await callRoute(importItemRoute.GET, { path: "/x", params: { importId: String(importId) }, cookie: account.cookie })).json.import as { state: string; progressPct: number };
-  const committedLots = async (communityId: number) => (await getDb().select({ n: count() }).from(lots).where(eq(lots.communityId, communityId)))[0].n;
+  const state = async (importId: number) =>
+    (
+      await callRoute(importItemRoute.GET, {
+        path: "/x",
+        params: { importId: String(importId) },
+        cookie: account.cookie,
+      })
+    ).json.import as { state: string; progressPct: number };
+  const committedLots = async (communityId: number) =>
+    (await getDb().select({ n: count() }).from(lots).where(eq(lots.communityId, communityId)))[0].n;
   /** Lots written but not committed yet, as another transaction's own uncommitted rows are seen. */
-  const uncommittedLots = async (communityId: number) => Number(((await dirty.query("SELECT COUNT(*) AS n FROM lots WHERE community_id = ?", [communityId])) as unknown as [{ n: number }[]])[0][0].n);
+  const uncommittedLots = async (communityId: number) =>
+    Number(
+      (
+        (await dirty.query("SELECT COUNT(*) AS n FROM lots WHERE community_id = ?", [
+          communityId,
+        ])) as unknown as [{ n: number }[]]
+      )[0][0].n,
+    );
 
   beforeAll(async () => {
     await queue.obliterate({ force: true });
     account = await privateAccount(getDb(), "crash");
     const form = new FormData();
     form.append("file", new File([EXAMPLE_PLANS_CSV], "example-plans.csv"));
-    const res = await callRoute(planImportRoute.POST, { path: "/x", method: "POST", cookie: account.cookie, form });
+    const res = await callRoute(planImportRoute.POST, {
+      path: "/x",
+      method: "POST",
+      cookie: account.cookie,
+      form,
+    });
     expect((await waitForImport(account.cookie, res.json.importId)).state).toBe("succeeded");
     dirty = await mysql.createConnection({ uri: testDatabaseUrl(INTEGRATION_DATABASE) });
     await dirty.query("SET SESSION TRANSACTION ISOLATION LEVEL READ UNCOMMITTED");
@@ -78,19 +117,43 @@ describe("a worker killed mid-job", () => {
 
   /** Queues a 6,000-lot import into a new community of the account, on the crash-test queue. */
   async function queueLotImport(label: string) {
-    const [{ id: communityId }] = await getDb().insert(communities).values({ accountId: account.accountId, name: `Crash ${label} ${Date.now()}`, conditions: DEMO_SITE }).$returningId();
-    const { importId, jobId } = await receiveImport({ db: getDb(), accountId: account.accountId, userId: account.userId, kind: "lots", communityId, fileName: `${label}.csv`, data: lotsCsv(label) });
+    const [{ id: communityId }] = await getDb()
+      .insert(communities)
+      .values({ accountId: account.accountId, name: `Crash ${label} ${Date.now()}`, conditions: DEMO_SITE })
+      .$returningId();
+    const { importId, jobId } = await receiveImport({
+      db: getDb(),
+      accountId: account.accountId,
+      userId: account.userId,
+      kind: "lots",
+      communityId,
+      fileName: `${label}.csv`,
+      data: lotsCsv(label),
+    });
     await enqueueJob("import", { importId }, { jobId, queue });
     return { communityId, importId, jobId };
   }
 
   /** After the import finished: every lot there once, whole, and one history entry for it. */
   async function expectWrittenOnce(communityId: number, importId: number) {
-    const [written] = await getDb().select({ n: count(), minVersion: min(lots.version), maxVersion: max(lots.version) }).from(lots).where(eq(lots.communityId, communityId));
+    const [written] = await getDb()
+      .select({ n: count(), minVersion: min(lots.version), maxVersion: max(lots.version) })
+      .from(lots)
+      .where(eq(lots.communityId, communityId));
     expect(written).toEqual({ n: LOTS, minVersion: 1, maxVersion: 1 });
-    const withoutResults = (await getDb().select({ id: lots.id, results: lots.results }).from(lots).where(eq(lots.communityId, communityId))).filter((l) => !l.results);
+    const withoutResults = (
+      await getDb()
+        .select({ id: lots.id, results: lots.results })
+        .from(lots)
+        .where(eq(lots.communityId, communityId))
+    ).filter((l) => !l.results);
     expect(withoutResults).toHaveLength(0);
-    const entries = (await getDb().select().from(auditLog).where(and(eq(auditLog.accountId, account.accountId), eq(auditLog.action, "lot_import")))).filter((e) => (e.after as { importId?: number }).importId === importId);
+    const entries = (
+      await getDb()
+        .select()
+        .from(auditLog)
+        .where(and(eq(auditLog.accountId, account.accountId), eq(auditLog.action, "lot_import")))
+    ).filter((e) => (e.after as { importId?: number }).importId === importId);
     expect(entries).toHaveLength(1);
   }
 
@@ -125,7 +188,9 @@ describe("a worker killed mid-job", () => {
     const done = await waitForImport(account.cookie, importId);
     expect(done.createdCount).toBe(LOTS);
     const job = await queue.getJob(jobId);
-    console.log(`crash while computing: states ${seen.join(" → ")}; job stalled ${job?.stalledCounter ?? "?"} time(s), finished by a second worker`);
+    console.log(
+      `crash while computing: states ${seen.join(" → ")}; job stalled ${job?.stalledCounter ?? "?"} time(s), finished by a second worker`,
+    );
     expect(job?.stalledCounter ?? 0).toBeGreaterThanOrEqual(1);
     for (const worker of workers.splice(0)) await stopWorkerProcess(worker);
   }, 120_000);
@@ -156,25 +221,53 @@ describe("a worker killed mid-job", () => {
     expect(done.state, JSON.stringify(done.errors)).toBe("succeeded");
     expect(done.createdCount).toBe(LOTS);
     await expectWrittenOnce(communityId, importId);
-    console.log(`crash inside the save: killed with ${uncommittedAtKill} of ${LOTS} lots written uncommitted; after it 0; a new worker wrote ${LOTS} lots once`);
+    console.log(
+      `crash inside the save: killed with ${uncommittedAtKill} of ${LOTS} lots written uncommitted; after it 0; a new worker wrote ${LOTS} lots once`,
+    );
     for (const worker of workers.splice(0)) await stopWorkerProcess(worker);
   }, 120_000);
 
   it("killed while rendering a permit packet (one to keep, one to e-mail): a new worker makes each once and sends the message once", async () => {
     // 120 lots, imported by the run's own worker
-    const [{ id: communityId }] = await getDb().insert(communities).values({ accountId: account.accountId, name: `Crash packets ${Date.now()}`, conditions: DEMO_SITE }).$returningId();
+    const [{ id: communityId }] = await getDb()
+      .insert(communities)
+      .values({ accountId: account.accountId, name: `Crash packets ${Date.now()}`, conditions: DEMO_SITE })
+      .$returningId();
     const community = { id: communityId };
-    const { importId } = await queueImport({ db: getDb(), accountId: account.accountId, userId: account.userId, kind: "lots", communityId, fileName: "packet-lots.csv", data: lotsCsv("packet", 120) });
+    const { importId } = await queueImport({
+      db: getDb(),
+      accountId: account.accountId,
+      userId: account.userId,
+      kind: "lots",
+      communityId,
+      fileName: "packet-lots.csv",
+      data: lotsCsv("packet", 120),
+    });
     expect((await waitForImport(account.cookie, importId)).state).toBe("succeeded");
-    const lotIds = (await getDb().select({ id: lots.id }).from(lots).where(eq(lots.communityId, community.id))).map((l) => l.id);
+    const lotIds = (
+      await getDb().select({ id: lots.id }).from(lots).where(eq(lots.communityId, community.id))
+    ).map((l) => l.id);
     const to = `crash.${Date.now()}@county-office.test`;
     const results: string[] = [];
     for (const sentTo of [undefined, [to]]) {
       const first = await start("worker F");
-      const { packetId, jobId } = await requestPacket({ db: getDb(), accountId: account.accountId, userId: account.userId, communityId: community.id, kind: "permit-packet", lotIds, to: sentTo, senderName: "Crash Tester", accountName: "Test builder" });
+      const { packetId, jobId } = await requestPacket({
+        db: getDb(),
+        accountId: account.accountId,
+        userId: account.userId,
+        communityId: community.id,
+        kind: "permit-packet",
+        lotIds,
+        to: sentTo,
+        senderName: "Crash Tester",
+        accountName: "Test builder",
+      });
       await enqueueJob("packet", { packetId }, { jobId, queue });
       for (let i = 0; i < 3000; i++) {
-        const [row] = await getDb().select({ state: packets.state }).from(packets).where(eq(packets.id, packetId));
+        const [row] = await getDb()
+          .select({ state: packets.state })
+          .from(packets)
+          .where(eq(packets.id, packetId));
         if (row.state === "rendering") break;
         expect(row.state).toBe("queued");
         await pause(10);
@@ -188,12 +281,21 @@ describe("a worker killed mid-job", () => {
       await start("worker G");
       const done = await waitForPacket(account.cookie, packetId);
       expect(done).toMatchObject({ state: "ready", lotCount: lotIds.length });
-      const entries = await getDb().select().from(auditLog).where(and(eq(auditLog.entityType, "packet"), eq(auditLog.entityId, packetId)));
+      const entries = await getDb()
+        .select()
+        .from(auditLog)
+        .where(and(eq(auditLog.entityType, "packet"), eq(auditLog.entityId, packetId)));
       expect(entries).toHaveLength(1);
-      const file = await callRoute(packetRoute.GET, { path: "/x", params: { packetId: String(packetId) }, cookie: account.cookie });
+      const file = await callRoute(packetRoute.GET, {
+        path: "/x",
+        params: { packetId: String(packetId) },
+        cookie: account.cookie,
+      });
       expect(file.status).toBe(200);
       expect(file.text.startsWith("%PDF-")).toBe(true);
-      results.push(`${sentTo ? "e-mailed" : "kept"} packet: killed while rendering, made once by a new worker`);
+      results.push(
+        `${sentTo ? "e-mailed" : "kept"} packet: killed while rendering, made once by a new worker`,
+      );
       for (const worker of workers.splice(0)) await stopWorkerProcess(worker);
     }
     // the e-mailed one reached the mailbox exactly once

@@ -5,7 +5,8 @@ import { testDatabaseUrl } from "./test-env";
 
 /** Drops and creates a database on the test instance and applies every migration to it. */
 export async function freshDatabase(name: string): Promise<void> {
-  if (!/^platload_test[a-z0-9_]*$/.test(name)) throw new Error(`refusing to recreate ${name}: test databases are named platload_test*`);
+  if (!/^platload_test[a-z0-9_]*$/.test(name))
+    throw new Error(`refusing to recreate ${name}: test databases are named platload_test*`);
   const admin = await mysql.createConnection({ uri: testDatabaseUrl("mysql").replace(/\/mysql$/, "/") });
   try {
     await admin.query(`DROP DATABASE IF EXISTS \`${name}\``);

@@ -28,7 +28,12 @@ export function baseTables(): Record<ImportKind, BaseTable> {
   return {
     plans: { headers: plans.headers, rows: plans.rows.slice(0, 2).map((r) => r.cells) },
     equipment: { headers: catalog.headers, rows: catalog.rows.map((r) => r.cells) },
-    lots: { headers: lots.headers, rows: lots.rows.map((r, i) => r.cells.map((c, j) => (j === planColumn ? EXAMPLE_PLAN_CODES[i % EXAMPLE_PLAN_CODES.length] : c))) },
+    lots: {
+      headers: lots.headers,
+      rows: lots.rows.map((r, i) =>
+        r.cells.map((c, j) => (j === planColumn ? EXAMPLE_PLAN_CODES[i % EXAMPLE_PLAN_CODES.length] : c)),
+      ),
+    },
   };
 }
 
@@ -40,7 +45,40 @@ const cellText = fc.oneof(
   { weight: 1, arbitrary: fc.integer({ min: -1e9, max: 1e9 }).map(String) },
   {
     weight: 3,
-    arbitrary: fc.constantFrom("", " ", "-45", "1-80", "=1/0", "=A1+1", "=bedrooms*", "1e309", "NaN", "Infinity", '"', "'", ";", "\t", "\n", "\r\n", "0x10", "١٢", "12,5", "N", "sideways", "yes", "2027-02-30", "99999999999999999999", "-0", "°F", "ft²", "\u0000", "\uFEFF", "<script>", "%", "$-3"),
+    arbitrary: fc.constantFrom(
+      "",
+      " ",
+      "-45",
+      "1-80",
+      "=1/0",
+      "=A1+1",
+      "=bedrooms*",
+      "1e309",
+      "NaN",
+      "Infinity",
+      '"',
+      "'",
+      ";",
+      "\t",
+      "\n",
+      "\r\n",
+      "0x10",
+      "١٢",
+      "12,5",
+      "N",
+      "sideways",
+      "yes",
+      "2027-02-30",
+      "99999999999999999999",
+      "-0",
+      "°F",
+      "ft²",
+      "\u0000",
+      "\uFEFF",
+      "<script>",
+      "%",
+      "$-3",
+    ),
   },
 );
 
@@ -56,15 +94,32 @@ type Mutation =
   | { op: "wide"; columns: number };
 
 const mutation: fc.Arbitrary<Mutation> = fc.oneof(
-  { weight: 8, arbitrary: fc.record({ op: fc.constant("cell" as const), row: fc.nat(60), column: fc.nat(140), text: cellText }) },
-  { weight: 2, arbitrary: fc.record({ op: fc.constant("header" as const), column: fc.nat(140), text: cellText }) },
+  {
+    weight: 8,
+    arbitrary: fc.record({
+      op: fc.constant("cell" as const),
+      row: fc.nat(60),
+      column: fc.nat(140),
+      text: cellText,
+    }),
+  },
+  {
+    weight: 2,
+    arbitrary: fc.record({ op: fc.constant("header" as const), column: fc.nat(140), text: cellText }),
+  },
   { weight: 1, arbitrary: fc.record({ op: fc.constant("drop-column" as const), column: fc.nat(140) }) },
   { weight: 1, arbitrary: fc.record({ op: fc.constant("duplicate-column" as const), column: fc.nat(140) }) },
   { weight: 1, arbitrary: fc.record({ op: fc.constant("extra-column" as const), text: cellText }) },
   { weight: 1, arbitrary: fc.record({ op: fc.constant("drop-rows" as const), keep: fc.nat(5) }) },
   { weight: 1, arbitrary: fc.record({ op: fc.constant("duplicate-row" as const), row: fc.nat(60) }) },
-  { weight: 1, arbitrary: fc.record({ op: fc.constant("blank-rows" as const), count: fc.integer({ min: 1, max: 5 }) }) },
-  { weight: 1, arbitrary: fc.record({ op: fc.constant("wide" as const), columns: fc.integer({ min: 1, max: 400 }) }) },
+  {
+    weight: 1,
+    arbitrary: fc.record({ op: fc.constant("blank-rows" as const), count: fc.integer({ min: 1, max: 5 }) }),
+  },
+  {
+    weight: 1,
+    arbitrary: fc.record({ op: fc.constant("wide" as const), columns: fc.integer({ min: 1, max: 400 }) }),
+  },
 );
 
 function mutate(base: BaseTable, mutations: Mutation[]): BaseTable {
@@ -112,7 +167,16 @@ function mutate(base: BaseTable, mutations: Mutation[]): BaseTable {
   return { headers, rows };
 }
 
-type Encoding = "csv" | "csv-crlf-bom" | "csv-semicolon" | "csv-tab" | "csv-unquoted" | "xlsx" | "csv-named-xlsx" | "truncated-csv" | "truncated-xlsx";
+type Encoding =
+  | "csv"
+  | "csv-crlf-bom"
+  | "csv-semicolon"
+  | "csv-tab"
+  | "csv-unquoted"
+  | "xlsx"
+  | "csv-named-xlsx"
+  | "truncated-csv"
+  | "truncated-xlsx";
 
 /** A generated file as a description; `encodeFuzzFile` turns it into bytes. */
 export interface FuzzFileSpec {
@@ -125,7 +189,11 @@ export interface FuzzFileSpec {
 }
 
 export const fuzzFileSpec: fc.Arbitrary<FuzzFileSpec> = fc.record({
-  kind: fc.oneof({ weight: 17, arbitrary: fc.constant("table" as const) }, { weight: 2, arbitrary: fc.constant("bytes" as const) }, { weight: 1, arbitrary: fc.constant("zip-junk" as const) }),
+  kind: fc.oneof(
+    { weight: 17, arbitrary: fc.constant("table" as const) },
+    { weight: 2, arbitrary: fc.constant("bytes" as const) },
+    { weight: 1, arbitrary: fc.constant("zip-junk" as const) },
+  ),
   encoding: fc.oneof(
     { weight: 12, arbitrary: fc.constant("csv" as const) },
     { weight: 2, arbitrary: fc.constant("csv-crlf-bom" as const) },
@@ -146,12 +214,26 @@ export const fuzzFileSpec: fc.Arbitrary<FuzzFileSpec> = fc.record({
 const quote = (c: string) => (/[",;\t\r\n]/.test(c) || /^\s|\s$/.test(c) ? `"${c.replace(/"/g, '""')}"` : c);
 
 /** The bytes and name of a generated file, and a short description of what it is. */
-export async function encodeFuzzFile(base: BaseTable, spec: FuzzFileSpec): Promise<{ fileName: string; data: Uint8Array; how: string }> {
-  if (spec.kind === "bytes") return { fileName: `random${spec.extension}`, data: spec.bytes, how: `${spec.bytes.length} random bytes named ${spec.extension}` };
-  if (spec.kind === "zip-junk") return { fileName: "junk.xlsx", data: new Uint8Array([0x50, 0x4b, 0x03, 0x04, ...spec.bytes]), how: "zip signature then random bytes" };
+export async function encodeFuzzFile(
+  base: BaseTable,
+  spec: FuzzFileSpec,
+): Promise<{ fileName: string; data: Uint8Array; how: string }> {
+  if (spec.kind === "bytes")
+    return {
+      fileName: `random${spec.extension}`,
+      data: spec.bytes,
+      how: `${spec.bytes.length} random bytes named ${spec.extension}`,
+    };
+  if (spec.kind === "zip-junk")
+    return {
+      fileName: "junk.xlsx",
+      data: new Uint8Array([0x50, 0x4b, 0x03, 0x04, ...spec.bytes]),
+      how: "zip signature then random bytes",
+    };
   const table = mutate(base, spec.mutations);
   const how = `${spec.encoding}, mutations ${JSON.stringify(spec.mutations)}`;
-  const text = (separator: string, newline: string, quoting: (c: string) => string) => [table.headers, ...table.rows].map((r) => r.map(quoting).join(separator)).join(newline);
+  const text = (separator: string, newline: string, quoting: (c: string) => string) =>
+    [table.headers, ...table.rows].map((r) => r.map(quoting).join(separator)).join(newline);
   const utf8 = (s: string) => new TextEncoder().encode(s);
   switch (spec.encoding) {
     case "csv":
@@ -173,11 +255,13 @@ export async function encodeFuzzFile(base: BaseTable, spec: FuzzFileSpec): Promi
     case "xlsx":
     case "truncated-xlsx": {
       const full = await writeXlsx(table.headers, table.rows);
-      const data = spec.encoding === "xlsx" ? full : full.slice(0, Math.max(4, Math.floor(full.length * spec.cut)));
+      const data =
+        spec.encoding === "xlsx" ? full : full.slice(0, Math.max(4, Math.floor(full.length * spec.cut)));
       return { fileName: "file.xlsx", data, how };
     }
   }
 }
 
 /** Words that would mean a reader's internals leaked into a message meant for a builder. */
-export const INTERNALS = /central directory|end of data|jszip|corrupted zip|invalid signature|\bat [\w.]+ \(|\[object Object\]|undefined/i;
+export const INTERNALS =
+  /central directory|end of data|jszip|corrupted zip|invalid signature|\bat [\w.]+ \(|\[object Object\]|undefined/i;

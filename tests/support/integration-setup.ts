@@ -15,7 +15,10 @@ export default async function setup() {
   execFileSync("bash", [path.join(root, "scripts/s3.sh"), "start", "test"], { stdio: "inherit" });
   await freshDatabase(INTEGRATION_DATABASE);
   await emptyQueue(INTEGRATION_QUEUE_PREFIX);
-  const worker = await startWorkerProcess(serviceEnv(INTEGRATION_DATABASE, INTEGRATION_QUEUE_PREFIX), { label: "integration worker", quiet: true });
+  const worker = await startWorkerProcess(serviceEnv(INTEGRATION_DATABASE, INTEGRATION_QUEUE_PREFIX), {
+    label: "integration worker",
+    quiet: true,
+  });
   return async () => {
     await stopWorkerProcess(worker);
   };

@@ -9,12 +9,24 @@ import { sessionCookie } from "./requests";
 
 export async function privateAccount(db: Database, label: string) {
   const slug = `${label}-${Date.now()}-${Math.floor(Math.random() * 1e6)}`;
-  const [{ id: accountId }] = await db.insert(accounts).values({ name: `Test builder ${label}`, slug }).$returningId();
-  const [{ id: userId }] = await db.insert(users).values({ email: `${slug}@builder.test`, name: `Admin ${label}` }).$returningId();
+  const [{ id: accountId }] = await db
+    .insert(accounts)
+    .values({ name: `Test builder ${label}`, slug })
+    .$returningId();
+  const [{ id: userId }] = await db
+    .insert(users)
+    .values({ email: `${slug}@builder.test`, name: `Admin ${label}` })
+    .$returningId();
   await db.insert(memberships).values({ userId, accountId, role: "admin" });
-  const [{ id: communityId }] = await db.insert(communities).values({ accountId, name: `Community ${label}`, conditions: DEMO_SITE }).$returningId();
+  const [{ id: communityId }] = await db
+    .insert(communities)
+    .values({ accountId, name: `Community ${label}`, conditions: DEMO_SITE })
+    .$returningId();
   return { accountId, userId, communityId, cookie: await sessionCookie({ userId, accountId }) };
 }
 
 /** The example plan library, which the generated lots files name. */
-export const EXAMPLE_PLANS_CSV = readFileSync(path.resolve(__dirname, "../../templates/example-plans.csv"), "utf8");
+export const EXAMPLE_PLANS_CSV = readFileSync(
+  path.resolve(__dirname, "../../templates/example-plans.csv"),
+  "utf8",
+);

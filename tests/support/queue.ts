@@ -21,14 +21,21 @@ export async function emptyQueue(prefix: string): Promise<void> {
  * Starts `npm run worker`'s command as a child process with the given environment and resolves
  * once it is taking jobs (it prints "platload worker <pid> on queue …").
  */
-export function startWorkerProcess(env: Record<string, string>, { label = "worker", quiet = false } = {}): Promise<ChildProcess> {
-  const child = spawn(path.join(root, "node_modules/.bin/tsx"), ["--conditions=react-server", "scripts/worker.ts"], {
-    cwd: root,
-    env: { ...process.env, ...env },
-    stdio: ["ignore", "pipe", "pipe"],
-    // Its own process group, so a hard kill reaches the node process tsx starts, not tsx alone.
-    detached: true,
-  });
+export function startWorkerProcess(
+  env: Record<string, string>,
+  { label = "worker", quiet = false } = {},
+): Promise<ChildProcess> {
+  const child = spawn(
+    path.join(root, "node_modules/.bin/tsx"),
+    ["--conditions=react-server", "scripts/worker.ts"],
+    {
+      cwd: root,
+      env: { ...process.env, ...env },
+      stdio: ["ignore", "pipe", "pipe"],
+      // Its own process group, so a hard kill reaches the node process tsx starts, not tsx alone.
+      detached: true,
+    },
+  );
   return new Promise((resolve, reject) => {
     let seen = "";
     const timer = setTimeout(() => reject(new Error(`${label} did not start within 60 s:\n${seen}`)), 60_000);
@@ -61,7 +68,10 @@ export async function killWorkerHard(child: ChildProcess): Promise<void> {
 }
 
 /** Stops a worker process the tests started and waits for it to be gone (killed after 8 s). */
-export async function stopWorkerProcess(child: ChildProcess, signal: NodeJS.Signals = "SIGTERM"): Promise<void> {
+export async function stopWorkerProcess(
+  child: ChildProcess,
+  signal: NodeJS.Signals = "SIGTERM",
+): Promise<void> {
   if (child.exitCode !== null || child.signalCode !== null) return;
   await new Promise<void>((resolve) => {
     const timer = setTimeout(() => process.kill(-child.pid!, "SIGKILL"), 8000);

@@ -10,7 +10,15 @@ const root = path.resolve(__dirname, "../..");
 export const HTTP_METHODS = ["GET", "HEAD", "POST", "PUT", "PATCH", "DELETE", "OPTIONS"] as const;
 export type HttpMethod = (typeof HTTP_METHODS)[number];
 /** Route segment settings a route file may export besides handlers. */
-const SEGMENT_SETTINGS = new Set(["dynamic", "dynamicParams", "revalidate", "fetchCache", "runtime", "preferredRegion", "maxDuration"]);
+const SEGMENT_SETTINGS = new Set([
+  "dynamic",
+  "dynamicParams",
+  "revalidate",
+  "fetchCache",
+  "runtime",
+  "preferredRegion",
+  "maxDuration",
+]);
 
 export interface RouteHandler {
   /** "/api/plans/[planId]" */
@@ -55,12 +63,22 @@ export function routeParams(routePath: string): string[] {
 export async function loadRoutes(): Promise<RouteFile[]> {
   const loaded: RouteFile[] = [];
   for (const file of routeFiles()) {
-    const mod = (await import(/* @vite-ignore */ pathToFileURL(path.join(root, file)).href)) as Record<string, unknown>;
+    const mod = (await import(/* @vite-ignore */ pathToFileURL(path.join(root, file)).href)) as Record<
+      string,
+      unknown
+    >;
     const routePath = routePathOf(file);
     const handlers: RouteHandler[] = [];
     const strayExports: string[] = [];
     for (const [name, value] of Object.entries(mod)) {
-      if ((HTTP_METHODS as readonly string[]).includes(name)) handlers.push({ path: routePath, file, method: name as HttpMethod, handler: value, guard: routeGuardOf(value) });
+      if ((HTTP_METHODS as readonly string[]).includes(name))
+        handlers.push({
+          path: routePath,
+          file,
+          method: name as HttpMethod,
+          handler: value,
+          guard: routeGuardOf(value),
+        });
       else if (!SEGMENT_SETTINGS.has(name) && name !== "default") strayExports.push(name);
     }
     loaded.push({ path: routePath, file, handlers, strayExports });
@@ -72,11 +90,30 @@ export async function loadRoutes(): Promise<RouteFile[]> {
  * The handlers that do not go through apiRoute (session, account and permission), each with why.
  * Everything else under app/api must be an apiRoute handler with a known permission.
  */
-export const NOT_MEMBER_ROUTES: Record<string, { kind: Exclude<RouteGuard["kind"], "member">; why: string }> = {
-  "GET /api/auth/[...nextauth]": { kind: "next-auth", why: "next-auth's session, CSRF-token and provider endpoints" },
-  "POST /api/auth/[...nextauth]": { kind: "next-auth", why: "sign-in and sign-out, guarded by next-auth's CSRF token and the sign-in limits" },
-  "GET /api/invitations/[token]": { kind: "public", why: "an invitation link opened by someone without a sign-in yet; the token is the secret" },
-  "POST /api/invitations/[token]": { kind: "public", why: "accepting an invitation sets the first password; the token is the secret" },
-  "GET /api/session/account": { kind: "session", why: "the account picker: signed in, before an account is chosen" },
-  "POST /api/session/account": { kind: "session", why: "choosing an account: only one of the person's own memberships" },
-};
+export const NOT_MEMBER_ROUTES: Record<string, { kind: Exclude<RouteGuard["kind"], "member">; why: string }> =
+  {
+    "GET /api/auth/[...nextauth]": {
+      kind: "next-auth",
+      why: "next-auth's session, CSRF-token and provider endpoints",
+    },
+    "POST /api/auth/[...nextauth]": {
+      kind: "next-auth",
+      why: "sign-in and sign-out, guarded by next-auth's CSRF token and the sign-in limits",
+    },
+    "GET /api/invitations/[token]": {
+      kind: "public",
+      why: "an invitation link opened by someone without a sign-in yet; the token is the secret",
+    },
+    "POST /api/invitations/[token]": {
+      kind: "public",
+      why: "accepting an invitation sets the first password; the token is the secret",
+    },
+    "GET /api/session/account": {
+      kind: "session",
+      why: "the account picker: signed in, before an account is chosen",
+    },
+    "POST /api/session/account": {
+      kind: "session",
+      why: "choosing an account: only one of the person's own memberships",
+    },
+  };

@@ -5,7 +5,11 @@ import { useState } from "react";
 import { FormError } from "@/components/ui/field";
 import { api } from "@/lib/client/api";
 
-export function AccountPicker({ accounts }: { accounts: { accountId: number; accountName: string; role: string }[] }) {
+export function AccountPicker({
+  accounts,
+}: {
+  accounts: { accountId: number; accountName: string; role: string }[];
+}) {
   const router = useRouter();
   const [error, setError] = useState<string | null>(null);
 
@@ -25,7 +29,11 @@ export function AccountPicker({ accounts }: { accounts: { accountId: number; acc
       <ul className="divide-y divide-zinc-200 rounded border border-zinc-200">
         {accounts.map((a) => (
           <li key={a.accountId}>
-            <button type="button" onClick={() => choose(a.accountId)} className="flex w-full items-center justify-between px-3 py-2.5 text-left hover:bg-accent-50">
+            <button
+              type="button"
+              onClick={() => choose(a.accountId)}
+              className="flex w-full items-center justify-between px-3 py-2.5 text-left hover:bg-accent-50"
+            >
               <span className="font-medium">{a.accountName}</span>
               <span className="text-xs capitalize text-zinc-500">{a.role}</span>
             </button>

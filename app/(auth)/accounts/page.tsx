@@ -18,10 +18,14 @@ export default async function AccountsPage() {
     <div>
       <h1 className="mb-1 text-base font-semibold">Choose an account</h1>
       {memberships.length === 0 ? (
-        <p className="text-zinc-600">You are not a member of any builder account yet. Ask an admin for an invitation.</p>
+        <p className="text-zinc-600">
+          You are not a member of any builder account yet. Ask an admin for an invitation.
+        </p>
       ) : (
         <>
-          <p className="mb-4 text-zinc-600">You work for more than one builder. Pick the one to open; you can switch later.</p>
+          <p className="mb-4 text-zinc-600">
+            You work for more than one builder. Pick the one to open; you can switch later.
+          </p>
           <AccountPicker accounts={memberships} />
         </>
       )}

@@ -20,7 +20,11 @@ export function SignInForm() {
     const result = await signIn("credentials", { email, password, redirect: false });
     setBusy(false);
     if (!result || result.error) {
-      setError(result?.error && result.error !== "CredentialsSignin" ? result.error : "That e-mail and password do not match an account.");
+      setError(
+        result?.error && result.error !== "CredentialsSignin"
+          ? result.error
+          : "That e-mail and password do not match an account.",
+      );
       return;
     }
     const next = params.get("callbackUrl");
@@ -32,8 +36,24 @@ export function SignInForm() {
     <form onSubmit={submit} noValidate>
       <h1 className="mb-4 text-base font-semibold">Sign in</h1>
       <FormError message={error} testId="sign-in-error" />
-      <TextField label="E-mail" name="email" type="email" autoComplete="username" value={email} onChange={setEmail} required />
-      <TextField label="Password" name="password" type="password" autoComplete="current-password" value={password} onChange={setPassword} required />
+      <TextField
+        label="E-mail"
+        name="email"
+        type="email"
+        autoComplete="username"
+        value={email}
+        onChange={setEmail}
+        required
+      />
+      <TextField
+        label="Password"
+        name="password"
+        type="password"
+        autoComplete="current-password"
+        value={password}
+        onChange={setPassword}
+        required
+      />
       <Button type="submit" disabled={busy} className="mt-2 w-full">
         {busy ? "Signing in…" : "Sign in"}
       </Button>

@@ -14,7 +14,11 @@ export default async function AccountSettingsPage() {
     <div className="flex max-w-4xl flex-col gap-4">
       <PageHeader
         title="Account settings"
-        description={canEdit ? `Settings that apply to everything in ${member.accountName}.` : `Settings that apply to everything in ${member.accountName}. Only an admin can change them.`}
+        description={
+          canEdit
+            ? `Settings that apply to everything in ${member.accountName}.`
+            : `Settings that apply to everything in ${member.accountName}. Only an admin can change them.`
+        }
       />
       <LoadProcedureForm canEdit={canEdit} />
       <p className="text-xs text-zinc-600">

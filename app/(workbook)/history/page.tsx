@@ -12,7 +12,10 @@ export default async function HistoryPage() {
   const entries = await listAudit({ db: getDb(), accountId: member.accountId });
   return (
     <div className="max-w-5xl">
-      <PageHeader title="History" description="Every change in this account: who, when, and what. The newest 200 entries." />
+      <PageHeader
+        title="History"
+        description="Every change in this account: who, when, and what. The newest 200 entries."
+      />
       <DataTable
         testId="history-table"
         rows={entries}

@@ -12,7 +12,11 @@ export default async function TeamPage() {
     <div className="max-w-5xl">
       <PageHeader
         title="Team"
-        description={canManage ? `Who works in ${member.accountName}, and what each role may do.` : `Who works in ${member.accountName}. Only an admin can invite people or change roles.`}
+        description={
+          canManage
+            ? `Who works in ${member.accountName}, and what each role may do.`
+            : `Who works in ${member.accountName}. Only an admin can invite people or change roles.`
+        }
       />
       <TeamPanel canManage={canManage} currentUserId={member.userId} />
     </div>

@@ -8,5 +8,11 @@ const querySchema = z.object({ format: z.enum(["xlsx", "csv"]).default("xlsx") }
 export const GET = apiRoute({ permission: "read" }, async ({ db, member, request }) => {
   const { format } = querySchema.parse(Object.fromEntries(request.nextUrl.searchParams));
   const file = await accountEquipmentScheduleFile({ db, accountId: member.accountId, format });
-  return new Response(file.body as BlobPart, { headers: { "content-type": file.contentType, "content-disposition": `attachment; filename="${file.fileName}"`, "cache-control": "no-store" } });
+  return new Response(file.body as BlobPart, {
+    headers: {
+      "content-type": file.contentType,
+      "content-disposition": `attachment; filename="${file.fileName}"`,
+      "cache-control": "no-store",
+    },
+  });
 });

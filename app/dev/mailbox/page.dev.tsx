@@ -18,7 +18,9 @@ export default async function MailboxPage() {
     return (
       <main className="mx-auto max-w-4xl px-4 py-6" data-testid="mailbox-refused">
         <h1 className="mb-1 text-lg font-semibold">Development mailbox</h1>
-        <p className="text-zinc-600">Only an admin of {member.accountName} can read the account&apos;s development mailbox.</p>
+        <p className="text-zinc-600">
+          Only an admin of {member.accountName} can read the account&apos;s development mailbox.
+        </p>
       </main>
     );
   }
@@ -27,7 +29,8 @@ export default async function MailboxPage() {
     <main className="mx-auto max-w-4xl px-4 py-6">
       <h1 className="mb-1 text-lg font-semibold">Development mailbox</h1>
       <p className="mb-4 text-zinc-600">
-        Every message Platload sent for {member.accountName} through the local fake SMTP server, newest first. Nothing here left this machine.
+        Every message Platload sent for {member.accountName} through the local fake SMTP server, newest first.
+        Nothing here left this machine.
       </p>
       {messages.length === 0 ? <p className="text-zinc-500">No messages yet.</p> : null}
       <ul className="space-y-3" data-testid="mailbox">
@@ -47,7 +50,8 @@ export default async function MailboxPage() {
             </pre>
             {m.attachments.length > 0 ? (
               <p className="mt-2 text-xs text-zinc-600">
-                Attachments: {m.attachments.map((a) => `${a.filename} (${Math.round(a.size / 1024)} KB)`).join(", ")}
+                Attachments:{" "}
+                {m.attachments.map((a) => `${a.filename} (${Math.round(a.size / 1024)} KB)`).join(", ")}
               </p>
             ) : null}
           </li>

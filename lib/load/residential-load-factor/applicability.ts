@@ -12,7 +12,12 @@
 import { FRACTION_OF_DAILY_RANGE } from "../design-day";
 import { M2_PER_FT2, BTUH_PER_W } from "../units";
 import { exposureName, type RlfHouse } from "./procedure";
-import { INTERNAL_GAINS_EQ_30_31, M_PER_FT, SEA_LEVEL_FACTORS_MAX_ELEVATION_M, TABLE_1_LIMITS } from "./tables";
+import {
+  INTERNAL_GAINS_EQ_30_31,
+  M_PER_FT,
+  SEA_LEVEL_FACTORS_MAX_ELEVATION_M,
+  TABLE_1_LIMITS,
+} from "./tables";
 
 export type RlfLimit =
   | "latitude"
@@ -42,7 +47,8 @@ export interface RlfApplicabilityFinding {
 }
 
 /** Mean of HoF 2021 ch. 14 Table 6 fractions of the daily range (0.536): design-day mean = t_o − 0.536·DR. */
-const MEAN_FRACTION_OF_DAILY_RANGE = FRACTION_OF_DAILY_RANGE.reduce((a, b) => a + b, 0) / FRACTION_OF_DAILY_RANGE.length;
+const MEAN_FRACTION_OF_DAILY_RANGE =
+  FRACTION_OF_DAILY_RANGE.reduce((a, b) => a + b, 0) / FRACTION_OF_DAILY_RANGE.length;
 
 const round1 = (x: number) => Math.round(x * 10) / 10;
 const pct = (x: number) => `${round1(x * 100)} %`;
@@ -142,7 +148,10 @@ export function checkRlfApplicability(house: RlfHouse): RlfApplicabilityFinding[
       exceedsBy: Math.round(elevationM - lim.elevationMaxM),
       message: `The site is at ${Math.round(elevationM)} m (${Math.round(s.elevationFt)} ft), ${Math.round(elevationM - lim.elevationMaxM)} m above the 2000 m the procedure covers.`,
     });
-  } else if (house.options?.airFactorElevationCorrection === false && elevationM > SEA_LEVEL_FACTORS_MAX_ELEVATION_M) {
+  } else if (
+    house.options?.airFactorElevationCorrection === false &&
+    elevationM > SEA_LEVEL_FACTORS_MAX_ELEVATION_M
+  ) {
     out.push({
       limit: "elevation",
       severity: "caution",
@@ -156,7 +165,8 @@ export function checkRlfApplicability(house: RlfHouse): RlfApplicabilityFinding[
 
   // Construction.
   const construction = house.construction ?? "light-frame";
-  const constructionRange = "lightweight frame (wood or metal framing, wood or stucco siding); masonry veneer over frame is conservative";
+  const constructionRange =
+    "lightweight frame (wood or metal framing, wood or stucco siding); masonry veneer over frame is conservative";
   if (construction === "structural-masonry" || construction === "other") {
     out.push({
       limit: "construction",
@@ -175,7 +185,8 @@ export function checkRlfApplicability(house: RlfHouse): RlfApplicabilityFinding[
       unit: "",
       allowedRange: constructionRange,
       exceedsBy: null,
-      message: "Masonry veneer over frame: the procedure may be applied; its wall loads are conservative for this construction.",
+      message:
+        "Masonry veneer over frame: the procedure may be applied; its wall loads are conservative for this construction.",
     });
   }
 
@@ -250,7 +261,8 @@ export function checkRlfApplicability(house: RlfHouse): RlfApplicabilityFinding[
   }
   if (house.internalGains !== undefined) {
     const g = INTERNAL_GAINS_EQ_30_31.sensible;
-    const typicalBtuh = (g.constantW + g.perM2W * floor * M2_PER_FT2 + g.perOccupantW * occupants) * BTUH_PER_W;
+    const typicalBtuh =
+      (g.constantW + g.perM2W * floor * M2_PER_FT2 + g.perOccupantW * occupants) * BTUH_PER_W;
     if (house.internalGains.sensibleBtuh > typicalBtuh) {
       const by = house.internalGains.sensibleBtuh - typicalBtuh;
       out.push({
@@ -290,7 +302,8 @@ export function checkRlfApplicability(house: RlfHouse): RlfApplicabilityFinding[
     unit: "°F",
     allowedRange: "1.7 K (3.1 °F) swing above the cooling set point at the peak",
     exceedsBy: null,
-    message: "The cooling factors assume the indoor temperature may rise up to 1.7 K (3.1 °F) above the set point at the peak.",
+    message:
+      "The cooling factors assume the indoor temperature may rise up to 1.7 K (3.1 °F) above the set point at the peak.",
   });
   out.push({
     limit: "distribution-losses",
@@ -299,7 +312,8 @@ export function checkRlfApplicability(house: RlfHouse): RlfApplicabilityFinding[
     unit: "",
     allowedRange: "typical distribution losses",
     exceedsBy: null,
-    message: "The duct factors are typical values (guidance only); extensive duct runs in unconditioned spaces call for an hourly method.",
+    message:
+      "The duct factors are typical values (guidance only); extensive duct runs in unconditioned spaces call for an hourly method.",
   });
   return out;
 }

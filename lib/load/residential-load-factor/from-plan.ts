@@ -22,7 +22,14 @@ import { facadeAzimuthsDeg, normalizeAzimuth } from "../facing";
 import { ENGINE_VERSION } from "../version";
 import { LoadInputError } from "../errors";
 import { internalGains, occupantsOf } from "../internal-gains";
-import { FACADES, type DuctLocation, type Facade, type PlanInput, type SiteConditions, type WindowGroup } from "../input";
+import {
+  FACADES,
+  type DuctLocation,
+  type Facade,
+  type PlanInput,
+  type SiteConditions,
+  type WindowGroup,
+} from "../input";
 import {
   COOLING_LATENT_COMPONENTS,
   COOLING_SENSIBLE_COMPONENTS,
@@ -69,7 +76,6 @@ export interface RlfFromPlanOptions {
 
 const FACADE_OFFSET_DEG: Record<Facade, number> = { front: 0, left: 90, back: 180, right: 270 };
 
-
 /** Ground temperature for below-grade heating losses: the engine's rough estimate, the mean of the design dry bulbs (from memory). */
 function groundHeatingF(site: SiteConditions): number {
   return (site.heatingOutdoorDbF + site.coolingOutdoorDbF) / 2;
@@ -95,7 +101,9 @@ interface PlanBase {
 function ductsOf(plan: PlanInput, notes: string[]): RlfDucts {
   const d = plan.ducts;
   if (d.method === "conduction-leakage") {
-    notes.push("Ducts: the plan asks for the conduction-leakage model; the RLF method uses the ch. 17 Table 6 duct factors instead.");
+    notes.push(
+      "Ducts: the plan asks for the conduction-leakage model; the RLF method uses the ch. 17 Table 6 duct factors instead.",
+    );
   }
   const table = (location: "attic" | "basement" | "crawlspace"): RlfDucts => ({
     method: "table-6",
@@ -122,7 +130,9 @@ function ductsOf(plan: PlanInput, notes: string[]): RlfDucts {
       );
       return table("basement");
     case "garage":
-      notes.push("Ducts in the garage: ch. 17 Table 6 has no row for it; the attic row is used (the hottest buffer in cooling, outdoor temperature in heating; conservative).");
+      notes.push(
+        "Ducts in the garage: ch. 17 Table 6 has no row for it; the attic row is used (the hottest buffer in cooling, outdoor temperature in heating; conservative).",
+      );
       return table("attic");
   }
 }
@@ -150,20 +160,37 @@ function buildBase(plan: PlanInput, site: SiteConditions, options: RlfFromPlanOp
     }
     const netFt2 = f.grossWallAreaFt2 - windowFt2 - f.doorAreaFt2;
     if (netFt2 > 0) {
-      opaque.push({ label: `Wall, ${facade}`, tag: "walls", kind: "wall", areaFt2: netFt2, uBtuPerHrFt2F: wallU(wall, "heating") });
+      opaque.push({
+        label: `Wall, ${facade}`,
+        tag: "walls",
+        kind: "wall",
+        areaFt2: netFt2,
+        uBtuPerHrFt2F: wallU(wall, "heating"),
+      });
     }
     if (f.doorAreaFt2 > 0) {
-      opaque.push({ label: `Door, ${facade}`, tag: "doors", kind: "door", areaFt2: f.doorAreaFt2, uBtuPerHrFt2F: f.doorUFactor });
+      opaque.push({
+        label: `Door, ${facade}`,
+        tag: "doors",
+        kind: "door",
+        areaFt2: f.doorAreaFt2,
+        uBtuPerHrFt2F: f.doorUFactor,
+      });
     }
   }
   if (masonry) {
-    notes.push("Block walls: ch. 17 Table 7 has wood-frame factors only; they are applied to the block walls (the chapter: conservative for heavier construction).");
+    notes.push(
+      "Block walls: ch. 17 Table 7 has wood-frame factors only; they are applied to the block walls (the chapter: conservative for heavier construction).",
+    );
   }
-  notes.push("Wall colour does not enter the RLF wall factors (ch. 17 Table 7 has one solar term for every sunlit wood-frame wall or door).");
+  notes.push(
+    "Wall colour does not enter the RLF wall factors (ch. 17 Table 7 has one solar term for every sunlit wood-frame wall or door).",
+  );
 
   // Attic, roof, vaulted ceilings.
   const a = plan.attic;
-  const ceilingAreaFt2 = a.kind === "none" ? 0 : (a.ceilingAreaFt2 ?? plan.conditionedFloorAreaFt2 / plan.stories);
+  const ceilingAreaFt2 =
+    a.kind === "none" ? 0 : (a.ceilingAreaFt2 ?? plan.conditionedFloorAreaFt2 / plan.stories);
   let atticHeatingF: number | null = null;
   if (a.kind === "vented" && ceilingAreaFt2 > 0) {
     atticHeatingF = to; // ch. 17 section 8: the vented attic at the heating design outdoor temperature
@@ -226,23 +253,29 @@ function buildBase(plan: PlanInput, site: SiteConditions, options: RlfFromPlanOp
   if (fd.slabPerimeterFt > 0) {
     // As the hourly engine (lib/load/envelope.ts): an entered F-factor, else HoF 2021 ch. 18 Table 24 by edge
     // construction and insulation; the slab area entered, else the floor area per story.
-    const coveringR = options?.slabFloorCoveringR ?? SLAB_FLOOR_COVERING_R_SI[fd.slabFloorCovering] * W_M2K_PER_BTUH_FT2F;
+    const coveringR =
+      options?.slabFloorCoveringR ?? SLAB_FLOOR_COVERING_R_SI[fd.slabFloorCovering] * W_M2K_PER_BTUH_FT2F;
     slab = {
       label: "Slab",
       tag: "slab",
       perimeterFt: fd.slabPerimeterFt,
       fFactorBtuhPerFtF: fd.slabFFactor ?? slabFFactor(fd.slabEdgeInsulationR, fd.slabEdgeConstruction),
-      areaFt2: fd.kind === "slab-on-grade" ? (fd.slabAreaFt2 ?? plan.conditionedFloorAreaFt2 / plan.stories) : 0,
+      areaFt2:
+        fd.kind === "slab-on-grade" ? (fd.slabAreaFt2 ?? plan.conditionedFloorAreaFt2 / plan.stories) : 0,
       floorCoveringR: coveringR,
     };
     if (fd.kind === "slab-on-grade") {
       notes.push(
         `Slab: ${Math.round(slab.areaFt2)} ft²${fd.slabAreaFt2 === undefined ? " (floor area per story)" : ""}, covering R ${coveringR.toFixed(2)} ` +
           `h·ft²·°F/Btu (${options?.slabFloorCoveringR === undefined ? fd.slabFloorCovering : "entered"}; ch. 17 eq. 23: a bare or tiled slab gives a larger cooling credit)` +
-          (options?.slabFloorCoveringR === undefined && fd.slabFloorCovering === "tile" ? "; the tile value is from memory: approximate default — verify locally." : "."),
+          (options?.slabFloorCoveringR === undefined && fd.slabFloorCovering === "tile"
+            ? "; the tile value is from memory: approximate default — verify locally."
+            : "."),
       );
     } else {
-      notes.push(`The slab of the ${fd.kind} counts for heating only (ch. 17: ground heat flow ignored for cooling).`);
+      notes.push(
+        `The slab of the ${fd.kind} counts for heating only (ch. 17: ground heat flow ignored for cooling).`,
+      );
     }
   }
   const agFt2 = fd.foundationWallAboveGradeAreaFt2;
@@ -259,10 +292,15 @@ function buildBase(plan: PlanInput, site: SiteConditions, options: RlfFromPlanOp
   } else if (fd.kind === "unconditioned-basement" && fd.floorAreaFt2 > 0) {
     const uFloor = floorU(fd.floor, "still-air", "heating");
     const uaFloor = uFloor * fd.floorAreaFt2;
-    const uaAg = (fd.foundationWallUFactor ?? aboveGradeFoundationWallU(fd.foundationWallInsulationR, "heating")) * agFt2;
-    const uaBg = (fd.foundationWallUFactor ?? belowGradeWallU(fd.foundationWallInsulationR, fd.foundationWallDepthBelowGradeFt)) * bgFt2;
+    const uaAg =
+      (fd.foundationWallUFactor ?? aboveGradeFoundationWallU(fd.foundationWallInsulationR, "heating")) *
+      agFt2;
+    const uaBg =
+      (fd.foundationWallUFactor ??
+        belowGradeWallU(fd.foundationWallInsulationR, fd.foundationWallDepthBelowGradeFt)) * bgFt2;
     // Ch. 17 eq. 5 without the basement's own air exchange: t_b = Σ A·U·t_x / Σ A·U.
-    basementHeatingF = fd.basementHeatingTemperatureF ?? (uaFloor * ti + uaAg * to + uaBg * tGround) / (uaFloor + uaAg + uaBg);
+    basementHeatingF =
+      fd.basementHeatingTemperatureF ?? (uaFloor * ti + uaAg * to + uaBg * tGround) / (uaFloor + uaAg + uaBg);
     opaque.push({
       label: "Floor over unconditioned basement",
       tag: "floors",
@@ -286,7 +324,8 @@ function buildBase(plan: PlanInput, site: SiteConditions, options: RlfFromPlanOp
         tag: "foundationWalls",
         kind: "wall",
         areaFt2: agFt2,
-        uBtuPerHrFt2F: fd.foundationWallUFactor ?? aboveGradeFoundationWallU(fd.foundationWallInsulationR, "heating"),
+        uBtuPerHrFt2F:
+          fd.foundationWallUFactor ?? aboveGradeFoundationWallU(fd.foundationWallInsulationR, "heating"),
       });
     }
     if (bgFt2 > 0) {
@@ -295,7 +334,9 @@ function buildBase(plan: PlanInput, site: SiteConditions, options: RlfFromPlanOp
         tag: "foundationWalls",
         kind: "below-grade",
         areaFt2: bgFt2,
-        uBtuPerHrFt2F: fd.foundationWallUFactor ?? belowGradeWallU(fd.foundationWallInsulationR, fd.foundationWallDepthBelowGradeFt),
+        uBtuPerHrFt2F:
+          fd.foundationWallUFactor ??
+          belowGradeWallU(fd.foundationWallInsulationR, fd.foundationWallDepthBelowGradeFt),
         groundHeatingF: tGround,
       });
     }
@@ -330,7 +371,15 @@ function buildBase(plan: PlanInput, site: SiteConditions, options: RlfFromPlanOp
     if (areaFt2 <= 0) continue;
     opaque.push(
       garageGiven
-        ? { label, tag: "garageWall", kind: "buffer-partition", areaFt2, uBtuPerHrFt2F: u, bufferHeatingF: garageHeatingF, bufferCoolingF: garageCoolingF }
+        ? {
+            label,
+            tag: "garageWall",
+            kind: "buffer-partition",
+            areaFt2,
+            uBtuPerHrFt2F: u,
+            bufferHeatingF: garageHeatingF,
+            bufferCoolingF: garageCoolingF,
+          }
         : { label, tag: "garageWall", kind, areaFt2, uBtuPerHrFt2F: u, shaded: true },
     );
   }
@@ -338,8 +387,22 @@ function buildBase(plan: PlanInput, site: SiteConditions, options: RlfFromPlanOp
     const u = floorU(g.floorOver, "still-air", "heating");
     opaque.push(
       garageGiven
-        ? { label: "Floor over garage", tag: "floors", kind: "buffer-partition", areaFt2: g.floorOverAreaFt2, uBtuPerHrFt2F: u, bufferHeatingF: garageHeatingF, bufferCoolingF: garageCoolingF }
-        : { label: "Floor over garage", tag: "floors", kind: "floor-over-ambient", areaFt2: g.floorOverAreaFt2, uBtuPerHrFt2F: u },
+        ? {
+            label: "Floor over garage",
+            tag: "floors",
+            kind: "buffer-partition",
+            areaFt2: g.floorOverAreaFt2,
+            uBtuPerHrFt2F: u,
+            bufferHeatingF: garageHeatingF,
+            bufferCoolingF: garageCoolingF,
+          }
+        : {
+            label: "Floor over garage",
+            tag: "floors",
+            kind: "floor-over-ambient",
+            areaFt2: g.floorOverAreaFt2,
+            uBtuPerHrFt2F: u,
+          },
     );
   }
   if (g.wallAreaFt2 + g.floorOverAreaFt2 > 0) {
@@ -356,11 +419,17 @@ function buildBase(plan: PlanInput, site: SiteConditions, options: RlfFromPlanOp
   const leakage: RlfLeakage =
     inf.effectiveLeakageAreaIn2 !== undefined
       ? { method: "effective-leakage-area", elaIn2: inf.effectiveLeakageAreaIn2 }
-      : { method: "blower-door", cfm50: inf.cfm50 ?? ((inf.ach50 ?? 0) * volumeFt3) / 60, flowExponent: inf.flowExponent };
+      : {
+          method: "blower-door",
+          cfm50: inf.cfm50 ?? ((inf.ach50 ?? 0) * volumeFt3) / 60,
+          flowExponent: inf.flowExponent,
+        };
   const stackHeightFt = plan.stories * plan.ceilingHeightFt;
   notes.push(
     `Infiltration by ch. 17 eq. 8–10 (typical suburban shelter, so the plan's shelter class is not used); stack height ${stackHeightFt.toFixed(1)} ft (stories × ceiling height` +
-      (fd.kind === "conditioned-basement" || fd.kind === "unconditioned-basement" ? "; the above-grade basement height is not added" : "") +
+      (fd.kind === "conditioned-basement" || fd.kind === "unconditioned-basement"
+        ? "; the above-grade basement height is not added"
+        : "") +
       ").",
   );
 
@@ -368,7 +437,9 @@ function buildBase(plan: PlanInput, site: SiteConditions, options: RlfFromPlanOp
   const required = ventilationRateEq11Cfm(plan.conditionedFloorAreaFt2, plan.bedrooms);
   const flow = v.kind === "none" ? 0 : (v.cfm ?? required);
   if (v.kind !== "none" && v.cfm === undefined) {
-    notes.push(`Ventilation flow not entered: the ch. 17 eq. 11 rate of ${required.toFixed(0)} cfm is assumed.`);
+    notes.push(
+      `Ventilation flow not entered: the ch. 17 eq. 11 rate of ${required.toFixed(0)} cfm is assumed.`,
+    );
   }
   const recovery = v.sensibleRecoveryEffectiveness > 0 || v.latentRecoveryEffectiveness > 0;
   const ventilation: RlfVentilation = {
@@ -414,10 +485,14 @@ function buildBase(plan: PlanInput, site: SiteConditions, options: RlfFromPlanOp
     notes,
   };
   if (site.designMonth !== 7) {
-    notes.push(`The site's design month (${site.designMonth}) is not used: the RLF factors are for July 21 (ch. 17 Table 1).`);
+    notes.push(
+      `The site's design month (${site.designMonth}) is not used: the RLF factors are for July 21 (ch. 17 Table 1).`,
+    );
   }
   if (plan.skylights.areaFt2 > 0 && plan.skylights.tiltDeg >= 30) {
-    notes.push(`Skylights tilted ${plan.skylights.tiltDeg}° are computed as horizontal; ch. 17 supports only tilts under 30°.`);
+    notes.push(
+      `Skylights tilted ${plan.skylights.tiltDeg}° are computed as horizontal; ch. 17 supports only tilts under 30°.`,
+    );
   }
   return {
     house,
@@ -432,13 +507,17 @@ function buildBase(plan: PlanInput, site: SiteConditions, options: RlfFromPlanOp
 
 /** A small ring of recently built bases, matched by object identity (as calculate.ts does for prepared plans). */
 const RECENT = 32;
-const recent: Array<{ plan: PlanInput; site: SiteConditions; options: RlfFromPlanOptions | undefined; base: PlanBase } | undefined> = new Array(RECENT);
+const recent: Array<
+  | { plan: PlanInput; site: SiteConditions; options: RlfFromPlanOptions | undefined; base: PlanBase }
+  | undefined
+> = new Array(RECENT);
 let recentNext = 0;
 
 function baseOf(plan: PlanInput, site: SiteConditions, options: RlfFromPlanOptions | undefined): PlanBase {
   for (let i = 0; i < RECENT; i++) {
     const hit = recent[i];
-    if (hit !== undefined && hit.plan === plan && hit.site === site && hit.options === options) return hit.base;
+    if (hit !== undefined && hit.plan === plan && hit.site === site && hit.options === options)
+      return hit.base;
   }
   const base = buildBase(plan, site, options);
   recent[recentNext] = { plan, site, options, base };
@@ -448,11 +527,15 @@ function baseOf(plan: PlanInput, site: SiteConditions, options: RlfFromPlanOptio
 
 function checkFacing(facingAzimuthDeg: number): void {
   if (typeof facingAzimuthDeg !== "number" || !Number.isFinite(facingAzimuthDeg)) {
-    throw new LoadInputError("facingAzimuthDeg", `must be a finite number of degrees, got ${String(facingAzimuthDeg)}`, {
-      min: 0,
-      max: 360,
-      unit: "°",
-    });
+    throw new LoadInputError(
+      "facingAzimuthDeg",
+      `must be a finite number of degrees, got ${String(facingAzimuthDeg)}`,
+      {
+        min: 0,
+        max: 360,
+        unit: "°",
+      },
+    );
   }
 }
 
@@ -464,7 +547,10 @@ function orientWindows(base: PlanBase, facingAzimuthDeg: number): RlfFenestratio
       label: `Windows, ${t.facade}${t.index > 0 ? ` (group ${t.index + 1})` : ""}`,
       tag: "windows",
       facade: t.facade,
-      orientation: { kind: "vertical", azimuthDeg: normalizeAzimuth(facingAzimuthDeg + FACADE_OFFSET_DEG[t.facade]) },
+      orientation: {
+        kind: "vertical",
+        azimuthDeg: normalizeAzimuth(facingAzimuthDeg + FACADE_OFFSET_DEG[t.facade]),
+      },
       areaFt2: w.areaFt2,
       uBtuPerHrFt2F: w.uFactor,
       shgc: w.shgc,
@@ -541,7 +627,8 @@ export function computeResidentialLoadFactorFacing(
     heat[tag as HeatingComponent] += row.heatingBtuh;
     coolS[tag as CoolingSensibleComponent] += row.coolingBtuh;
     const facade = row.fenestration?.facade;
-    if (facade === "front" || facade === "left" || facade === "back" || facade === "right") byFacade[facade] += row.coolingBtuh;
+    if (facade === "front" || facade === "left" || facade === "back" || facade === "right")
+      byFacade[facade] += row.coolingBtuh;
   }
   heat.infiltration = r.heating.infiltrationBtuh;
   heat.ventilation = r.heating.ventilationBtuh;
@@ -613,7 +700,11 @@ export function computeResidentialLoadFactorFacing(
     facadeAzimuthsDeg: facadeAzimuthsDeg(az),
     heating,
     cooling,
-    ventilation: { requiredCfm: r.air.requiredVentilationCfm, providedCfm: base.providedVentilationCfm, kind: plan.ventilation.kind },
+    ventilation: {
+      requiredCfm: r.air.requiredVentilationCfm,
+      providedCfm: base.providedVentilationCfm,
+      kind: plan.ventilation.kind,
+    },
     effectiveLeakageAreaIn2: r.air.effectiveLeakageAreaIn2,
     notes,
     caution: RLF_CAUTION,

@@ -21,7 +21,12 @@ import { ductHeatingMode, ductLossFactor, type DuctTableLocation } from "../duct
 import { LoadInputError } from "../errors";
 import { effectiveLeakageAreaCm2 } from "../infiltration";
 import type { DuctHeatingSystem } from "../input";
-import { humidityRatioGrFromRelHum, humidityRatioGrFromWetBulb, SEA_LEVEL_PRESSURE_PSIA, standardPressurePsia } from "../psychrometrics";
+import {
+  humidityRatioGrFromRelHum,
+  humidityRatioGrFromWetBulb,
+  SEA_LEVEL_PRESSURE_PSIA,
+  standardPressurePsia,
+} from "../psychrometrics";
 import { slabCoolingFactorWm2 } from "../slab";
 import { BTUH_FT2_PER_W_M2, BTUH_PER_W, CM2_PER_IN2, GRAINS_PER_LB, LPS_PER_CFM, M2_PER_FT2 } from "../units";
 import {
@@ -391,7 +396,13 @@ const P0_PSIA = SEA_LEVEL_PRESSURE_PSIA;
 /** Last psychrometric state computed (sites repeat across the lots of a community). */
 let psyKey = "";
 let psyValue = { pressurePsia: 0, outdoorW: 0, indoorW: 0 };
-function psychrometricsOf(elevationFt: number, dbF: number, wbF: number | undefined, indoorF: number, rhPct: number) {
+function psychrometricsOf(
+  elevationFt: number,
+  dbF: number,
+  wbF: number | undefined,
+  indoorF: number,
+  rhPct: number,
+) {
   const key = `${elevationFt}|${dbF}|${wbF}|${indoorF}|${rhPct}`;
   if (key !== psyKey) {
     const pressurePsia = standardPressurePsia(elevationFt);
@@ -422,14 +433,16 @@ const VENT_CFM_PER_BEDROOM_PLUS_ONE = VENTILATION_EQ_11.lpsPerBedroomPlusOne / L
 
 /** Required whole-building ventilation by ch. 17 eq. 11, Q_v = 0.15·A_cf + 3.5·(N_br + 1) L/s (N_br not less than 1), in cfm. */
 export function ventilationRateEq11Cfm(conditionedFloorAreaFt2: number, bedrooms: number): number {
-  return conditionedFloorAreaFt2 * VENT_CFM_PER_FT2 + VENT_CFM_PER_BEDROOM_PLUS_ONE * (Math.max(1, bedrooms) + 1);
+  return (
+    conditionedFloorAreaFt2 * VENT_CFM_PER_FT2 + VENT_CFM_PER_BEDROOM_PLUS_ONE * (Math.max(1, bedrooms) + 1)
+  );
 }
 
 // ---------------------------------------------------------------------------------------------
 // Range checks.
 
 function describe(value: unknown): string {
-  return value === undefined ? "missing" : JSON.stringify(value) ?? String(value);
+  return value === undefined ? "missing" : (JSON.stringify(value) ?? String(value));
 }
 
 function checkNumber(value: unknown, field: string, min: number, max: number, unit = ""): number {
@@ -446,7 +459,13 @@ function checkNumber(value: unknown, field: string, min: number, max: number, un
   return value;
 }
 
-function checkOptional(value: unknown, field: string, min: number, max: number, unit = ""): number | undefined {
+function checkOptional(
+  value: unknown,
+  field: string,
+  min: number,
+  max: number,
+  unit = "",
+): number | undefined {
   return value === undefined ? undefined : checkNumber(value, field, min, max, unit);
 }
 
@@ -528,11 +547,17 @@ export function residentialLoadFactorLoads(house: RlfHouse): RlfResult {
   const opt = house.options ?? {};
   const nearest = opt.tableLookup === "nearest";
   if (opt.tableLookup !== undefined && opt.tableLookup !== "interpolate" && !nearest) {
-    fail("options.tableLookup", `unknown table lookup ${describe(opt.tableLookup)}; choose interpolate or nearest`);
+    fail(
+      "options.tableLookup",
+      `unknown table lookup ${describe(opt.tableLookup)}; choose interpolate or nearest`,
+    );
   }
   const equations = opt.peakIrradiance === "table-9-equations";
   if (opt.peakIrradiance !== undefined && opt.peakIrradiance !== "table-10" && !equations) {
-    fail("options.peakIrradiance", `unknown peak irradiance source ${describe(opt.peakIrradiance)}; choose table-10 or table-9-equations`);
+    fail(
+      "options.peakIrradiance",
+      `unknown peak irradiance source ${describe(opt.peakIrradiance)}; choose table-10 or table-9-equations`,
+    );
   }
 
   // --- Site and design conditions (ch. 17 "Design Conditions") ---------------------------------
@@ -553,9 +578,10 @@ export function residentialLoadFactorLoads(house: RlfHouse): RlfResult {
   if (s.humidityRatioDifference !== undefined && s.coolingOutdoorWbF !== undefined) {
     fail("site.humidityRatioDifference", "give coolingOutdoorWbF or humidityRatioDifference, not both");
   }
-  const wbChecked = s.humidityRatioDifference === undefined && s.coolingOutdoorWbF !== undefined
-    ? checkNumber(s.coolingOutdoorWbF, "site.coolingOutdoorWbF", 40, toc, "°F")
-    : undefined;
+  const wbChecked =
+    s.humidityRatioDifference === undefined && s.coolingOutdoorWbF !== undefined
+      ? checkNumber(s.coolingOutdoorWbF, "site.coolingOutdoorWbF", 40, toc, "°F")
+      : undefined;
   const psy = psychrometricsOf(elevationFt, toc, wbChecked, tic, rh);
   const pressurePsia = psy.pressurePsia;
   const pressureRatio = airCorrection ? pressurePsia / P0_PSIA : 1;
@@ -578,10 +604,15 @@ export function residentialLoadFactorLoads(house: RlfHouse): RlfResult {
     indoorW = psy.indoorW;
     deltaW = outdoorW - indoorW;
   } else {
-    fail("site.coolingOutdoorWbF", "required: the coincident wet bulb (coolingOutdoorWbF) or the humidity ratio difference (humidityRatioDifference)");
+    fail(
+      "site.coolingOutdoorWbF",
+      "required: the coincident wet bulb (coolingOutdoorWbF) or the humidity ratio difference (humidityRatioDifference)",
+    );
   }
   if (deltaW < 0) {
-    notes.push("Outdoor design air is drier than indoor air: the outdoor-air latent load is taken as zero (no latent credit).");
+    notes.push(
+      "Outdoor design air is drier than indoor air: the outdoor-air latent load is taken as zero (no latent credit).",
+    );
     deltaW = 0;
   }
 
@@ -592,7 +623,10 @@ export function residentialLoadFactorLoads(house: RlfHouse): RlfResult {
   const occupants = checkOptional(house.occupants, "occupants", 0, 50) ?? bedrooms + 1;
   const buildingType: BuildingType = house.buildingType ?? "single-family-detached";
   if (buildingType !== "single-family-detached" && buildingType !== "multifamily") {
-    fail("buildingType", `unknown building type ${describe(buildingType)}; choose single-family-detached or multifamily`);
+    fail(
+      "buildingType",
+      `unknown building type ${describe(buildingType)}; choose single-family-detached or multifamily`,
+    );
   }
   const ffsRow = T13[buildingType];
 
@@ -604,7 +638,10 @@ export function residentialLoadFactorLoads(house: RlfHouse): RlfResult {
   if (absLat < LIMITS.latitudeDeg.min || absLat > LIMITS.latitudeDeg.max) {
     notes.push(`Latitude ${absLat}° is outside the tables' 20–60°; the ${tableLatitudeDeg}° column is used.`);
   }
-  if (southern) notes.push("Southern latitude: the tables are used with north and south exposures swapped (ch. 17 Table 1).");
+  if (southern)
+    notes.push(
+      "Southern latitude: the tables are used with north and south exposures swapped (ch. 17 Table 1).",
+    );
 
   const rows: RlfComponentRow[] = [];
   let envHeat = 0;
@@ -744,7 +781,8 @@ export function residentialLoadFactorLoads(house: RlfHouse): RlfResult {
     const shgc = checkNumber(g.shgc, `${f}.shgc`, 0, 1, "");
     let iac: number;
     if (g.interiorShade !== undefined) {
-      if (g.interiorAttenuation !== undefined) fail(`${f}.interiorAttenuation`, "give interiorAttenuation or interiorShade, not both");
+      if (g.interiorAttenuation !== undefined)
+        fail(`${f}.interiorAttenuation`, "give interiorAttenuation or interiorShade, not both");
       const closed = checkNumber(g.interiorShade.closedIac, `${f}.interiorShade.closedIac`, 0.1, 1, "");
       const frac = checkNumber(g.interiorShade.fractionClosed, `${f}.interiorShade.fractionClosed`, 0, 1, "");
       iac = interiorAttenuationCoefficient(closed, frac); // eq. 29
@@ -754,18 +792,24 @@ export function residentialLoadFactorLoads(house: RlfHouse): RlfResult {
     let tx: number = T11.none;
     const att = g.exteriorAttachment;
     if (g.exteriorTransmission !== undefined) {
-      if (att !== undefined) fail(`${f}.exteriorTransmission`, "give exteriorAttachment or exteriorTransmission, not both");
+      if (att !== undefined)
+        fail(`${f}.exteriorTransmission`, "give exteriorAttachment or exteriorTransmission, not both");
       tx = checkNumber(g.exteriorTransmission, `${f}.exteriorTransmission`, 0.05, 1, "");
     } else if (att !== undefined) {
       if (att.kind === "insect-screen") tx = T11.insectScreen;
-      else if (att.kind === "shade-screen") tx = checkNumber(att.transmission, `${f}.exteriorAttachment.transmission`, 0.05, 1, "");
+      else if (att.kind === "shade-screen")
+        tx = checkNumber(att.transmission, `${f}.exteriorAttachment.transmission`, 0.05, 1, "");
       else if (att.kind !== "none") {
-        fail(`${f}.exteriorAttachment.kind`, `unknown exterior attachment ${describe((att as { kind: unknown }).kind)}; choose none, insect-screen or shade-screen`);
+        fail(
+          `${f}.exteriorAttachment.kind`,
+          `unknown exterior attachment ${describe((att as { kind: unknown }).kind)}; choose none, insect-screen or shade-screen`,
+        );
       }
     }
     const givenShd = checkOptional(g.shadedFraction, `${f}.shadedFraction`, 0, 1, "");
     const o = g.orientation;
-    if (o === undefined || o === null) fail(`${f}.orientation`, "required: { kind: \"vertical\", azimuthDeg } or { kind: \"horizontal\" }");
+    if (o === undefined || o === null)
+      fail(`${f}.orientation`, 'required: { kind: "vertical", azimuthDeg } or { kind: "horizontal" }');
     let eD: number;
     let ed: number;
     let ffs: number;
@@ -818,7 +862,10 @@ export function residentialLoadFactorLoads(house: RlfHouse): RlfResult {
         shd = Math.min(1, Math.max(0, (slf * depth - x) / h));
       }
     } else {
-      fail(`${f}.orientation.kind`, `unknown orientation ${describe((o as { kind: unknown }).kind)}; choose vertical or horizontal`);
+      fail(
+        `${f}.orientation.kind`,
+        `unknown orientation ${describe((o as { kind: unknown }).kind)}; choose vertical or horizontal`,
+      );
     }
     // Eq. 26–27: PXI = T_x·[E_d + (1 − F_shd)·E_D], W/m².
     const pxi = tx * (ed + (1 - shd) * eD);
@@ -856,7 +903,8 @@ export function residentialLoadFactorLoads(house: RlfHouse): RlfResult {
   const inf = house.infiltration;
   if (inf === undefined || inf === null) fail("infiltration", "required: the air leakage");
   const lk = inf.leakage;
-  if (lk === undefined || lk === null) fail("infiltration.leakage", "required: the air leakage (method and figure)");
+  if (lk === undefined || lk === null)
+    fail("infiltration.leakage", "required: the air leakage (method and figure)");
   let alCm2: number;
   switch (lk.method) {
     case "effective-leakage-area":
@@ -864,7 +912,10 @@ export function residentialLoadFactorLoads(house: RlfHouse): RlfResult {
       break;
     case "blower-door": {
       const n = checkOptional(lk.flowExponent, "infiltration.leakage.flowExponent", 0.5, 1, "") ?? 0.65;
-      alCm2 = effectiveLeakageAreaCm2(checkNumber(lk.cfm50, "infiltration.leakage.cfm50", 1, 100_000, "cfm"), n);
+      alCm2 = effectiveLeakageAreaCm2(
+        checkNumber(lk.cfm50, "infiltration.leakage.cfm50", 1, 100_000, "cfm"),
+        n,
+      );
       break;
     }
     case "blower-door-ach50": {
@@ -875,8 +926,20 @@ export function residentialLoadFactorLoads(house: RlfHouse): RlfResult {
       break;
     }
     case "unit-leakage": {
-      const aes = checkNumber(lk.exposedSurfaceAreaFt2, "infiltration.leakage.exposedSurfaceAreaFt2", 0, 1_000_000, "ft²");
-      const aul = checkNumber(lk.unitLeakageCm2PerM2, "infiltration.leakage.unitLeakageCm2PerM2", 0, 30, "cm²/m²");
+      const aes = checkNumber(
+        lk.exposedSurfaceAreaFt2,
+        "infiltration.leakage.exposedSurfaceAreaFt2",
+        0,
+        1_000_000,
+        "ft²",
+      );
+      const aul = checkNumber(
+        lk.unitLeakageCm2PerM2,
+        "infiltration.leakage.unitLeakageCm2PerM2",
+        0,
+        30,
+        "cm²/m²",
+      );
       alCm2 = aes * M2_FT2 * aul; // eq. 9
       break;
     }
@@ -886,18 +949,36 @@ export function residentialLoadFactorLoads(house: RlfHouse): RlfResult {
         `unknown leakage method ${describe((lk as { method: unknown }).method)}; choose effective-leakage-area, blower-door, blower-door-ach50 or unit-leakage`,
       );
   }
-  const flueCm2 = (checkOptional(inf.flueLeakageAreaIn2, "infiltration.flueLeakageAreaIn2", 0, 10_000, "in²") ?? 0) * CM2_IN2;
+  const flueCm2 =
+    (checkOptional(inf.flueLeakageAreaIn2, "infiltration.flueLeakageAreaIn2", 0, 10_000, "in²") ?? 0) *
+    CM2_IN2;
   if (flueCm2 > 0 && flueCm2 >= alCm2 / 2) {
-    notes.push("Flue leakage area is half the building's leakage area or more; ch. 17 eq. 10 is valid only below half.");
+    notes.push(
+      "Flue leakage area is half the building's leakage area or more; ch. 17 eq. 10 is valid only below half.",
+    );
   }
-  const stackFt = checkOptional(inf.stackHeightFt, "infiltration.stackHeightFt", 3, 100, "ft") ?? stories * STACK_HEIGHT_PER_STORY_FT;
+  const stackFt =
+    checkOptional(inf.stackHeightFt, "infiltration.stackHeightFt", 3, 100, "ft") ??
+    stories * STACK_HEIGHT_PER_STORY_FT;
   const stackM = stackFt * M_FT;
   const flueRatio = alCm2 > 0 ? flueCm2 / alCm2 : 0;
   let idfH: number;
   let idfC: number;
   if (inf.idfOverride !== undefined) {
-    idfH = checkNumber(inf.idfOverride.heatingLpsPerCm2, "infiltration.idfOverride.heatingLpsPerCm2", 0, 1, "L/(s·cm²)");
-    idfC = checkNumber(inf.idfOverride.coolingLpsPerCm2, "infiltration.idfOverride.coolingLpsPerCm2", 0, 1, "L/(s·cm²)");
+    idfH = checkNumber(
+      inf.idfOverride.heatingLpsPerCm2,
+      "infiltration.idfOverride.heatingLpsPerCm2",
+      0,
+      1,
+      "L/(s·cm²)",
+    );
+    idfC = checkNumber(
+      inf.idfOverride.coolingLpsPerCm2,
+      "infiltration.idfOverride.coolingLpsPerCm2",
+      0,
+      1,
+      "L/(s·cm²)",
+    );
   } else {
     // Eq. 10, Δt in K.
     const h = IDF.heating;
@@ -915,10 +996,29 @@ export function residentialLoadFactorLoads(house: RlfHouse): RlfResult {
   const exhaust = v ? checkNumber(v.exhaustCfm, "ventilation.exhaustCfm", 0, 5000, "cfm") : 0;
   const qBal = Math.min(supply, exhaust); // eq. 12
   const qUnbal = Math.max(supply, exhaust) - qBal; // eq. 13
-  const qHr = v ? (checkOptional(v.heatRecoveryCfm, "ventilation.heatRecoveryCfm", 0, qBal, "cfm (at most the balanced flow)") ?? 0) : 0;
+  const qHr = v
+    ? (checkOptional(
+        v.heatRecoveryCfm,
+        "ventilation.heatRecoveryCfm",
+        0,
+        qBal,
+        "cfm (at most the balanced flow)",
+      ) ?? 0)
+    : 0;
   const qOth = qBal - qHr;
-  const es = v ? (checkOptional(v.sensibleRecoveryEffectiveness, "ventilation.sensibleRecoveryEffectiveness", 0, 0.95, "") ?? 0) : 0;
-  const el = v ? (checkOptional(v.latentRecoveryEffectiveness, "ventilation.latentRecoveryEffectiveness", 0, 0.95, "") ?? 0) : 0;
+  const es = v
+    ? (checkOptional(
+        v.sensibleRecoveryEffectiveness,
+        "ventilation.sensibleRecoveryEffectiveness",
+        0,
+        0.95,
+        "",
+      ) ?? 0)
+    : 0;
+  const el = v
+    ? (checkOptional(v.latentRecoveryEffectiveness, "ventilation.latentRecoveryEffectiveness", 0, 0.95, "") ??
+      0)
+    : 0;
   // Eq. 14: Q_vi = max(Q_unbal, Q_i + 0.5·Q_unbal).
   const qviHeat = Math.max(qUnbal, qiHeat + 0.5 * qUnbal);
   const qviCool = Math.max(qUnbal, qiCool + 0.5 * qUnbal);
@@ -957,7 +1057,8 @@ export function residentialLoadFactorLoads(house: RlfHouse): RlfResult {
 
   // --- Distribution: eq. 19 with Table 6 -------------------------------------------------------
   const d = house.ducts;
-  if (d === undefined || d === null) fail("ducts", "required: the duct description (method none, table-6 or factors)");
+  if (d === undefined || d === null)
+    fail("ducts", "required: the duct description (method none, table-6 or factors)");
   let fHeat: number;
   let fCool: number;
   if (d.method === "none") {
@@ -968,10 +1069,16 @@ export function residentialLoadFactorLoads(house: RlfHouse): RlfResult {
     fCool = checkNumber(d.coolingFactor, "ducts.coolingFactor", 0, 2, "");
   } else if (d.method === "table-6") {
     if (d.location !== "attic" && d.location !== "basement" && d.location !== "crawlspace") {
-      fail("ducts.location", `unknown Table 6 duct location ${describe(d.location)}; choose attic, basement or crawlspace`);
+      fail(
+        "ducts.location",
+        `unknown Table 6 duct location ${describe(d.location)}; choose attic, basement or crawlspace`,
+      );
     }
     if (d.heatingSystem !== "furnace" && d.heatingSystem !== "heat-pump") {
-      fail("ducts.heatingSystem", `unknown heating system ${describe(d.heatingSystem)}; choose furnace or heat-pump`);
+      fail(
+        "ducts.heatingSystem",
+        `unknown heating system ${describe(d.heatingSystem)}; choose furnace or heat-pump`,
+      );
     }
     const key = `${d.location}|${d.insulationR}|${d.supplyLeakagePct}|${d.returnLeakagePct}|${d.heatingSystem}|${stories}`;
     if (ductMemo === null || ductMemo.key !== key) {
@@ -979,18 +1086,37 @@ export function residentialLoadFactorLoads(house: RlfHouse): RlfResult {
       const supplyLeakagePct = checkNumber(d.supplyLeakagePct, "ducts.supplyLeakagePct", 0, 50, "%");
       const returnLeakagePct = checkNumber(d.returnLeakagePct, "ducts.returnLeakagePct", 0, 50, "%");
       const location = d.location;
-      const heat = ductLossFactor({ location, stories, insulationR, supplyLeakagePct, returnLeakagePct, mode: ductHeatingMode(d.heatingSystem) });
-      const cool = ductLossFactor({ location, stories, insulationR, supplyLeakagePct, returnLeakagePct, mode: "cooling" });
+      const heat = ductLossFactor({
+        location,
+        stories,
+        insulationR,
+        supplyLeakagePct,
+        returnLeakagePct,
+        mode: ductHeatingMode(d.heatingSystem),
+      });
+      const cool = ductLossFactor({
+        location,
+        stories,
+        insulationR,
+        supplyLeakagePct,
+        returnLeakagePct,
+        mode: "cooling",
+      });
       ductMemo = { key, heat: heat.factor, cool: cool.factor, notes: heat.notes };
     }
     fHeat = ductMemo.heat;
     fCool = ductMemo.cool;
     for (const n of ductMemo.notes) notes.push(n);
   } else {
-    fail("ducts.method", `unknown duct method ${describe((d as { method: unknown }).method)}; choose none, table-6 or factors`);
+    fail(
+      "ducts.method",
+      `unknown duct method ${describe((d as { method: unknown }).method)}; choose none, table-6 or factors`,
+    );
   }
   if (fCool > 0) {
-    notes.push("Duct latent gain (return leakage) is not included: Table 6 factors are sensible only (ch. 17 eq. 19).");
+    notes.push(
+      "Duct latent gain (return leakage) is not included: Table 6 factors are sensible only (ch. 17 eq. 19).",
+    );
   }
 
   const heatSubtotal = envHeat + infHeatBtuh + ventHeatBtuh;
@@ -1022,7 +1148,12 @@ export function residentialLoadFactorLoads(house: RlfHouse): RlfResult {
       ductFactor: fCool,
       ductBtuh: coolDuct,
       sensibleBtuh: coolSensible,
-      latent: { infiltrationBtuh: infLatBtuh, ventilationBtuh: ventLatBtuh, internalBtuh: igLat, totalBtuh: latentTotal },
+      latent: {
+        infiltrationBtuh: infLatBtuh,
+        ventilationBtuh: ventLatBtuh,
+        internalBtuh: igLat,
+        totalBtuh: latentTotal,
+      },
       totalBtuh: coolSensible + latentTotal,
     },
     air: {

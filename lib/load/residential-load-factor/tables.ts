@@ -145,7 +145,12 @@ export type OpaqueFactorRow =
 export const TABLE_7_OPAQUE_FACTORS: Readonly<
   Record<OpaqueFactorRow, { oft: number; ofbPerRoofAbsorptanceK: number; ofbK: number; ofr: number }>
 > = {
-  "ceiling-or-wall-adjacent-to-vented-attic": { oft: 0.62, ofbPerRoofAbsorptanceK: 14.3, ofbK: -4.5, ofr: -0.19 },
+  "ceiling-or-wall-adjacent-to-vented-attic": {
+    oft: 0.62,
+    ofbPerRoofAbsorptanceK: 14.3,
+    ofbK: -4.5,
+    ofr: -0.19,
+  },
   "ceiling-roof-assembly": { oft: 1, ofbPerRoofAbsorptanceK: 38.3, ofbK: -7.0, ofr: -0.36 },
   "wall-or-door-sunlit": { oft: 1, ofbPerRoofAbsorptanceK: 0, ofbK: 8.2, ofr: -0.36 },
   "wall-or-door-shaded": { oft: 1, ofbPerRoofAbsorptanceK: 0, ofbK: 0, ofr: -0.36 },
@@ -174,7 +179,13 @@ export const FENESTRATION_DAILY_RANGE_FACTOR = 0.46;
 export const TABLE_LATITUDES_DEG = [20, 25, 30, 35, 40, 45, 50, 55, 60] as const;
 
 /** Folded vertical exposures of Tables 10 and 12: N, NE/NW, E/W, SE/SW, S (index = folded azimuth from north / 45°). */
-export const FOLDED_EXPOSURES = ["north", "northeast-northwest", "east-west", "southeast-southwest", "south"] as const;
+export const FOLDED_EXPOSURES = [
+  "north",
+  "northeast-northwest",
+  "east-west",
+  "southeast-southwest",
+  "south",
+] as const;
 export type FoldedExposure = (typeof FOLDED_EXPOSURES)[number];
 
 /**
@@ -189,7 +200,10 @@ export type FoldedExposure = (typeof FOLDED_EXPOSURES)[number];
  *   our reading of scattered characters ("2", "4"); with them, and only with them among the readings
  *   tried, every Table 10 cell for 25–60° is reproduced within 0.6 W/m² (tests/unit/load/rlf-procedure.test.ts).
  */
-export function table9VerticalPeakIrradianceWm2(phi: number, latitudeDeg: number): { totalWm2: number; diffuseWm2: number } {
+export function table9VerticalPeakIrradianceWm2(
+  phi: number,
+  latitudeDeg: number,
+): { totalWm2: number; diffuseWm2: number } {
   const L = latitudeDeg;
   const L2 = L * L;
   const phi3 = phi * phi * phi;
@@ -203,12 +217,16 @@ export function table9VerticalPeakIrradianceWm2(phi: number, latitudeDeg: number
     12.89 * L -
     0.6172 * L2 +
     (0.7802 * L2) / (phi + 1);
-  const diffuse = 356.3 - 37.73 * phi * phi + 0.3022 * phi * L - (115.9 * Math.sqrt(Math.sqrt(L))) / (phi + 1);
+  const diffuse =
+    356.3 - 37.73 * phi * phi + 0.3022 * phi * L - (115.9 * Math.sqrt(Math.sqrt(L))) / (phi + 1);
   return { totalWm2, diffuseWm2: Math.min(totalWm2, diffuse) };
 }
 
 /** Table 9, horizontal surfaces (p. 17.9): E_t = 816.2 + 10.20L − 0.1806L², E_d = min(E_t, 170), W/m². */
-export function table9HorizontalPeakIrradianceWm2(latitudeDeg: number): { totalWm2: number; diffuseWm2: number } {
+export function table9HorizontalPeakIrradianceWm2(latitudeDeg: number): {
+  totalWm2: number;
+  diffuseWm2: number;
+} {
   const L = latitudeDeg;
   const totalWm2 = 816.2 + 10.2 * L - 0.1806 * L * L;
   return { totalWm2, diffuseWm2: Math.min(totalWm2, 170) };
@@ -269,7 +287,11 @@ export const TABLE_10_AS_READ_25_TO_60: Readonly<Record<FoldedExposure | "horizo
 };
 
 /** The 20° column, computed from Table 9 (the stored copy lost it), rounded to whole W/m² as Table 10 prints. */
-function column20(exposure: FoldedExposure | "horizontal"): { direct: number; diffuse: number; total: number } {
+function column20(exposure: FoldedExposure | "horizontal"): {
+  direct: number;
+  diffuse: number;
+  total: number;
+} {
   const e =
     exposure === "horizontal"
       ? table9HorizontalPeakIrradianceWm2(20)
@@ -303,7 +325,11 @@ export const TABLE_10_PEAK_IRRADIANCE: Readonly<Record<FoldedExposure | "horizon
  * Table 11 "Exterior Attachment Transmission" T_x (p. 17.9): none 1.0; exterior insect screen 0.64
  * ("see Chapter 15, Table 13G"); shade screen: the manufacturer's shading coefficient, "typically 0.4 to 0.6".
  */
-export const TABLE_11_EXTERIOR_TRANSMISSION = { none: 1.0, insectScreen: 0.64, shadeScreenTypical: { min: 0.4, max: 0.6 } } as const;
+export const TABLE_11_EXTERIOR_TRANSMISSION = {
+  none: 1.0,
+  insectScreen: 0.64,
+  shadeScreenTypical: { min: 0.4, max: 0.6 },
+} as const;
 
 /**
  * Table 12 "Shade Line Factors (SLFs)" (p. 17.9), July 21, by folded exposure and TABLE_LATITUDES_DEG.
@@ -319,13 +345,24 @@ export const TABLE_12_SHADE_LINE_FACTORS: Readonly<Record<FoldedExposure, readon
 };
 
 /** The eight compass exposures of Table 13, clockwise from north (index = azimuth / 45°). */
-export const COMPASS_EXPOSURES = ["north", "northeast", "east", "southeast", "south", "southwest", "west", "northwest"] as const;
+export const COMPASS_EXPOSURES = [
+  "north",
+  "northeast",
+  "east",
+  "southeast",
+  "south",
+  "southwest",
+  "west",
+  "northwest",
+] as const;
 export type CompassExposure = (typeof COMPASS_EXPOSURES)[number];
 
 export type BuildingType = "single-family-detached" | "multifamily";
 
 /** Table 13 "Fenestration Solar Load Factors FF_s" (pp. 17.9–17.10), by COMPASS_EXPOSURES order, then horizontal. */
-export const TABLE_13_SOLAR_LOAD_FACTORS: Readonly<Record<BuildingType, { vertical: readonly number[]; horizontal: number }>> = {
+export const TABLE_13_SOLAR_LOAD_FACTORS: Readonly<
+  Record<BuildingType, { vertical: readonly number[]; horizontal: number }>
+> = {
   "single-family-detached": { vertical: [0.44, 0.21, 0.31, 0.37, 0.47, 0.58, 0.56, 0.46], horizontal: 0.58 },
   multifamily: { vertical: [0.27, 0.43, 0.56, 0.54, 0.53, 0.61, 0.65, 0.57], horizontal: 0.73 },
 };

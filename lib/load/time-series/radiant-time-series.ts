@@ -47,24 +47,132 @@ export interface PrintedRadiantTimeSeries {
  * carpet (10, 50, 90 % glass) then no carpet (10, 50, 90 % glass). Every column totals 100.
  */
 export const NONSOLAR_RTS: readonly PrintedRadiantTimeSeries[] = [
-  { zoneType: 1, mass: "light", carpet: true, glassPct: 10, factorsPct: [47, 19, 11, 6, 4, 3, 2, 2, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0] },
-  { zoneType: 2, mass: "light", carpet: true, glassPct: 50, factorsPct: [50, 18, 10, 6, 4, 3, 2, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0] },
-  { zoneType: 3, mass: "light", carpet: true, glassPct: 90, factorsPct: [53, 17, 9, 5, 3, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0] },
-  { zoneType: 4, mass: "light", carpet: false, glassPct: 10, factorsPct: [41, 20, 12, 8, 5, 4, 3, 2, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0] },
-  { zoneType: 5, mass: "light", carpet: false, glassPct: 50, factorsPct: [43, 19, 11, 7, 5, 3, 3, 2, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0] },
-  { zoneType: 6, mass: "light", carpet: false, glassPct: 90, factorsPct: [46, 19, 11, 7, 5, 3, 2, 2, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0] },
-  { zoneType: 7, mass: "medium", carpet: true, glassPct: 10, factorsPct: [46, 18, 10, 6, 4, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0] },
-  { zoneType: 8, mass: "medium", carpet: true, glassPct: 50, factorsPct: [49, 17, 9, 5, 3, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0] },
-  { zoneType: 9, mass: "medium", carpet: true, glassPct: 90, factorsPct: [52, 16, 8, 5, 3, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0] },
-  { zoneType: 10, mass: "medium", carpet: false, glassPct: 10, factorsPct: [31, 17, 11, 8, 6, 4, 4, 3, 3, 2, 2, 2, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0] },
-  { zoneType: 11, mass: "medium", carpet: false, glassPct: 50, factorsPct: [33, 16, 10, 7, 5, 4, 3, 3, 2, 2, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 0] },
-  { zoneType: 12, mass: "medium", carpet: false, glassPct: 90, factorsPct: [35, 15, 10, 7, 5, 4, 3, 3, 2, 2, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 0, 0] },
-  { zoneType: 13, mass: "heavy", carpet: true, glassPct: 10, factorsPct: [34, 9, 6, 4, 4, 4, 3, 3, 3, 3, 3, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 1, 1] },
-  { zoneType: 14, mass: "heavy", carpet: true, glassPct: 50, factorsPct: [38, 9, 6, 4, 4, 3, 3, 3, 3, 3, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 1, 1, 1, 1] },
-  { zoneType: 15, mass: "heavy", carpet: true, glassPct: 90, factorsPct: [42, 9, 5, 4, 4, 3, 3, 3, 3, 2, 2, 2, 2, 2, 2, 2, 2, 2, 1, 1, 1, 1, 1, 1] },
-  { zoneType: 16, mass: "heavy", carpet: false, glassPct: 10, factorsPct: [22, 10, 6, 5, 5, 4, 4, 4, 4, 3, 3, 3, 3, 3, 3, 2, 2, 2, 2, 2, 2, 2, 2, 2] },
-  { zoneType: 17, mass: "heavy", carpet: false, glassPct: 50, factorsPct: [25, 9, 6, 5, 5, 4, 4, 4, 3, 3, 3, 3, 3, 3, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2] },
-  { zoneType: 18, mass: "heavy", carpet: false, glassPct: 90, factorsPct: [28, 9, 6, 5, 4, 4, 4, 4, 3, 3, 3, 3, 3, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 1] },
+  {
+    zoneType: 1,
+    mass: "light",
+    carpet: true,
+    glassPct: 10,
+    factorsPct: [47, 19, 11, 6, 4, 3, 2, 2, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0],
+  },
+  {
+    zoneType: 2,
+    mass: "light",
+    carpet: true,
+    glassPct: 50,
+    factorsPct: [50, 18, 10, 6, 4, 3, 2, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0],
+  },
+  {
+    zoneType: 3,
+    mass: "light",
+    carpet: true,
+    glassPct: 90,
+    factorsPct: [53, 17, 9, 5, 3, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0],
+  },
+  {
+    zoneType: 4,
+    mass: "light",
+    carpet: false,
+    glassPct: 10,
+    factorsPct: [41, 20, 12, 8, 5, 4, 3, 2, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0],
+  },
+  {
+    zoneType: 5,
+    mass: "light",
+    carpet: false,
+    glassPct: 50,
+    factorsPct: [43, 19, 11, 7, 5, 3, 3, 2, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0],
+  },
+  {
+    zoneType: 6,
+    mass: "light",
+    carpet: false,
+    glassPct: 90,
+    factorsPct: [46, 19, 11, 7, 5, 3, 2, 2, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0],
+  },
+  {
+    zoneType: 7,
+    mass: "medium",
+    carpet: true,
+    glassPct: 10,
+    factorsPct: [46, 18, 10, 6, 4, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0],
+  },
+  {
+    zoneType: 8,
+    mass: "medium",
+    carpet: true,
+    glassPct: 50,
+    factorsPct: [49, 17, 9, 5, 3, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0],
+  },
+  {
+    zoneType: 9,
+    mass: "medium",
+    carpet: true,
+    glassPct: 90,
+    factorsPct: [52, 16, 8, 5, 3, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0],
+  },
+  {
+    zoneType: 10,
+    mass: "medium",
+    carpet: false,
+    glassPct: 10,
+    factorsPct: [31, 17, 11, 8, 6, 4, 4, 3, 3, 2, 2, 2, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0],
+  },
+  {
+    zoneType: 11,
+    mass: "medium",
+    carpet: false,
+    glassPct: 50,
+    factorsPct: [33, 16, 10, 7, 5, 4, 3, 3, 2, 2, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 0],
+  },
+  {
+    zoneType: 12,
+    mass: "medium",
+    carpet: false,
+    glassPct: 90,
+    factorsPct: [35, 15, 10, 7, 5, 4, 3, 3, 2, 2, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 0, 0],
+  },
+  {
+    zoneType: 13,
+    mass: "heavy",
+    carpet: true,
+    glassPct: 10,
+    factorsPct: [34, 9, 6, 4, 4, 4, 3, 3, 3, 3, 3, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 1, 1],
+  },
+  {
+    zoneType: 14,
+    mass: "heavy",
+    carpet: true,
+    glassPct: 50,
+    factorsPct: [38, 9, 6, 4, 4, 3, 3, 3, 3, 3, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 1, 1, 1, 1],
+  },
+  {
+    zoneType: 15,
+    mass: "heavy",
+    carpet: true,
+    glassPct: 90,
+    factorsPct: [42, 9, 5, 4, 4, 3, 3, 3, 3, 2, 2, 2, 2, 2, 2, 2, 2, 2, 1, 1, 1, 1, 1, 1],
+  },
+  {
+    zoneType: 16,
+    mass: "heavy",
+    carpet: false,
+    glassPct: 10,
+    factorsPct: [22, 10, 6, 5, 5, 4, 4, 4, 4, 3, 3, 3, 3, 3, 3, 2, 2, 2, 2, 2, 2, 2, 2, 2],
+  },
+  {
+    zoneType: 17,
+    mass: "heavy",
+    carpet: false,
+    glassPct: 50,
+    factorsPct: [25, 9, 6, 5, 5, 4, 4, 4, 3, 3, 3, 3, 3, 3, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2],
+  },
+  {
+    zoneType: 18,
+    mass: "heavy",
+    carpet: false,
+    glassPct: 90,
+    factorsPct: [28, 9, 6, 5, 4, 4, 4, 4, 3, 3, 3, 3, 3, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 1],
+  },
 ];
 
 /**
@@ -74,12 +182,42 @@ export const NONSOLAR_RTS: readonly PrintedRadiantTimeSeries[] = [
  * carpet, as in every perimeter pair.
  */
 export const INTERIOR_NONSOLAR_RTS: readonly PrintedRadiantTimeSeries[] = [
-  { zoneType: 19, mass: "light", carpet: true, factorsPct: [46, 19, 11, 6, 4, 3, 2, 2, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0] },
-  { zoneType: 20, mass: "light", carpet: false, factorsPct: [40, 20, 12, 8, 5, 4, 3, 2, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0] },
-  { zoneType: 21, mass: "medium", carpet: true, factorsPct: [46, 18, 10, 6, 3, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0] },
-  { zoneType: 22, mass: "medium", carpet: false, factorsPct: [31, 17, 11, 8, 6, 4, 4, 3, 3, 2, 2, 2, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0] },
-  { zoneType: 23, mass: "heavy", carpet: true, factorsPct: [33, 9, 6, 5, 4, 4, 3, 3, 3, 3, 3, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 1, 1] },
-  { zoneType: 24, mass: "heavy", carpet: false, factorsPct: [21, 9, 6, 5, 5, 4, 4, 4, 4, 3, 3, 3, 3, 3, 3, 3, 3, 2, 2, 2, 2, 2, 2, 2] },
+  {
+    zoneType: 19,
+    mass: "light",
+    carpet: true,
+    factorsPct: [46, 19, 11, 6, 4, 3, 2, 2, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0],
+  },
+  {
+    zoneType: 20,
+    mass: "light",
+    carpet: false,
+    factorsPct: [40, 20, 12, 8, 5, 4, 3, 2, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0],
+  },
+  {
+    zoneType: 21,
+    mass: "medium",
+    carpet: true,
+    factorsPct: [46, 18, 10, 6, 3, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0],
+  },
+  {
+    zoneType: 22,
+    mass: "medium",
+    carpet: false,
+    factorsPct: [31, 17, 11, 8, 6, 4, 4, 3, 3, 2, 2, 2, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0],
+  },
+  {
+    zoneType: 23,
+    mass: "heavy",
+    carpet: true,
+    factorsPct: [33, 9, 6, 5, 4, 4, 3, 3, 3, 3, 3, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 1, 1],
+  },
+  {
+    zoneType: 24,
+    mass: "heavy",
+    carpet: false,
+    factorsPct: [21, 9, 6, 5, 5, 4, 4, 4, 4, 3, 3, 3, 3, 3, 3, 3, 3, 2, 2, 2, 2, 2, 2, 2],
+  },
 ];
 
 /**
@@ -88,24 +226,132 @@ export const INTERIOR_NONSOLAR_RTS: readonly PrintedRadiantTimeSeries[] = [
  * copy repeats the medium columns in a stray second table under Table 20; the repeat matches.)
  */
 export const SOLAR_RTS: readonly PrintedRadiantTimeSeries[] = [
-  { zoneType: 1, mass: "light", carpet: true, glassPct: 10, factorsPct: [53, 17, 9, 5, 3, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0] },
-  { zoneType: 2, mass: "light", carpet: true, glassPct: 50, factorsPct: [55, 17, 9, 5, 3, 2, 2, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0] },
-  { zoneType: 3, mass: "light", carpet: true, glassPct: 90, factorsPct: [56, 17, 9, 5, 3, 2, 2, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0] },
-  { zoneType: 4, mass: "light", carpet: false, glassPct: 10, factorsPct: [44, 19, 11, 7, 5, 3, 3, 2, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0] },
-  { zoneType: 5, mass: "light", carpet: false, glassPct: 50, factorsPct: [45, 20, 11, 7, 5, 3, 2, 2, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0] },
-  { zoneType: 6, mass: "light", carpet: false, glassPct: 90, factorsPct: [46, 20, 11, 7, 5, 3, 2, 2, 1, 1, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0] },
-  { zoneType: 7, mass: "medium", carpet: true, glassPct: 10, factorsPct: [52, 16, 8, 5, 3, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0] },
-  { zoneType: 8, mass: "medium", carpet: true, glassPct: 50, factorsPct: [54, 16, 8, 4, 3, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0] },
-  { zoneType: 9, mass: "medium", carpet: true, glassPct: 90, factorsPct: [55, 15, 8, 4, 3, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0] },
-  { zoneType: 10, mass: "medium", carpet: false, glassPct: 10, factorsPct: [28, 15, 10, 7, 6, 5, 4, 4, 3, 3, 2, 2, 2, 2, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0] },
-  { zoneType: 11, mass: "medium", carpet: false, glassPct: 50, factorsPct: [29, 15, 10, 7, 6, 5, 4, 3, 3, 3, 2, 2, 2, 2, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0] },
-  { zoneType: 12, mass: "medium", carpet: false, glassPct: 90, factorsPct: [29, 15, 10, 7, 6, 5, 4, 3, 3, 3, 2, 2, 2, 2, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0] },
-  { zoneType: 13, mass: "heavy", carpet: true, glassPct: 10, factorsPct: [47, 11, 6, 4, 3, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1] },
-  { zoneType: 14, mass: "heavy", carpet: true, glassPct: 50, factorsPct: [49, 12, 6, 4, 3, 2, 2, 2, 2, 2, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1] },
-  { zoneType: 15, mass: "heavy", carpet: true, glassPct: 90, factorsPct: [51, 12, 6, 3, 3, 2, 2, 2, 2, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1] },
-  { zoneType: 16, mass: "heavy", carpet: false, glassPct: 10, factorsPct: [26, 12, 7, 5, 4, 4, 3, 3, 3, 3, 3, 3, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2] },
-  { zoneType: 17, mass: "heavy", carpet: false, glassPct: 50, factorsPct: [27, 13, 7, 5, 4, 4, 3, 3, 3, 3, 3, 3, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 1, 1] },
-  { zoneType: 18, mass: "heavy", carpet: false, glassPct: 90, factorsPct: [28, 13, 7, 5, 4, 4, 3, 3, 3, 3, 3, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 1, 1] },
+  {
+    zoneType: 1,
+    mass: "light",
+    carpet: true,
+    glassPct: 10,
+    factorsPct: [53, 17, 9, 5, 3, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0],
+  },
+  {
+    zoneType: 2,
+    mass: "light",
+    carpet: true,
+    glassPct: 50,
+    factorsPct: [55, 17, 9, 5, 3, 2, 2, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0],
+  },
+  {
+    zoneType: 3,
+    mass: "light",
+    carpet: true,
+    glassPct: 90,
+    factorsPct: [56, 17, 9, 5, 3, 2, 2, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0],
+  },
+  {
+    zoneType: 4,
+    mass: "light",
+    carpet: false,
+    glassPct: 10,
+    factorsPct: [44, 19, 11, 7, 5, 3, 3, 2, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0],
+  },
+  {
+    zoneType: 5,
+    mass: "light",
+    carpet: false,
+    glassPct: 50,
+    factorsPct: [45, 20, 11, 7, 5, 3, 2, 2, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0],
+  },
+  {
+    zoneType: 6,
+    mass: "light",
+    carpet: false,
+    glassPct: 90,
+    factorsPct: [46, 20, 11, 7, 5, 3, 2, 2, 1, 1, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0],
+  },
+  {
+    zoneType: 7,
+    mass: "medium",
+    carpet: true,
+    glassPct: 10,
+    factorsPct: [52, 16, 8, 5, 3, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0],
+  },
+  {
+    zoneType: 8,
+    mass: "medium",
+    carpet: true,
+    glassPct: 50,
+    factorsPct: [54, 16, 8, 4, 3, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0],
+  },
+  {
+    zoneType: 9,
+    mass: "medium",
+    carpet: true,
+    glassPct: 90,
+    factorsPct: [55, 15, 8, 4, 3, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0],
+  },
+  {
+    zoneType: 10,
+    mass: "medium",
+    carpet: false,
+    glassPct: 10,
+    factorsPct: [28, 15, 10, 7, 6, 5, 4, 4, 3, 3, 2, 2, 2, 2, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0],
+  },
+  {
+    zoneType: 11,
+    mass: "medium",
+    carpet: false,
+    glassPct: 50,
+    factorsPct: [29, 15, 10, 7, 6, 5, 4, 3, 3, 3, 2, 2, 2, 2, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0],
+  },
+  {
+    zoneType: 12,
+    mass: "medium",
+    carpet: false,
+    glassPct: 90,
+    factorsPct: [29, 15, 10, 7, 6, 5, 4, 3, 3, 3, 2, 2, 2, 2, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0],
+  },
+  {
+    zoneType: 13,
+    mass: "heavy",
+    carpet: true,
+    glassPct: 10,
+    factorsPct: [47, 11, 6, 4, 3, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1],
+  },
+  {
+    zoneType: 14,
+    mass: "heavy",
+    carpet: true,
+    glassPct: 50,
+    factorsPct: [49, 12, 6, 4, 3, 2, 2, 2, 2, 2, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1],
+  },
+  {
+    zoneType: 15,
+    mass: "heavy",
+    carpet: true,
+    glassPct: 90,
+    factorsPct: [51, 12, 6, 3, 3, 2, 2, 2, 2, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1],
+  },
+  {
+    zoneType: 16,
+    mass: "heavy",
+    carpet: false,
+    glassPct: 10,
+    factorsPct: [26, 12, 7, 5, 4, 4, 3, 3, 3, 3, 3, 3, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2],
+  },
+  {
+    zoneType: 17,
+    mass: "heavy",
+    carpet: false,
+    glassPct: 50,
+    factorsPct: [27, 13, 7, 5, 4, 4, 3, 3, 3, 3, 3, 3, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 1, 1],
+  },
+  {
+    zoneType: 18,
+    mass: "heavy",
+    carpet: false,
+    glassPct: 90,
+    factorsPct: [28, 13, 7, 5, 4, 4, 3, 3, 3, 3, 3, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 1, 1],
+  },
 ];
 
 /** The glass percentages printed as columns of Tables 19 and 20. */
@@ -186,7 +432,9 @@ export function windowConductionRadiantFraction(shgc: number): number {
   if (!Number.isFinite(shgc) || shgc < 0 || shgc > 1) {
     throw new LoadInputError("shgc", `must be a number from 0 to 1, got ${String(shgc)}`, { min: 0, max: 1 });
   }
-  return shgc >= 0.5 ? RADIANT_FRACTION_CONDUCTION_WINDOW_HIGH_SHGC : RADIANT_FRACTION_CONDUCTION_WINDOW_LOW_SHGC;
+  return shgc >= 0.5
+    ? RADIANT_FRACTION_CONDUCTION_WINDOW_HIGH_SHGC
+    : RADIANT_FRACTION_CONDUCTION_WINDOW_LOW_SHGC;
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -233,11 +481,17 @@ export function radiantTimeSeriesChoice(options: RadiantTimeSeriesOptions): Radi
   if (mass !== "light" && mass !== "medium" && mass !== "heavy") {
     throw new LoadInputError("rts.mass", `must be "light", "medium" or "heavy", got ${String(mass)}`);
   }
-  if (typeof solar !== "boolean") throw new LoadInputError("rts.solar", `must be true or false, got ${String(solar)}`);
-  if (typeof carpet !== "boolean") throw new LoadInputError("rts.carpet", `must be true or false, got ${String(carpet)}`);
+  if (typeof solar !== "boolean")
+    throw new LoadInputError("rts.solar", `must be true or false, got ${String(solar)}`);
+  if (typeof carpet !== "boolean")
+    throw new LoadInputError("rts.carpet", `must be true or false, got ${String(carpet)}`);
   const glassPct = options.glassPct ?? 10;
   if (typeof glassPct !== "number" || !Number.isFinite(glassPct) || glassPct < 0 || glassPct > 100) {
-    throw new LoadInputError("rts.glassPct", `must be a percent from 0 to 100, got ${String(glassPct)}`, { min: 0, max: 100, unit: "%" });
+    throw new LoadInputError("rts.glassPct", `must be a percent from 0 to 100, got ${String(glassPct)}`, {
+      min: 0,
+      max: 100,
+      unit: "%",
+    });
   }
   const table = solar ? SOLAR_RTS : NONSOLAR_RTS;
   const column = (g: number): PrintedRadiantTimeSeries => {
@@ -318,19 +572,29 @@ export const RECOMMENDED_RTS = {
 
 function checkDay(field: string, a: ArrayLike<number>): void {
   if (a.length !== HOURS_PER_DAY) {
-    throw new LoadInputError(field, `must hold ${HOURS_PER_DAY} hourly values, got ${a.length}`, { min: HOURS_PER_DAY, max: HOURS_PER_DAY });
+    throw new LoadInputError(field, `must hold ${HOURS_PER_DAY} hourly values, got ${a.length}`, {
+      min: HOURS_PER_DAY,
+      max: HOURS_PER_DAY,
+    });
   }
   for (let i = 0; i < HOURS_PER_DAY; i++) {
-    if (!Number.isFinite(a[i])) throw new LoadInputError(`${field}[${i}]`, `must be a finite number, got ${String(a[i])}`);
+    if (!Number.isFinite(a[i]))
+      throw new LoadInputError(`${field}[${i}]`, `must be a finite number, got ${String(a[i])}`);
   }
 }
 
 function checkOut(out: Float64Array, input: ArrayLike<number>, inputField: string): void {
   if (!(out instanceof Float64Array) || out.length !== HOURS_PER_DAY) {
-    throw new LoadInputError("out", `must be a Float64Array of ${HOURS_PER_DAY} hours`, { min: HOURS_PER_DAY, max: HOURS_PER_DAY });
+    throw new LoadInputError("out", `must be a Float64Array of ${HOURS_PER_DAY} hours`, {
+      min: HOURS_PER_DAY,
+      max: HOURS_PER_DAY,
+    });
   }
   if ((out as ArrayLike<number>) === input || (ArrayBuffer.isView(input) && input.buffer === out.buffer)) {
-    throw new LoadInputError("out", `must not share memory with ${inputField} (the sum reads every input hour)`);
+    throw new LoadInputError(
+      "out",
+      `must not share memory with ${inputField} (the sum reads every input hour)`,
+    );
   }
 }
 
@@ -350,7 +614,12 @@ export function checkSeries(field: string, series: ArrayLike<number>): number {
  * functions, which validate first. Two loops instead of a modulo: j ≤ h reads the same day,
  * j > h the day before.
  */
-export function convolveDay(input: ArrayLike<number>, series: ArrayLike<number>, last: number, out: Float64Array): void {
+export function convolveDay(
+  input: ArrayLike<number>,
+  series: ArrayLike<number>,
+  last: number,
+  out: Float64Array,
+): void {
   for (let h = 0; h < HOURS_PER_DAY; h++) {
     let sum = 0;
     const sameDay = h < last ? h : last;
@@ -366,7 +635,11 @@ export function convolveDay(input: ArrayLike<number>, series: ArrayLike<number>,
  *   out[h] = Σ_j series[j] · input[(h − j + 24) mod 24].
  * Writes into `out` and returns it; allocates nothing. `out` must not alias `input`.
  */
-export function applyTimeSeries(input: ArrayLike<number>, series: ArrayLike<number>, out: Float64Array): Float64Array {
+export function applyTimeSeries(
+  input: ArrayLike<number>,
+  series: ArrayLike<number>,
+  out: Float64Array,
+): Float64Array {
   checkDay("input", input);
   const last = checkSeries("series", series);
   checkOut(out, input, "input");
@@ -386,8 +659,17 @@ export function coolingLoadFromHeatGain(
   rts: ArrayLike<number>,
   out: Float64Array,
 ): Float64Array {
-  if (typeof radiantFraction !== "number" || !Number.isFinite(radiantFraction) || radiantFraction < 0 || radiantFraction > 1) {
-    throw new LoadInputError("radiantFraction", `must be a fraction from 0 to 1, got ${String(radiantFraction)}`, { min: 0, max: 1 });
+  if (
+    typeof radiantFraction !== "number" ||
+    !Number.isFinite(radiantFraction) ||
+    radiantFraction < 0 ||
+    radiantFraction > 1
+  ) {
+    throw new LoadInputError(
+      "radiantFraction",
+      `must be a fraction from 0 to 1, got ${String(radiantFraction)}`,
+      { min: 0, max: 1 },
+    );
   }
   checkDay("heatGain", heatGain);
   const last = checkSeries("rts", rts);

@@ -9,13 +9,20 @@ function coverageProblems(handlers: RouteHandler[], allowed: typeof NOT_MEMBER_R
   for (const h of handlers) {
     const key = `${h.method} ${h.path}`;
     const listed = allowed[key];
-    if (!h.guard) problems.push(`${key} (${h.file}) does not go through apiRoute or another wrapper of lib/auth/route.ts`);
-    else if (listed && h.guard.kind !== listed.kind) problems.push(`${key} is listed as ${listed.kind} but is wrapped as ${h.guard.kind}`);
-    else if (!listed && h.guard.kind !== "member") problems.push(`${key} is a ${h.guard.kind} route but not on the list of routes without a member check`);
-    else if (h.guard.kind === "member" && !(h.guard.permission in PERMISSIONS)) problems.push(`${key} names an unknown permission`);
+    if (!h.guard)
+      problems.push(
+        `${key} (${h.file}) does not go through apiRoute or another wrapper of lib/auth/route.ts`,
+      );
+    else if (listed && h.guard.kind !== listed.kind)
+      problems.push(`${key} is listed as ${listed.kind} but is wrapped as ${h.guard.kind}`);
+    else if (!listed && h.guard.kind !== "member")
+      problems.push(`${key} is a ${h.guard.kind} route but not on the list of routes without a member check`);
+    else if (h.guard.kind === "member" && !(h.guard.permission in PERMISSIONS))
+      problems.push(`${key} names an unknown permission`);
   }
   const present = new Set(handlers.map((h) => `${h.method} ${h.path}`));
-  for (const key of Object.keys(allowed)) if (!present.has(key)) problems.push(`${key} is on the list but no such handler exists`);
+  for (const key of Object.keys(allowed))
+    if (!present.has(key)) problems.push(`${key} is on the list but no such handler exists`);
   return problems;
 }
 
@@ -37,10 +44,30 @@ describe("route coverage", () => {
   }, 60_000); // loading every route module (exceljs, pdfkit, next-auth) takes a few seconds
 
   it("the check itself catches a bare handler, a mislabelled one and a stale list entry", () => {
-    const bare = { path: "/api/x", file: "app/api/x/route.ts", method: "POST" as const, handler: async () => new Response(), guard: undefined };
-    const open = { path: "/api/y", file: "app/api/y/route.ts", method: "GET" as const, handler: publicRoute(async () => ({})), guard: { kind: "public" as const } };
-    const fine = { path: "/api/z", file: "app/api/z/route.ts", method: "GET" as const, handler: apiRoute({ permission: "read" }, async () => ({})), guard: { kind: "member" as const, permission: "read" as const } };
-    const problems = coverageProblems([bare, open, fine], { "DELETE /api/gone": { kind: "public", why: "" } });
+    const bare = {
+      path: "/api/x",
+      file: "app/api/x/route.ts",
+      method: "POST" as const,
+      handler: async () => new Response(),
+      guard: undefined,
+    };
+    const open = {
+      path: "/api/y",
+      file: "app/api/y/route.ts",
+      method: "GET" as const,
+      handler: publicRoute(async () => ({})),
+      guard: { kind: "public" as const },
+    };
+    const fine = {
+      path: "/api/z",
+      file: "app/api/z/route.ts",
+      method: "GET" as const,
+      handler: apiRoute({ permission: "read" }, async () => ({})),
+      guard: { kind: "member" as const, permission: "read" as const },
+    };
+    const problems = coverageProblems([bare, open, fine], {
+      "DELETE /api/gone": { kind: "public", why: "" },
+    });
     expect(problems).toHaveLength(3);
     expect(problems[0]).toContain("POST /api/x");
     expect(problems[1]).toContain("GET /api/y");

@@ -6,16 +6,70 @@ import { ASPEN_1, CEDAR_BEND_SITE } from "../../fixtures/engine/example-plans";
 
 // Invented systems "LK-…" of the fictional builder's catalog.
 const CATALOG = [
-  { id: "ac20", modelNumber: "LK-AC24/F60", type: "ac-furnace", nominalTons: 2, coolingTotalBtuh: 24_000, coolingSensibleBtuh: 18_000, heatingOutputBtuh: 44_000 },
-  { id: "ac25", modelNumber: "LK-AC30/F60", type: "ac-furnace", nominalTons: 2.5, coolingTotalBtuh: 29_500, coolingSensibleBtuh: 22_500, heatingOutputBtuh: 44_000 },
-  { id: "ac30", modelNumber: "LK-AC36/F80", type: "ac-furnace", nominalTons: 3, coolingTotalBtuh: 35_500, coolingSensibleBtuh: 26_500, heatingOutputBtuh: 62_000 },
-  { id: "dry25", modelNumber: "LK-AC30X/F60", type: "ac-furnace", nominalTons: 2.5, coolingTotalBtuh: 29_000, coolingSensibleBtuh: 26_000, heatingOutputBtuh: 44_000 },
-  { id: "hp25", modelNumber: "LK-HP30", type: "heat-pump", nominalTons: 2.5, coolingTotalBtuh: 30_000, coolingSensibleBtuh: 22_800, heatingOutputBtuh: 26_000 },
-  { id: "hp25b", modelNumber: "LK-HP30/B10", type: "heat-pump-backup", nominalTons: 2.5, coolingTotalBtuh: 30_000, coolingSensibleBtuh: 22_800, heatingOutputBtuh: 26_000, backupHeatBtuh: 34_000 },
+  {
+    id: "ac20",
+    modelNumber: "LK-AC24/F60",
+    type: "ac-furnace",
+    nominalTons: 2,
+    coolingTotalBtuh: 24_000,
+    coolingSensibleBtuh: 18_000,
+    heatingOutputBtuh: 44_000,
+  },
+  {
+    id: "ac25",
+    modelNumber: "LK-AC30/F60",
+    type: "ac-furnace",
+    nominalTons: 2.5,
+    coolingTotalBtuh: 29_500,
+    coolingSensibleBtuh: 22_500,
+    heatingOutputBtuh: 44_000,
+  },
+  {
+    id: "ac30",
+    modelNumber: "LK-AC36/F80",
+    type: "ac-furnace",
+    nominalTons: 3,
+    coolingTotalBtuh: 35_500,
+    coolingSensibleBtuh: 26_500,
+    heatingOutputBtuh: 62_000,
+  },
+  {
+    id: "dry25",
+    modelNumber: "LK-AC30X/F60",
+    type: "ac-furnace",
+    nominalTons: 2.5,
+    coolingTotalBtuh: 29_000,
+    coolingSensibleBtuh: 26_000,
+    heatingOutputBtuh: 44_000,
+  },
+  {
+    id: "hp25",
+    modelNumber: "LK-HP30",
+    type: "heat-pump",
+    nominalTons: 2.5,
+    coolingTotalBtuh: 30_000,
+    coolingSensibleBtuh: 22_800,
+    heatingOutputBtuh: 26_000,
+  },
+  {
+    id: "hp25b",
+    modelNumber: "LK-HP30/B10",
+    type: "heat-pump-backup",
+    nominalTons: 2.5,
+    coolingTotalBtuh: 30_000,
+    coolingSensibleBtuh: 22_800,
+    heatingOutputBtuh: 26_000,
+    backupHeatBtuh: 34_000,
+  },
   { id: "f60", modelNumber: "LK-F60", type: "furnace", heatingOutputBtuh: 44_000 },
 ];
 
-const LOADS = { heatingBtuh: 40_000, coolingSensibleBtuh: 21_000, coolingLatentBtuh: 5_000, coolingTotalBtuh: 26_000 };
+const LOADS = {
+  heatingBtuh: 40_000,
+  coolingSensibleBtuh: 21_000,
+  coolingLatentBtuh: 5_000,
+  coolingTotalBtuh: 26_000,
+};
 
 describe("equipment selection", () => {
   it("default limits are the documented defaults (from memory and common practice)", () => {
@@ -53,26 +107,51 @@ describe("equipment selection", () => {
 
   it("heat pump without backup is short on heat; with backup it fits; a furnace alone cannot cool", () => {
     const s = selectEquipment({ loads: LOADS, catalog: CATALOG });
-    expect(s.notFitting.find((e) => e.system.id === "hp25")?.reasons.map((r) => r.reason)).toEqual(["heating-short"]);
+    expect(s.notFitting.find((e) => e.system.id === "hp25")?.reasons.map((r) => r.reason)).toEqual([
+      "heating-short",
+    ]);
     expect(s.fitting.some((e) => e.system.id === "hp25b")).toBe(true);
-    expect(s.notFitting.find((e) => e.system.id === "f60")?.reasons.map((r) => r.reason)).toEqual(["no-cooling"]);
+    expect(s.notFitting.find((e) => e.system.id === "f60")?.reasons.map((r) => r.reason)).toEqual([
+      "no-cooling",
+    ]);
   });
 
   it("an oversized furnace is refused (above 140 % of the heating load)", () => {
     const s = selectEquipment({ loads: { ...LOADS, heatingBtuh: 30_000 }, catalog: CATALOG });
-    expect(s.notFitting.find((e) => e.system.id === "ac30")?.reasons.map((r) => r.reason)).toContain("heating-over");
+    expect(s.notFitting.find((e) => e.system.id === "ac30")?.reasons.map((r) => r.reason)).toContain(
+      "heating-over",
+    );
   });
 
   it("heat pumps may go to 125 % where the heating load exceeds the cooling load", () => {
-    const hp = { id: "hp27", modelNumber: "LK-HP32", type: "heat-pump-backup", coolingTotalBtuh: 32_000, coolingSensibleBtuh: 24_000, heatingOutputBtuh: 28_000, backupHeatBtuh: 20_000 };
-    const ac = { id: "ac27", modelNumber: "LK-AC32/F60", type: "ac-furnace", coolingTotalBtuh: 32_000, coolingSensibleBtuh: 24_000, heatingOutputBtuh: 44_000 };
+    const hp = {
+      id: "hp27",
+      modelNumber: "LK-HP32",
+      type: "heat-pump-backup",
+      coolingTotalBtuh: 32_000,
+      coolingSensibleBtuh: 24_000,
+      heatingOutputBtuh: 28_000,
+      backupHeatBtuh: 20_000,
+    };
+    const ac = {
+      id: "ac27",
+      modelNumber: "LK-AC32/F60",
+      type: "ac-furnace",
+      coolingTotalBtuh: 32_000,
+      coolingSensibleBtuh: 24_000,
+      heatingOutputBtuh: 44_000,
+    };
     const s = selectEquipment({ loads: LOADS, catalog: [hp, ac] }); // 32,000 = 123 % of 26,000
     expect(s.bestFit?.system.id).toBe("hp27");
     expect(s.notFitting[0].reasons.map((r) => r.reason)).toEqual(["cooling-too-big"]);
   });
 
   it("uses the account's limits when given", () => {
-    const s = selectEquipment({ loads: LOADS, catalog: CATALOG, limits: { coolingMaxPct: 140, heatingMaxPct: 160 } });
+    const s = selectEquipment({
+      loads: LOADS,
+      catalog: CATALOG,
+      limits: { coolingMaxPct: 140, heatingMaxPct: 160 },
+    });
     expect(s.fitting.map((e) => e.system.id)).toContain("ac30");
     expect(s.bestFit?.system.id).toBe("ac25"); // still the smallest that fits
     expect(s.limitsUsed.coolingMaxPct).toBe(140);
@@ -80,14 +159,19 @@ describe("equipment selection", () => {
   });
 
   it("no system fits: best fit is null and every system says why", () => {
-    const s = selectEquipment({ loads: { ...LOADS, coolingTotalBtuh: 60_000, coolingSensibleBtuh: 50_000 }, catalog: CATALOG });
+    const s = selectEquipment({
+      loads: { ...LOADS, coolingTotalBtuh: 60_000, coolingSensibleBtuh: 50_000 },
+      catalog: CATALOG,
+    });
     expect(s.bestFit).toBeNull();
     expect(s.notFitting).toHaveLength(CATALOG.length);
     for (const e of s.notFitting) expect(e.reasons.length).toBeGreaterThan(0);
   });
 
   it("a bad catalog row is refused naming the row and field", () => {
-    expect(() => selectEquipment({ loads: LOADS, catalog: [{ ...CATALOG[0], coolingSensibleBtuh: 30_000 }] })).toThrow(LoadInputError);
+    expect(() =>
+      selectEquipment({ loads: LOADS, catalog: [{ ...CATALOG[0], coolingSensibleBtuh: 30_000 }] }),
+    ).toThrow(LoadInputError);
     let caught: unknown;
     try {
       selectEquipment({ loads: LOADS, catalog: [CATALOG[0], { ...CATALOG[1], type: "swamp-cooler" }] });

@@ -1,14 +1,28 @@
 import { afterEach, describe, expect, it } from "vitest";
-import { addressLimitKey, CLIENT_ADDRESS_HEADER, markClientAddressesStamped, normalizeAddress, stampClientAddress, stampedClientAddress } from "@/lib/http/client-address";
+import {
+  addressLimitKey,
+  CLIENT_ADDRESS_HEADER,
+  markClientAddressesStamped,
+  normalizeAddress,
+  stampClientAddress,
+  stampedClientAddress,
+} from "@/lib/http/client-address";
 
 // A request as Node's HTTP server hands it to scripts/serve.ts: lowercased headers and a socket.
-const request = (remoteAddress: string, headers: Record<string, string> = {}) => ({ headers: { ...headers } as Record<string, string | string[] | undefined>, socket: { remoteAddress } as never });
+const request = (remoteAddress: string, headers: Record<string, string> = {}) => ({
+  headers: { ...headers } as Record<string, string | string[] | undefined>,
+  socket: { remoteAddress } as never,
+});
 
 describe("the client address", () => {
   afterEach(() => markClientAddressesStamped(false));
 
   it("with no trusted proxy is the socket's, whatever X-Forwarded-For and our own header say", () => {
-    const r = request("198.51.100.20", { "x-forwarded-for": "10.9.9.9", [CLIENT_ADDRESS_HEADER]: "10.8.8.8", "x-real-ip": "10.7.7.7" });
+    const r = request("198.51.100.20", {
+      "x-forwarded-for": "10.9.9.9",
+      [CLIENT_ADDRESS_HEADER]: "10.8.8.8",
+      "x-real-ip": "10.7.7.7",
+    });
     stampClientAddress(r, 0);
     expect(r.headers[CLIENT_ADDRESS_HEADER]).toBe("198.51.100.20");
   });

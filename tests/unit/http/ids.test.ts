@@ -3,7 +3,26 @@ import { z } from "zod";
 import { idQueryParam, parseId } from "@/lib/http/ids";
 
 // Number() reads every one of these as 1 (or another number); none is how the app writes an id.
-const NOT_IDS = ["1e0", "0x1", "0b1", "0o1", "01", "1.0", "1.", " 1", "1 ", "+1", "-1", "0", "", "1_000", "١", "Infinity", "9007199254740993", "12345678901234567"];
+const NOT_IDS = [
+  "1e0",
+  "0x1",
+  "0b1",
+  "0o1",
+  "01",
+  "1.0",
+  "1.",
+  " 1",
+  "1 ",
+  "+1",
+  "-1",
+  "0",
+  "",
+  "1_000",
+  "١",
+  "Infinity",
+  "9007199254740993",
+  "12345678901234567",
+];
 
 describe("strict record ids", () => {
   it("reads plain decimal digits", () => {
@@ -20,7 +39,8 @@ describe("strict record ids", () => {
   }
 
   it("refuses numbers that are not positive safe integers, and other types", () => {
-    for (const value of [0, -3, 1.5, Number.NaN, 2 ** 60, null, undefined, {}, [1], true]) expect(parseId(value)).toBeNull();
+    for (const value of [0, -3, 1.5, Number.NaN, 2 ** 60, null, undefined, {}, [1], true])
+      expect(parseId(value)).toBeNull();
   });
 
   it("the query-string schema turns an id into a number and names a bad one", () => {
@@ -29,6 +49,9 @@ describe("strict record ids", () => {
     expect(schema.parse({})).toEqual({});
     const bad = schema.safeParse({ communityId: "1e0" });
     expect(bad.success).toBe(false);
-    expect(bad.error?.issues[0]).toMatchObject({ path: ["communityId"], message: expect.stringContaining("record id") });
+    expect(bad.error?.issues[0]).toMatchObject({
+      path: ["communityId"],
+      message: expect.stringContaining("record id"),
+    });
   });
 });

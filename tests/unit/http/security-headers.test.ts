@@ -4,14 +4,26 @@ import { describe, expect, it } from "vitest";
 import nextConfig from "@/next.config";
 import { config as proxyConfig, proxy } from "@/proxy";
 
-const directives = (policy: string) => new Map(policy.split(";").map((d) => d.trim().split(/\s+/)).map(([name, ...values]) => [name, values]));
+const directives = (policy: string) =>
+  new Map(
+    policy
+      .split(";")
+      .map((d) => d.trim().split(/\s+/))
+      .map(([name, ...values]) => [name, values]),
+  );
 
 describe("security headers", () => {
   it("every answer: no MIME sniffing, no framing, no referrer to other sites; API answers: no caching and no framing", async () => {
     const rules = await nextConfig(PHASE_PRODUCTION_SERVER).headers!();
     const all = rules.find((r) => r.source === "/:path*")!.headers;
-    expect(Object.fromEntries(all.map((h) => [h.key, h.value]))).toMatchObject({ "X-Content-Type-Options": "nosniff", "X-Frame-Options": "DENY", "Referrer-Policy": "same-origin" });
-    const api = Object.fromEntries(rules.find((r) => r.source === "/api/:path*")!.headers.map((h) => [h.key, h.value]));
+    expect(Object.fromEntries(all.map((h) => [h.key, h.value]))).toMatchObject({
+      "X-Content-Type-Options": "nosniff",
+      "X-Frame-Options": "DENY",
+      "Referrer-Policy": "same-origin",
+    });
+    const api = Object.fromEntries(
+      rules.find((r) => r.source === "/api/:path*")!.headers.map((h) => [h.key, h.value]),
+    );
     expect(api["Cache-Control"]).toBe("no-store");
     expect(directives(api["Content-Security-Policy"]).get("frame-ancestors")).toEqual(["'none'"]);
   });
@@ -35,7 +47,9 @@ describe("security headers", () => {
   it("Next reads the nonce from the request: the proxy passes the policy on to the page render", () => {
     const response = proxy(new NextRequest("http://127.0.0.1:3720/plans"));
     // NextResponse.next({ request: { headers } }) hands changed request headers to Next this way
-    expect(response.headers.get("x-middleware-request-content-security-policy")).toBe(response.headers.get("content-security-policy"));
+    expect(response.headers.get("x-middleware-request-content-security-policy")).toBe(
+      response.headers.get("content-security-policy"),
+    );
   });
 
   it("runs for pages, not for API routes or built assets", () => {

@@ -9,7 +9,13 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { readAndCheck, type ImportContext } from "@/lib/imports/kinds";
 import type { ImportKind } from "@/lib/imports/pipeline";
-import { baseTables, encodeFuzzFile, EXAMPLE_PLAN_CODES, fuzzFileSpec, INTERNALS } from "../../support/import-fuzz";
+import {
+  baseTables,
+  encodeFuzzFile,
+  EXAMPLE_PLAN_CODES,
+  fuzzFileSpec,
+  INTERNALS,
+} from "../../support/import-fuzz";
 
 const RUNS = 1000;
 const SEED = 20261202;
@@ -37,9 +43,17 @@ describe("import fuzzing (read and check stage)", () => {
           seen.refused++;
           expect(result.errors.length, file.how).toBeGreaterThan(0);
           for (const problem of result.errors) {
-            expect(Number.isInteger(problem.row) && problem.row >= 0, `${file.how}: row ${problem.row}`).toBe(true);
-            expect(typeof problem.column === "string" && problem.column.length > 0, `${file.how}: column`).toBe(true);
-            expect(typeof problem.reason === "string" && problem.reason.trim().length > 0, `${file.how}: reason`).toBe(true);
+            expect(Number.isInteger(problem.row) && problem.row >= 0, `${file.how}: row ${problem.row}`).toBe(
+              true,
+            );
+            expect(
+              typeof problem.column === "string" && problem.column.length > 0,
+              `${file.how}: column`,
+            ).toBe(true);
+            expect(
+              typeof problem.reason === "string" && problem.reason.trim().length > 0,
+              `${file.how}: reason`,
+            ).toBe(true);
             expect(problem.reason, file.how).not.toMatch(INTERNALS);
           }
         }),
@@ -54,13 +68,33 @@ describe("import fuzzing (read and check stage)", () => {
   }
 
   it("the file-level messages name the problem", async () => {
-    const semicolon = await readAndCheck("lots", "lots.csv", new TextEncoder().encode("Lot;Address;Plan code;Facing\n1;2 Elm;WF-1480;N\n"), contexts.lots);
+    const semicolon = await readAndCheck(
+      "lots",
+      "lots.csv",
+      new TextEncoder().encode("Lot;Address;Plan code;Facing\n1;2 Elm;WF-1480;N\n"),
+      contexts.lots,
+    );
     expect(semicolon.ok ? "" : semicolon.errors[0].reason).toMatch(/looks semicolon-separated/);
-    const tab = await readAndCheck("plans", "plans.csv", new TextEncoder().encode("Plan code\tPlan name\nA\tB\n"), undefined);
+    const tab = await readAndCheck(
+      "plans",
+      "plans.csv",
+      new TextEncoder().encode("Plan code\tPlan name\nA\tB\n"),
+      undefined,
+    );
     expect(tab.ok ? "" : tab.errors[0].reason).toMatch(/looks tab-separated/);
-    const random = await readAndCheck("equipment", "catalog.xlsx", new Uint8Array(Array.from({ length: 300 }, (_, i) => (i * 37 + 11) % 256)), undefined);
+    const random = await readAndCheck(
+      "equipment",
+      "catalog.xlsx",
+      new Uint8Array(Array.from({ length: 300 }, (_, i) => (i * 37 + 11) % 256)),
+      undefined,
+    );
     expect(random.ok ? "" : random.errors[0].reason).toMatch(/not a readable XLSX workbook/);
-    const junkZip = await readAndCheck("equipment", "catalog.xlsx", new Uint8Array([0x50, 0x4b, 0x03, 0x04, 1, 2, 3, 4, 5]), undefined);
+    const junkZip = await readAndCheck(
+      "equipment",
+      "catalog.xlsx",
+      new Uint8Array([0x50, 0x4b, 0x03, 0x04, 1, 2, 3, 4, 5]),
+      undefined,
+    );
     expect(junkZip.ok ? "" : junkZip.errors[0].reason).toMatch(/not a readable XLSX workbook/);
     expect(junkZip.ok ? "" : junkZip.errors[0].reason).not.toMatch(INTERNALS);
   });

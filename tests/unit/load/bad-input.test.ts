@@ -1,8 +1,13 @@
 /** Bad input: each case is refused with a LoadInputError naming the field (and range where one exists). */
 import { describe, expect, it } from "vitest";
-import { computeFacingLoads, LoadInputError, parsePlanInput, parseSiteConditions, safeParsePlanInput } from "../../../lib/load";
+import {
+  computeFacingLoads,
+  LoadInputError,
+  parsePlanInput,
+  parseSiteConditions,
+  safeParsePlanInput,
+} from "../../../lib/load";
 import { errorOf, SEA_LEVEL_SITE, symmetricPlan } from "./helpers";
-
 
 const base = symmetricPlan();
 const withFront = (front: Record<string, unknown>) => ({ ...base, facades: { ...base.facades, front } });
@@ -37,7 +42,9 @@ describe("bad plan input", () => {
   });
 
   it("SHGC above 1", () => {
-    const e = errorOf(() => parsePlanInput(withFront({ grossWallAreaFt2: 400, window: { areaFt2: 40, shgc: 1.2 } })));
+    const e = errorOf(() =>
+      parsePlanInput(withFront({ grossWallAreaFt2: 400, window: { areaFt2: 40, shgc: 1.2 } })),
+    );
     expect(e.field).toBe("facades.front.window.shgc");
     expect(e.range).toMatchObject({ min: 0, max: 1 });
   });
@@ -56,7 +63,9 @@ describe("bad plan input", () => {
   });
 
   it("ducts placed in an attic the plan does not have", () => {
-    const e = errorOf(() => parsePlanInput({ ...base, attic: { kind: "encapsulated" }, ducts: { location: "vented-attic" } }));
+    const e = errorOf(() =>
+      parsePlanInput({ ...base, attic: { kind: "encapsulated" }, ducts: { location: "vented-attic" } }),
+    );
     expect(e.field).toBe("ducts.location");
   });
 
@@ -66,16 +75,28 @@ describe("bad plan input", () => {
   });
 
   it("reports every problem at once, not just the first", () => {
-    const result = safeParsePlanInput({ ...withFront({ grossWallAreaFt2: -1 }), bedrooms: 2.5, ducts: { location: "roof" } });
+    const result = safeParsePlanInput({
+      ...withFront({ grossWallAreaFt2: -1 }),
+      bedrooms: 2.5,
+      ducts: { location: "roof" },
+    });
     expect(result.ok).toBe(false);
     if (!result.ok) {
-      expect(result.issues.map((i) => i.field).sort()).toEqual(["bedrooms", "ducts.location", "facades.front.grossWallAreaFt2"]);
+      expect(result.issues.map((i) => i.field).sort()).toEqual([
+        "bedrooms",
+        "ducts.location",
+        "facades.front.grossWallAreaFt2",
+      ]);
     }
   });
 
   it("computeFacingLoads validates too, and refuses a non-finite facing", () => {
-    expect(() => computeFacingLoads(withFront({ grossWallAreaFt2: -1 }), SEA_LEVEL_SITE, 0)).toThrow(LoadInputError);
-    expect(errorOf(() => computeFacingLoads(base, SEA_LEVEL_SITE, Number.NaN)).field).toBe("facingAzimuthDeg");
+    expect(() => computeFacingLoads(withFront({ grossWallAreaFt2: -1 }), SEA_LEVEL_SITE, 0)).toThrow(
+      LoadInputError,
+    );
+    expect(errorOf(() => computeFacingLoads(base, SEA_LEVEL_SITE, Number.NaN)).field).toBe(
+      "facingAzimuthDeg",
+    );
   });
 });
 
@@ -108,7 +129,9 @@ describe("unknown keys are refused by name", () => {
   });
 
   it("a misspelt nested key names its path", () => {
-    const e = errorOf(() => parsePlanInput(withFront({ grossWallAreaFt2: 400, window: { areaFt2: 40, shgcc: 0.3 } })));
+    const e = errorOf(() =>
+      parsePlanInput(withFront({ grossWallAreaFt2: 400, window: { areaFt2: 40, shgcc: 0.3 } })),
+    );
     expect(e.field).toBe("facades.front.window");
     expect(e.message).toMatch(/shgcc/);
   });
@@ -119,7 +142,9 @@ describe("unknown keys are refused by name", () => {
   });
 
   it("two leakage figures at once are refused", () => {
-    const e = errorOf(() => parsePlanInput({ ...base, infiltration: { ach50: 5, effectiveLeakageAreaIn2: 80 } }));
+    const e = errorOf(() =>
+      parsePlanInput({ ...base, infiltration: { ach50: 5, effectiveLeakageAreaIn2: 80 } }),
+    );
     expect(e.field).toBe("infiltration.effectiveLeakageAreaIn2");
   });
 });

@@ -6,7 +6,14 @@
  * marked "common practice".
  */
 import { describe, expect, it } from "vitest";
-import { computeFacingLoads, computePlanFacings, LoadInputError, parsePlanInput, safeParsePlanInput, type PlanInputRaw } from "../../../lib/load";
+import {
+  computeFacingLoads,
+  computePlanFacings,
+  LoadInputError,
+  parsePlanInput,
+  safeParsePlanInput,
+  type PlanInputRaw,
+} from "../../../lib/load";
 import { ductLossFactor, type DuctTableLocation, type DuctTableMode } from "../../../lib/load/ducts";
 import { ASPEN_1, BIRCH_2, CEDAR_BEND_SITE } from "../../fixtures/engine/example-plans";
 import { SEA_LEVEL_SITE, symmetricPlan } from "./helpers";
@@ -33,9 +40,12 @@ describe("HoF 2021 ch. 17 Table 6 cells (read from the printed table)", () => {
     ["crawlspace", "cooling", 2, 8, 11, 0.11],
     ["crawlspace", "heating-heat-pump", 1, 0, 5, 0.34],
   ];
-  it.each(cells)("%s %s, %i story, R-%i, %i %%/%i %% → printed value", (location, mode, stories, r, leak, expected) => {
-    expect(factor(location, mode, stories, r, leak).factor).toBeCloseTo(expected, 10);
-  });
+  it.each(cells)(
+    "%s %s, %i story, R-%i, %i %%/%i %% → printed value",
+    (location, mode, stories, r, leak, expected) => {
+      expect(factor(location, mode, stories, r, leak).factor).toBeCloseTo(expected, 10);
+    },
+  );
 
   it("the SI columns R-0.7 and R-1.4 m²·K/W are the R-4 and R-8 wraps (1 m²·K/W = 5.678 h·ft²·°F/Btu, unit conversion)", () => {
     expect(0.7 * 5.678).toBeCloseTo(4, 0);
@@ -58,7 +68,10 @@ describe("between and beyond the printed columns (our interpolation)", () => {
   });
 
   it("unequal leakage uses the mean of supply and return", () => {
-    expect(factor("attic", "cooling", 1, 8, 3, 13).factor).toBeCloseTo(factor("attic", "cooling", 1, 8, 8).factor, 10);
+    expect(factor("attic", "cooling", 1, 8, 3, 13).factor).toBeCloseTo(
+      factor("attic", "cooling", 1, 8, 8).factor,
+      10,
+    );
   });
 
   it("insulation above R-8 takes the R-8 column, with a note", () => {
@@ -80,7 +93,9 @@ describe("between and beyond the printed columns (our interpolation)", () => {
   });
 
   it("leakage beyond 20 % per side is refused by the table method, naming the field and range", () => {
-    const plan = symmetricPlan({ ducts: { location: "vented-attic", supplyLeakagePct: 25, returnLeakagePct: 25 } });
+    const plan = symmetricPlan({
+      ducts: { location: "vented-attic", supplyLeakagePct: 25, returnLeakagePct: 25 },
+    });
     const result = safeParsePlanInput(plan);
     expect(result.ok).toBe(false);
     if (!result.ok) {
@@ -90,14 +105,26 @@ describe("between and beyond the printed columns (our interpolation)", () => {
     }
     expect(() => parsePlanInput(plan)).toThrow(LoadInputError);
     // The same leakage is accepted for the other method, and for ducts in conditioned space.
-    expect(safeParsePlanInput({ ...plan, ducts: { ...plan.ducts, method: "conduction-leakage" } }).ok).toBe(true);
-    expect(safeParsePlanInput({ ...plan, ducts: { location: "conditioned-space", supplyLeakagePct: 25, returnLeakagePct: 25 } }).ok).toBe(true);
+    expect(safeParsePlanInput({ ...plan, ducts: { ...plan.ducts, method: "conduction-leakage" } }).ok).toBe(
+      true,
+    );
+    expect(
+      safeParsePlanInput({
+        ...plan,
+        ducts: { location: "conditioned-space", supplyLeakagePct: 25, returnLeakagePct: 25 },
+      }).ok,
+    ).toBe(true);
   });
 });
 
 describe("duct loads in the engine (eq. 19 on the building load)", () => {
   const attic = (ducts: Record<string, unknown>, extra: Partial<PlanInputRaw> = {}) =>
-    computeFacingLoads(symmetricPlan({ ...extra, ducts: { location: "vented-attic", ...ducts } }), SEA_LEVEL_SITE, 0, { procedure: "hourly" });
+    computeFacingLoads(
+      symmetricPlan({ ...extra, ducts: { location: "vented-attic", ...ducts } }),
+      SEA_LEVEL_SITE,
+      0,
+      { procedure: "hourly" },
+    );
 
   it("cooling: the duct gain at the peak hour is F_dl × the rest of the sensible load (1 story 0.27, 2 stories 0.25)", () => {
     for (const [stories, f] of [
@@ -114,24 +141,39 @@ describe("duct loads in the engine (eq. 19 on the building load)", () => {
     const furnace = attic({ insulationR: 8, heatingSystem: "furnace" }).heating;
     const heatPump = attic({ insulationR: 8, heatingSystem: "heat-pump" }).heating;
     expect(furnace.byComponent.ducts).toBeCloseTo(0.13 * (furnace.totalBtuh - furnace.byComponent.ducts), 6);
-    expect(heatPump.byComponent.ducts).toBeCloseTo(0.16 * (heatPump.totalBtuh - heatPump.byComponent.ducts), 6);
+    expect(heatPump.byComponent.ducts).toBeCloseTo(
+      0.16 * (heatPump.totalBtuh - heatPump.byComponent.ducts),
+      6,
+    );
   });
 
   it("ducts in a vented crawlspace: cooling 0.05, heating 0.13 (Table 6 crawlspace row, 1 story, R-8, 5 %/5 %)", () => {
     const plan = symmetricPlan({
-      foundation: { kind: "vented-crawlspace", floor: { baseId: "floor-joists-2x10-16in-oc", cavityR: 19 }, floorAreaFt2: 1600 },
+      foundation: {
+        kind: "vented-crawlspace",
+        floor: { baseId: "floor-joists-2x10-16in-oc", cavityR: 19 },
+        floorAreaFt2: 1600,
+      },
       ducts: { location: "vented-crawlspace", insulationR: 8 },
     });
     const r = computeFacingLoads(plan, SEA_LEVEL_SITE, 0, { procedure: "hourly" });
-    expect(r.cooling.sensibleByComponent.ducts).toBeCloseTo(0.05 * (r.cooling.sensibleBtuh - r.cooling.sensibleByComponent.ducts), 6);
-    expect(r.heating.byComponent.ducts).toBeCloseTo(0.13 * (r.heating.totalBtuh - r.heating.byComponent.ducts), 6);
+    expect(r.cooling.sensibleByComponent.ducts).toBeCloseTo(
+      0.05 * (r.cooling.sensibleBtuh - r.cooling.sensibleByComponent.ducts),
+      6,
+    );
+    expect(r.heating.byComponent.ducts).toBeCloseTo(
+      0.13 * (r.heating.totalBtuh - r.heating.byComponent.ducts),
+      6,
+    );
   });
 
   it("the result says which duct method was used", () => {
     expect(attic({}).notes.join(" ")).toMatch(/Table 6 duct loss\/gain factors/);
     expect(attic({ method: "conduction-leakage" }).notes.join(" ")).toMatch(/conduction-and-leakage model/);
     const birch = computeFacingLoads(BIRCH_2, CEDAR_BEND_SITE, 0, { procedure: "hourly" });
-    expect(birch.notes.join(" ")).toMatch(/encapsulated-attic: the handbook duct-factor table has no such location/);
+    expect(birch.notes.join(" ")).toMatch(
+      /encapsulated-attic: the handbook duct-factor table has no such location/,
+    );
   });
 
   it("the conduction-leakage model stays selectable and still adds to both loads", () => {
@@ -141,7 +183,8 @@ describe("duct loads in the engine (eq. 19 on the building load)", () => {
   });
 
   it("unknown duct method or heating system: a clear error naming the field", () => {
-    const bad = (ducts: Record<string, unknown>) => safeParsePlanInput(symmetricPlan({ ducts: { location: "vented-attic", ...ducts } }));
+    const bad = (ducts: Record<string, unknown>) =>
+      safeParsePlanInput(symmetricPlan({ ducts: { location: "vented-attic", ...ducts } }));
     const m = bad({ method: "rule-of-thumb" });
     expect(m.ok).toBe(false);
     if (!m.ok) expect(m.issues[0]).toMatchObject({ field: "ducts.method" });
@@ -168,7 +211,12 @@ describe("against what the trade expects (common practice)", () => {
       const ducts = f.cooling.sensibleByComponent.ducts;
       expect(ducts / (f.cooling.sensibleBtuh - ducts)).toBeLessThan(0.1);
     }
-    const inside = computeFacingLoads({ ...ASPEN_1, ducts: { location: "conditioned-space" } }, CEDAR_BEND_SITE, 0, { procedure: "hourly" });
+    const inside = computeFacingLoads(
+      { ...ASPEN_1, ducts: { location: "conditioned-space" } },
+      CEDAR_BEND_SITE,
+      0,
+      { procedure: "hourly" },
+    );
     expect(inside.cooling.sensibleByComponent.ducts).toBe(0);
     expect(inside.heating.byComponent.ducts).toBe(0);
   });

@@ -10,7 +10,9 @@ import { describe, expect, it } from "vitest";
 import { computePlanFacings, LOAD_PROCEDURES } from "../../../lib/load";
 import { CEDAR_BEND_SITE, EXAMPLE_PLANS } from "../../fixtures/engine/example-plans";
 
-describe.each(EXAMPLE_PLANS.flatMap((p) => LOAD_PROCEDURES.map((procedure) => [p.name ?? "plan", procedure, p] as const)))("example house %s, %s", (_name, procedure, plan) => {
+describe.each(
+  EXAMPLE_PLANS.flatMap((p) => LOAD_PROCEDURES.map((procedure) => [p.name ?? "plan", procedure, p] as const)),
+)("example house %s, %s", (_name, procedure, plan) => {
   const result = computePlanFacings(plan, CEDAR_BEND_SITE, { procedure });
   it("gives plausible loads at every facing (common practice bounds)", () => {
     for (const f of result.facings) {

@@ -28,7 +28,10 @@ describe("solar geometry", () => {
 describe("overhang shading geometry", () => {
   // Shadow below the overhang = depth × tan(profile angle); shaded part of the glass = shadow − gap above the head.
   it("a 2 ft overhang 1 ft above a 5 ft window, profile angle 60° (tan 1.732): 2.464 ft of 5 ft shaded", () => {
-    expect(overhangSunlitFraction(2, 1, 5, Math.tan((60 * Math.PI) / 180))).toBeCloseTo(1 - (2 * 1.7320508 - 1) / 5, 6);
+    expect(overhangSunlitFraction(2, 1, 5, Math.tan((60 * Math.PI) / 180))).toBeCloseTo(
+      1 - (2 * 1.7320508 - 1) / 5,
+      6,
+    );
   });
   it("no overhang, or low sun, leaves the window fully sunlit; a deep one shades it all", () => {
     expect(overhangSunlitFraction(0, 1, 5, 3)).toBe(1);
@@ -38,7 +41,9 @@ describe("overhang shading geometry", () => {
   it("an overhang lowers the window's solar gain on a south facade", () => {
     // ASPEN_1 has 1.5 ft overhangs; at July noon at 33.5° N that shades a south window fully.
     const shaded = computeFacingLoads(ASPEN_1, CEDAR_BEND_SITE, 180, { procedure: "hourly" });
-    const plan = structuredClone(ASPEN_1) as typeof ASPEN_1 & { facades: { front: { window: { overhangDepthFt: number } } } };
+    const plan = structuredClone(ASPEN_1) as typeof ASPEN_1 & {
+      facades: { front: { window: { overhangDepthFt: number } } };
+    };
     plan.facades.front.window.overhangDepthFt = 0;
     const bare = computeFacingLoads(plan, CEDAR_BEND_SITE, 180, { procedure: "hourly" });
     // Solar noon (hour 12), when the sun is square to the south facade.
@@ -62,6 +67,8 @@ describe("SHGC angular curve", () => {
 
 describe("orientation", () => {
   it("facade azimuths: front = θ, left = θ + 90, back = θ + 180, right = θ + 270", () => {
-    expect(computeFacingLoads(ASPEN_1, CEDAR_BEND_SITE, 300, { procedure: "hourly" }).facadeAzimuthsDeg).toEqual({ front: 300, left: 30, back: 120, right: 210 });
+    expect(
+      computeFacingLoads(ASPEN_1, CEDAR_BEND_SITE, 300, { procedure: "hourly" }).facadeAzimuthsDeg,
+    ).toEqual({ front: 300, left: 30, back: 120, right: 210 });
   });
 });

@@ -90,7 +90,8 @@ describe("hand calculation: box house heating load", () => {
   it("the engine agrees with the hand calculation, component by component (±0.5 %)", () => {
     const result = computeFacingLoads(box, site, 0, { procedure: "hourly" }).heating;
     const c = result.byComponent;
-    const near = (actual: number, expected: number) => expect(Math.abs(actual - expected)).toBeLessThanOrEqual(0.005 * expected);
+    const near = (actual: number, expected: number) =>
+      expect(Math.abs(actual - expected)).toBeLessThanOrEqual(0.005 * expected);
     near(c.walls, walls);
     near(c.windows, windows);
     near(c.doors, doors);
@@ -105,7 +106,10 @@ describe("hand calculation: box house heating load", () => {
   it("with the ducts in the vented attic the duct loss is 0.13 of that total (HoF 2021 ch. 17 eq. 19 and Table 6)", () => {
     // Table 6, attic, 1 story, 5 %/5 % leakage, R-8 (R-1.4 m²·K/W), heating with a furnace: F_dl = 0.13.
     const ducts = 0.13 * total; //                               ≈ 0.13 × 23,718 ≈ 3083 Btu/h
-    const attic = { ...box, ducts: { location: "vented-attic", insulationR: 8, supplyLeakagePct: 5, returnLeakagePct: 5 } };
+    const attic = {
+      ...box,
+      ducts: { location: "vented-attic", insulationR: 8, supplyLeakagePct: 5, returnLeakagePct: 5 },
+    };
     const result = computeFacingLoads(attic, site, 0, { procedure: "hourly" }).heating;
     expect(Math.abs(result.byComponent.ducts - ducts)).toBeLessThanOrEqual(0.005 * ducts);
     expect(Math.abs(result.totalBtuh - (total + ducts))).toBeLessThanOrEqual(0.005 * (total + ducts));

@@ -30,7 +30,11 @@ export function symmetricPlan(overrides: Partial<PlanInputRaw> = {}): PlanInputR
   };
 }
 
-export function withinTolerance(actual: number, expected: number, tol: { relative?: number; absolute?: number }): boolean {
+export function withinTolerance(
+  actual: number,
+  expected: number,
+  tol: { relative?: number; absolute?: number },
+): boolean {
   if (tol.relative !== undefined) return Math.abs(actual - expected) <= tol.relative * Math.abs(expected);
   return Math.abs(actual - expected) <= (tol.absolute ?? 0) + 1e-9;
 }

@@ -97,7 +97,9 @@ describe("below-grade wall U against HoF 2021 SI ch. 18 eq. 38 (read in a stored
     const a = (2 * K_SOIL * rOther) / Math.PI;
     return ((2 * K_SOIL) / (Math.PI * depthM)) * (Math.log(depthM + a) - Math.log(a));
   };
-  const cases = [1, 2, 4, 6, 8].flatMap((depthFt) => [0, 10].map((insulationR) => [depthFt, insulationR] as const));
+  const cases = [1, 2, 4, 6, 8].flatMap((depthFt) =>
+    [0, 10].map((insulationR) => [depthFt, insulationR] as const),
+  );
   it.each(cases)("%i ft below grade, insulation R-%i", (depthFt, insulationR) => {
     const ours = belowGradeWallU(insulationR, depthFt) * IP_R_PER_SI_R;
     const handbook = eq38(depthFt * 0.3048, 0.259 + insulationR / IP_R_PER_SI_R);

@@ -3,7 +3,8 @@ import { describe, expect, it } from "vitest";
 import { computeFacingLoads, type PlanInputRaw } from "../../../lib/load";
 import { SEA_LEVEL_SITE, symmetricPlan } from "./helpers";
 
-const at = (plan: PlanInputRaw, site = SEA_LEVEL_SITE, az = 0) => computeFacingLoads(plan, site, az, { procedure: "hourly" });
+const at = (plan: PlanInputRaw, site = SEA_LEVEL_SITE, az = 0) =>
+  computeFacingLoads(plan, site, az, { procedure: "hourly" });
 
 describe("model behaviour", () => {
   it("ducts in conditioned space add nothing; ducts in a vented attic add sensible load to both seasons", () => {
@@ -20,8 +21,16 @@ describe("model behaviour", () => {
   });
 
   it("better duct insulation and tighter ducts lower the duct load", () => {
-    const loose = at(symmetricPlan({ ducts: { location: "vented-attic", insulationR: 4, supplyLeakagePct: 10, returnLeakagePct: 10 } }));
-    const tight = at(symmetricPlan({ ducts: { location: "vented-attic", insulationR: 8, supplyLeakagePct: 3, returnLeakagePct: 3 } }));
+    const loose = at(
+      symmetricPlan({
+        ducts: { location: "vented-attic", insulationR: 4, supplyLeakagePct: 10, returnLeakagePct: 10 },
+      }),
+    );
+    const tight = at(
+      symmetricPlan({
+        ducts: { location: "vented-attic", insulationR: 8, supplyLeakagePct: 3, returnLeakagePct: 3 },
+      }),
+    );
     expect(tight.cooling.sensibleByComponent.ducts).toBeLessThan(loose.cooling.sensibleByComponent.ducts);
     expect(tight.heating.byComponent.ducts).toBeLessThan(loose.heating.byComponent.ducts);
   });
@@ -29,10 +38,20 @@ describe("model behaviour", () => {
   it("a balanced system with recovery loads the house less than the same flow without", () => {
     const plain = at(symmetricPlan({ ventilation: { kind: "balanced", cfm: 80 } }));
     const erv = at(
-      symmetricPlan({ ventilation: { kind: "balanced", cfm: 80, sensibleRecoveryEffectiveness: 0.7, latentRecoveryEffectiveness: 0.5 } }),
+      symmetricPlan({
+        ventilation: {
+          kind: "balanced",
+          cfm: 80,
+          sensibleRecoveryEffectiveness: 0.7,
+          latentRecoveryEffectiveness: 0.5,
+        },
+      }),
     );
     expect(erv.heating.byComponent.ventilation).toBeCloseTo(0.3 * plain.heating.byComponent.ventilation, 6);
-    expect(erv.cooling.latentByComponent.ventilation).toBeCloseTo(0.5 * plain.cooling.latentByComponent.ventilation, 6);
+    expect(erv.cooling.latentByComponent.ventilation).toBeCloseTo(
+      0.5 * plain.cooling.latentByComponent.ventilation,
+      6,
+    );
   });
 
   it("ventilation defaults to the 62.2 rate and is reported beside the requirement", () => {
@@ -48,14 +67,22 @@ describe("model behaviour", () => {
     // Standard atmosphere, HoF 2021 SI ch. 1 eq. 3 (read in a stored copy): p = 101.325(1 − 2.25577e−5·Z)^5.2559 kPa,
     // Z = 5000 ft = 1524 m → P/P0 = 0.832; infiltration flow is the same.
     const pRatio = Math.pow(1 - 2.25577e-5 * 5000 * 0.3048, 5.2559);
-    expect(high.heating.byComponent.infiltration / low.heating.byComponent.infiltration).toBeCloseTo(pRatio, 2);
+    expect(high.heating.byComponent.infiltration / low.heating.byComponent.infiltration).toBeCloseTo(
+      pRatio,
+      2,
+    );
   });
 
   it("explicit internal gain rows replace the handbook default and add occupants", () => {
     const r = at(
       symmetricPlan({
         occupants: 2,
-        internalGains: { rows: [{ name: "kitchen", sensibleBtuh: 1200, latentBtuh: 300 }, { name: "home office", sensibleBtuh: 500 }] },
+        internalGains: {
+          rows: [
+            { name: "kitchen", sensibleBtuh: 1200, latentBtuh: 300 },
+            { name: "home office", sensibleBtuh: 500 },
+          ],
+        },
       }),
     );
     expect(r.cooling.sensibleByComponent.internal).toBe(1200 + 500 + 2 * 230);
@@ -64,7 +91,11 @@ describe("model behaviour", () => {
 
   it("heavy block walls damp and delay the wall gain compared with light frame of similar U", () => {
     const frame = at(symmetricPlan({ wall: { baseId: "wood-2x4-16in-oc", cavityR: 13 } }), SEA_LEVEL_SITE, 0);
-    const block = at(symmetricPlan({ wall: { baseId: "cmu-8in-hollow", cavityR: 0, continuousR: 8.5 } }), SEA_LEVEL_SITE, 0);
+    const block = at(
+      symmetricPlan({ wall: { baseId: "cmu-8in-hollow", cavityR: 0, continuousR: 8.5 } }),
+      SEA_LEVEL_SITE,
+      0,
+    );
     expect(block.cooling.sensibleByComponent.walls).toBeLessThan(frame.cooling.sensibleByComponent.walls);
   });
 
@@ -72,7 +103,9 @@ describe("model behaviour", () => {
     const light = at(symmetricPlan({ attic: { kind: "vented", roofSolarAbsorptance: 0.3 } }));
     const dark = at(symmetricPlan({ attic: { kind: "vented", roofSolarAbsorptance: 0.9 } }));
     expect(dark.cooling.atticF ?? 0).toBeGreaterThan((light.cooling.atticF ?? 0) + 10);
-    expect(dark.cooling.sensibleByComponent.ceilings).toBeGreaterThan(light.cooling.sensibleByComponent.ceilings);
+    expect(dark.cooling.sensibleByComponent.ceilings).toBeGreaterThan(
+      light.cooling.sensibleByComponent.ceilings,
+    );
   });
 
   it("a vented crawlspace floor and a floor over the garage appear in the floor component", () => {
@@ -105,16 +138,25 @@ describe("direct inputs a practitioner may have", () => {
 
   it("an effective leakage area gives the same infiltration as the blower-door figure it came from", () => {
     const fromAch = at(symmetricPlan());
-    const fromEla = at(symmetricPlan({ infiltration: { effectiveLeakageAreaIn2: fromAch.effectiveLeakageAreaIn2 } }));
+    const fromEla = at(
+      symmetricPlan({ infiltration: { effectiveLeakageAreaIn2: fromAch.effectiveLeakageAreaIn2 } }),
+    );
     expect(fromEla.heating.byComponent.infiltration).toBeCloseTo(fromAch.heating.byComponent.infiltration, 6);
   });
 
   it("exterior attenuation (an insect screen) lowers window solar gain", () => {
     const side = { grossWallAreaFt2: 400, window: { areaFt2: 40, uFactor: 0.3, shgc: 0.3 } };
-    const screened = { grossWallAreaFt2: 400, window: { areaFt2: 40, uFactor: 0.3, shgc: 0.3, exteriorAttenuation: 0.64 } };
+    const screened = {
+      grossWallAreaFt2: 400,
+      window: { areaFt2: 40, uFactor: 0.3, shgc: 0.3, exteriorAttenuation: 0.64 },
+    };
     const open = at(symmetricPlan({ facades: { front: side, left: side, back: side, right: side } }));
-    const withScreens = at(symmetricPlan({ facades: { front: screened, left: screened, back: screened, right: screened } }));
-    expect(withScreens.cooling.sensibleByComponent.windows).toBeLessThan(open.cooling.sensibleByComponent.windows);
+    const withScreens = at(
+      symmetricPlan({ facades: { front: screened, left: screened, back: screened, right: screened } }),
+    );
+    expect(withScreens.cooling.sensibleByComponent.windows).toBeLessThan(
+      open.cooling.sensibleByComponent.windows,
+    );
     expect(withScreens.heating.totalBtuh).toBeCloseTo(open.heating.totalBtuh, 6);
   });
 });

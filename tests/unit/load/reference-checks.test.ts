@@ -9,8 +9,16 @@ import { solAirTemperatureF } from "../../../lib/load/attic";
 import { computeFacingLoads } from "../../../lib/load";
 import { ductLossFactor } from "../../../lib/load/ducts";
 import { ashrae622VentilationCfm, lblInfiltrationLps } from "../../../lib/load/infiltration";
-import { defaultInternalGains, defaultInternalSensibleW, occupantsOf } from "../../../lib/load/internal-gains";
-import { humidityRatioGrFromRelHum, humidityRatioGrFromWetBulb, SEA_LEVEL_PRESSURE_PSIA } from "../../../lib/load/psychrometrics";
+import {
+  defaultInternalGains,
+  defaultInternalSensibleW,
+  occupantsOf,
+} from "../../../lib/load/internal-gains";
+import {
+  humidityRatioGrFromRelHum,
+  humidityRatioGrFromWetBulb,
+  SEA_LEVEL_PRESSURE_PSIA,
+} from "../../../lib/load/psychrometrics";
 import {
   apparentSolarTimeHours,
   clearSkyIrradiance,
@@ -23,7 +31,13 @@ import { REFERENCE_CHECKS } from "../../fixtures/engine/reference-checks";
 import { symmetricPlan, withinTolerance } from "./helpers";
 
 // Atlanta example of HoF 2021 ch. 14: 33.64° N, 84.43° W, Eastern time (meridian 75° W), July 21.
-const ATLANTA = { latitudeDeg: 33.64, longitudeDeg: -84.43, standardMeridianDeg: -75, tauBeam: 0.515, tauDiffuse: 2.066 };
+const ATLANTA = {
+  latitudeDeg: 33.64,
+  longitudeDeg: -84.43,
+  standardMeridianDeg: -75,
+  tauBeam: 0.515,
+  tauDiffuse: 2.066,
+};
 const JULY_21 = designDayOfYear(7);
 
 function atlantaNoon() {
@@ -41,7 +55,14 @@ function atlanta3pmVertical60WofS() {
 }
 
 function exampleDuctFactor(mode: "cooling" | "heating-furnace"): number {
-  return ductLossFactor({ location: "attic", mode, stories: 1, insulationR: 8, supplyLeakagePct: 5, returnLeakagePct: 5 }).factor;
+  return ductLossFactor({
+    location: "attic",
+    mode,
+    stories: 1,
+    insulationR: 8,
+    supplyLeakagePct: 5,
+    returnLeakagePct: 5,
+  }).factor;
 }
 
 /** The engine's value for each reference row. */
@@ -58,7 +79,8 @@ const ACTUAL: Record<string, () => number> = {
   "wall-u-r15": () => wallU({ baseId: "wood-2x4-16in-oc", cavityR: 15, continuousR: 0 }),
   // SI inputs of the example converted to IP (1 m²·K/W = 5.678263 h·ft²·°F/Btu), the result back to SI.
   "wall-u-hof27-example-3": () =>
-    wallU({ baseId: "wood-2x4-16in-oc", cavityR: 2.3 * 5.678263, continuousR: 0.7 * 5.678263 }, "heating") * 5.678263,
+    wallU({ baseId: "wood-2x4-16in-oc", cavityR: 2.3 * 5.678263, continuousR: 0.7 * 5.678263 }, "heating") *
+    5.678263,
   "ceiling-u-r38": () => ceilingU({ baseId: "attic-joists-24in-oc", cavityR: 38, continuousR: 0 }),
   "ceiling-u-r49": () => ceilingU({ baseId: "attic-joists-24in-oc", cavityR: 49, continuousR: 0 }),
   // HoF 2021 ch. 16 eq. 48 in SI with Cs (Table 4, 2 stories) 0.000290 and Cw (Table 6, 2 stories, class 3) 0.000231: L/s → m³/s.
@@ -77,7 +99,9 @@ const ACTUAL: Record<string, () => number> = {
       tauBeam: 0.515,
       tauDiffuse: 2.066,
     };
-    const plan = symmetricPlan({ attic: { kind: "vented", roofSolarAbsorptance: 0.92, ceiling: { cavityR: 38 } } });
+    const plan = symmetricPlan({
+      attic: { kind: "vented", roofSolarAbsorptance: 0.92, ceiling: { cavityR: 38 } },
+    });
     const atticF = computeFacingLoads(plan, site, 180, { procedure: "hourly" }).cooling.atticF;
     if (atticF === null) throw new Error("no attic temperature");
     return atticF;
@@ -92,7 +116,10 @@ const ACTUAL: Record<string, () => number> = {
 describe("reference checks (outside references)", () => {
   it.each(REFERENCE_CHECKS.map((row) => [row.id, row] as const))("%s", (_id, row) => {
     const actual = ACTUAL[row.id]();
-    const tol = row.tolerance.relative !== undefined ? `±${row.tolerance.relative * 100} %` : `±${row.tolerance.absolute} ${row.unit}`;
+    const tol =
+      row.tolerance.relative !== undefined
+        ? `±${row.tolerance.relative * 100} %`
+        : `±${row.tolerance.absolute} ${row.unit}`;
     expect(
       withinTolerance(actual, row.expected, row.tolerance),
       `${row.check}: engine ${actual.toPrecision(6)} ${row.unit}, expected ${row.expected} ${tol} (${row.source})`,

@@ -12,7 +12,10 @@ import { describe, expect, it } from "vitest";
 import { parsePlanInput, parseSiteConditions } from "../../../lib/load";
 import { checkRlfApplicability } from "../../../lib/load/residential-load-factor/applicability";
 import { computeResidentialLoadFactorFacing } from "../../../lib/load/residential-load-factor/from-plan";
-import { residentialLoadFactorLoads, type RlfComponentRow } from "../../../lib/load/residential-load-factor/procedure";
+import {
+  residentialLoadFactorLoads,
+  type RlfComponentRow,
+} from "../../../lib/load/residential-load-factor/procedure";
 import { BTUH_FT2_PER_W_M2, BTUH_PER_W, LPS_PER_CFM } from "../../../lib/load/units";
 import { M_PER_FT } from "../../../lib/load/residential-load-factor/tables";
 import {
@@ -34,11 +37,22 @@ const lps = (cfm: number) => cfm * LPS_PER_CFM;
 
 function near(actual: number, expected: number, tol: { relative?: number; absolute?: number }): boolean {
   const d = Math.abs(actual - expected);
-  return (tol.relative !== undefined && d <= tol.relative * Math.abs(expected)) || (tol.absolute !== undefined && d <= tol.absolute + 1e-9);
+  return (
+    (tol.relative !== undefined && d <= tol.relative * Math.abs(expected)) ||
+    (tol.absolute !== undefined && d <= tol.absolute + 1e-9)
+  );
 }
 
-function expectNear(actual: number, expected: number, tol: { relative?: number; absolute?: number }, what: string) {
-  expect(near(actual, expected, tol), `${what}: ours ${actual.toFixed(3)}, printed ${expected} (tolerance ${JSON.stringify(tol)})`).toBe(true);
+function expectNear(
+  actual: number,
+  expected: number,
+  tol: { relative?: number; absolute?: number },
+  what: string,
+) {
+  expect(
+    near(actual, expected, tol),
+    `${what}: ours ${actual.toFixed(3)}, printed ${expected} (tolerance ${JSON.stringify(tol)})`,
+  ).toBe(true);
 }
 
 const result = residentialLoadFactorLoads(EXAMPLE_HOUSE);
@@ -59,8 +73,18 @@ describe("HoF 2021 ch. 17 example house: envelope loads, Table 22 (W)", () => {
   });
 
   it("envelope totals 4674 W heating, 1900 W cooling (Table 22; ±0.5 %: sums of rounded rows)", () => {
-    expectNear(W(result.heating.envelopeBtuh), PRINTED_TOTALS.envelopeHeatingW, { relative: 0.005 }, "envelope heating");
-    expectNear(W(result.cooling.envelopeBtuh), PRINTED_TOTALS.envelopeCoolingW, { relative: 0.005 }, "envelope cooling");
+    expectNear(
+      W(result.heating.envelopeBtuh),
+      PRINTED_TOTALS.envelopeHeatingW,
+      { relative: 0.005 },
+      "envelope heating",
+    );
+    expectNear(
+      W(result.cooling.envelopeBtuh),
+      PRINTED_TOTALS.envelopeCoolingW,
+      { relative: 0.005 },
+      "envelope cooling",
+    );
   });
 
   it("the printed rows add up to the printed envelope totals (a check of the transcription, ±2 W)", () => {
@@ -72,24 +96,37 @@ describe("HoF 2021 ch. 17 example house: envelope loads, Table 22 (W)", () => {
 });
 
 describe("HoF 2021 ch. 17 example house: factors, Tables 20 and 21", () => {
-  it.each(PRINTED_ENVELOPE_ROWS.map((r) => [r.id, r] as const))("%s HF and CF (Table 20/22, ±0.5 %)", (id, printed) => {
-    const row = rowOf(id);
-    const toSi = row.quantityUnit === "ft" ? perM : perM2;
-    // Floor perimeter HF: Table 20 prints 19.55 W/(m·K)·K, Table 22 rounds it to 19.6 (±0.5 % covers both).
-    if (printed.hf !== null) expectNear(toSi(row.heatingFactorBtuhPerUnit), printed.hf, { relative: 0.005 }, `${id} HF`);
-    if (printed.cf !== null) expectNear(toSi(row.coolingFactorBtuhPerUnit), printed.cf, { relative: 0.005, absolute: 0.02 }, `${id} CF`);
-  });
+  it.each(PRINTED_ENVELOPE_ROWS.map((r) => [r.id, r] as const))(
+    "%s HF and CF (Table 20/22, ±0.5 %)",
+    (id, printed) => {
+      const row = rowOf(id);
+      const toSi = row.quantityUnit === "ft" ? perM : perM2;
+      // Floor perimeter HF: Table 20 prints 19.55 W/(m·K)·K, Table 22 rounds it to 19.6 (±0.5 % covers both).
+      if (printed.hf !== null)
+        expectNear(toSi(row.heatingFactorBtuhPerUnit), printed.hf, { relative: 0.005 }, `${id} HF`);
+      if (printed.cf !== null)
+        expectNear(
+          toSi(row.coolingFactorBtuhPerUnit),
+          printed.cf,
+          { relative: 0.005, absolute: 0.02 },
+          `${id} CF`,
+        );
+    },
+  );
 
-  it.each(Object.entries(PRINTED_WINDOW_FACTORS))("%s: T_x, F_shd, PXI, IAC, FF_s, CF (Table 21)", (id, printed) => {
-    const f = rowOf(id).fenestration!;
-    expect(f.exteriorTransmission).toBe(printed.tx); // Table 11, exact
-    expectNear(f.shadedFraction, printed.fshd, { absolute: 0.005 }, `${id} F_shd (printed to 0.01)`);
-    // PXI: printed from F_shd rounded to 0.01 (e.g. 0.28 for 0.275): ±1 %.
-    expectNear(f.pxiWm2, printed.pxi, { relative: 0.01 }, `${id} PXI`);
-    expectNear(f.interiorAttenuation, printed.iac, { absolute: 0.005 }, `${id} IAC`); // eq. 29: 0.84 exact
-    expect(f.solarLoadFactor).toBe(printed.ffs); // Table 13, exact
-    expectNear(perM2(rowOf(id).coolingFactorBtuhPerUnit), printed.cf, { relative: 0.01 }, `${id} CF`);
-  });
+  it.each(Object.entries(PRINTED_WINDOW_FACTORS))(
+    "%s: T_x, F_shd, PXI, IAC, FF_s, CF (Table 21)",
+    (id, printed) => {
+      const f = rowOf(id).fenestration!;
+      expect(f.exteriorTransmission).toBe(printed.tx); // Table 11, exact
+      expectNear(f.shadedFraction, printed.fshd, { absolute: 0.005 }, `${id} F_shd (printed to 0.01)`);
+      // PXI: printed from F_shd rounded to 0.01 (e.g. 0.28 for 0.275): ±1 %.
+      expectNear(f.pxiWm2, printed.pxi, { relative: 0.01 }, `${id} PXI`);
+      expectNear(f.interiorAttenuation, printed.iac, { absolute: 0.005 }, `${id} IAC`); // eq. 29: 0.84 exact
+      expect(f.solarLoadFactor).toBe(printed.ffs); // Table 13, exact
+      expectNear(perM2(rowOf(id).coolingFactorBtuhPerUnit), printed.cf, { relative: 0.01 }, `${id} CF`);
+    },
+  );
 
   it("the west 0.9 m operable window worked in the text: SLF 1.1, E_D 570, E_d 164, PXI 203, CF 40.3", () => {
     const f = rowOf("W-Operable-0.9").fenestration!;
@@ -103,34 +140,89 @@ describe("HoF 2021 ch. 17 example house: factors, Tables 20 and 21", () => {
 
 describe("HoF 2021 ch. 17 example house: infiltration, ventilation, internal gain (text after Table 22)", () => {
   it("A_L = 356.5 × 1.4 = 499 cm² (eq. 9; ±0.5 %)", () => {
-    expectNear(result.air.effectiveLeakageAreaIn2 * 6.4516, PRINTED_TOTALS.leakageAreaCm2, { relative: 0.005 }, "A_L");
+    expectNear(
+      result.air.effectiveLeakageAreaIn2 * 6.4516,
+      PRINTED_TOTALS.leakageAreaCm2,
+      { relative: 0.005 },
+      "A_L",
+    );
   });
 
   it("Q_i 36 L/s heating and 17 L/s cooling (eq. 8; printed to the L/s: ±0.5 L/s), 0.28 and 0.13 ach", () => {
-    expectNear(lps(result.air.infiltrationHeatingCfm), PRINTED_TOTALS.infiltrationHeatingLps, { absolute: 0.5 }, "Q_i,h");
-    expectNear(lps(result.air.infiltrationCoolingCfm), PRINTED_TOTALS.infiltrationCoolingLps, { absolute: 0.5 }, "Q_i,c");
+    expectNear(
+      lps(result.air.infiltrationHeatingCfm),
+      PRINTED_TOTALS.infiltrationHeatingLps,
+      { absolute: 0.5 },
+      "Q_i,h",
+    );
+    expectNear(
+      lps(result.air.infiltrationCoolingCfm),
+      PRINTED_TOTALS.infiltrationCoolingLps,
+      { absolute: 0.5 },
+      "Q_i,c",
+    );
     // Eq. 7, ACH = 3.6·Q_i/V, V = 195.3 × 2.4 = 468.7 m³ (see the fixture on Table 19's volume).
     const volumeM3 = EXAMPLE_HOUSE_SI.floorAreaM2 * EXAMPLE_HOUSE_SI.wallHeightM;
-    expectNear((3.6 * lps(result.air.infiltrationHeatingCfm)) / volumeM3, PRINTED_TOTALS.infiltrationHeatingAch, { absolute: 0.005 }, "ach heating");
-    expectNear((3.6 * lps(result.air.infiltrationCoolingCfm)) / volumeM3, PRINTED_TOTALS.infiltrationCoolingAch, { absolute: 0.005 }, "ach cooling");
+    expectNear(
+      (3.6 * lps(result.air.infiltrationHeatingCfm)) / volumeM3,
+      PRINTED_TOTALS.infiltrationHeatingAch,
+      { absolute: 0.005 },
+      "ach heating",
+    );
+    expectNear(
+      (3.6 * lps(result.air.infiltrationCoolingCfm)) / volumeM3,
+      PRINTED_TOTALS.infiltrationCoolingAch,
+      { absolute: 0.005 },
+      "ach cooling",
+    );
   });
 
   it("ventilation Q_v = 43 L/s (eq. 11 with A_cf 195.3 m², N_br 3; ±0.5 L/s)", () => {
-    expectNear(lps(result.air.requiredVentilationCfm), PRINTED_TOTALS.ventilationLps, { absolute: 0.5 }, "Q_v");
+    expectNear(
+      lps(result.air.requiredVentilationCfm),
+      PRINTED_TOTALS.ventilationLps,
+      { absolute: 0.5 },
+      "Q_v",
+    );
   });
 
   it("combined flows 79 L/s heating, 60 L/s cooling (eq. 14 plus the balanced 43 L/s; ±0.5 L/s)", () => {
-    expectNear(lps(result.air.combinedHeatingCfm + result.air.balancedCfm), PRINTED_TOTALS.combinedHeatingLps, { absolute: 0.5 }, "Q_vi,h");
-    expectNear(lps(result.air.combinedCoolingCfm + result.air.balancedCfm), PRINTED_TOTALS.combinedCoolingLps, { absolute: 0.5 }, "Q_vi,c");
+    expectNear(
+      lps(result.air.combinedHeatingCfm + result.air.balancedCfm),
+      PRINTED_TOTALS.combinedHeatingLps,
+      { absolute: 0.5 },
+      "Q_vi,h",
+    );
+    expectNear(
+      lps(result.air.combinedCoolingCfm + result.air.balancedCfm),
+      PRINTED_TOTALS.combinedCoolingLps,
+      { absolute: 0.5 },
+      "Q_vi,c",
+    );
   });
 
   it("sensible infiltration/ventilation 2235 W heating, 672 W cooling (eq. 15; ±1 %: the text rounds Q_i to 36 and 17 L/s)", () => {
-    expectNear(W(result.heating.infiltrationBtuh + result.heating.ventilationBtuh), PRINTED_TOTALS.infiltrationVentilationHeatingW, { relative: 0.01 }, "q_vi,s,h");
-    expectNear(W(result.cooling.infiltrationBtuh + result.cooling.ventilationBtuh), PRINTED_TOTALS.infiltrationVentilationCoolingW, { relative: 0.01 }, "q_vi,s,c");
+    expectNear(
+      W(result.heating.infiltrationBtuh + result.heating.ventilationBtuh),
+      PRINTED_TOTALS.infiltrationVentilationHeatingW,
+      { relative: 0.01 },
+      "q_vi,s,h",
+    );
+    expectNear(
+      W(result.cooling.infiltrationBtuh + result.cooling.ventilationBtuh),
+      PRINTED_TOTALS.infiltrationVentilationCoolingW,
+      { relative: 0.01 },
+      "q_vi,s,c",
+    );
   });
 
   it("internal sensible gain 654 W (eq. 30; ±0.5 %)", () => {
-    expectNear(W(result.cooling.internalBtuh), PRINTED_TOTALS.internalSensibleW, { relative: 0.005 }, "q_ig,s");
+    expectNear(
+      W(result.cooling.internalBtuh),
+      PRINTED_TOTALS.internalSensibleW,
+      { relative: 0.005 },
+      "q_ig,s",
+    );
   });
 });
 
@@ -143,11 +235,26 @@ describe("HoF 2021 ch. 17 example house: totals, Table 23", () => {
   // Subtotals and totals ±0.5 % (they carry the rounding of every row); distribution ±1 %.
   const cases: Array<[string, () => number, number, number]> = [
     ["heating subtotal 6909 W", () => result.heating.subtotalBtuh, PRINTED_TOTALS.subtotalHeatingW, 0.005],
-    ["heating distribution loss 898 W", () => result.heating.ductBtuh, PRINTED_TOTALS.distributionHeatingW, 0.01],
+    [
+      "heating distribution loss 898 W",
+      () => result.heating.ductBtuh,
+      PRINTED_TOTALS.distributionHeatingW,
+      0.01,
+    ],
     ["total heating load 7807 W", () => result.heating.totalBtuh, PRINTED_TOTALS.totalHeatingW, 0.005],
     ["cooling subtotal 3225 W", () => result.cooling.subtotalBtuh, PRINTED_TOTALS.subtotalCoolingW, 0.005],
-    ["cooling distribution gain 871 W", () => result.cooling.ductBtuh, PRINTED_TOTALS.distributionCoolingW, 0.01],
-    ["total sensible cooling load 4096 W", () => result.cooling.sensibleBtuh, PRINTED_TOTALS.totalSensibleCoolingW, 0.005],
+    [
+      "cooling distribution gain 871 W",
+      () => result.cooling.ductBtuh,
+      PRINTED_TOTALS.distributionCoolingW,
+      0.01,
+    ],
+    [
+      "total sensible cooling load 4096 W",
+      () => result.cooling.sensibleBtuh,
+      PRINTED_TOTALS.totalSensibleCoolingW,
+      0.005,
+    ],
   ];
   it.each(cases)("%s", (what, actual, printed, relative) => {
     expectNear(W(actual()), printed, { relative }, what);
@@ -156,8 +263,18 @@ describe("HoF 2021 ch. 17 example house: totals, Table 23", () => {
 
 describe("HoF 2021 ch. 17 example house: latent load (text after Table 23)", () => {
   it("infiltration/ventilation latent 903 W (eq. 16: 3010 × 60 × 0.0050; ±1 %) and internal latent 111 W (eq. 31; ±1 %)", () => {
-    expectNear(W(result.cooling.latent.infiltrationBtuh + result.cooling.latent.ventilationBtuh), PRINTED_TOTALS.latentInfiltrationVentilationW, { relative: 0.01 }, "q_vi,l");
-    expectNear(W(result.cooling.latent.internalBtuh), PRINTED_TOTALS.latentInternalW, { relative: 0.01 }, "q_ig,l");
+    expectNear(
+      W(result.cooling.latent.infiltrationBtuh + result.cooling.latent.ventilationBtuh),
+      PRINTED_TOTALS.latentInfiltrationVentilationW,
+      { relative: 0.01 },
+      "q_vi,l",
+    );
+    expectNear(
+      W(result.cooling.latent.internalBtuh),
+      PRINTED_TOTALS.latentInternalW,
+      { relative: 0.01 },
+      "q_ig,l",
+    );
   });
 
   /*
@@ -173,11 +290,16 @@ describe("HoF 2021 ch. 17 example house: latent load (text after Table 23)", () 
     expect(sumOfPrintedParts).not.toBe(PRINTED_TOTALS.latentTotalPrintedW); // the inconsistency in the printed text
     const ours = W(result.cooling.latent.totalBtuh);
     expectNear(ours, sumOfPrintedParts, { relative: 0.01 }, "q_l against the sum of its printed parts");
-    expect(Math.abs(ours - PRINTED_TOTALS.latentTotalPrintedW) / PRINTED_TOTALS.latentTotalPrintedW).toBeGreaterThan(0.25);
+    expect(
+      Math.abs(ours - PRINTED_TOTALS.latentTotalPrintedW) / PRINTED_TOTALS.latentTotalPrintedW,
+    ).toBeGreaterThan(0.25);
   });
 
   it("the total cooling load is the sensible total plus the latent total (eq. 32 with Table 23)", () => {
-    expect(result.cooling.totalBtuh).toBeCloseTo(result.cooling.sensibleBtuh + result.cooling.latent.totalBtuh, 9);
+    expect(result.cooling.totalBtuh).toBeCloseTo(
+      result.cooling.sensibleBtuh + result.cooling.latent.totalBtuh,
+      9,
+    );
   });
 });
 
@@ -196,7 +318,9 @@ describe("the example as the engine's plan input (EXAMPLE_PLAN / EXAMPLE_SITE), 
   const site = parseSiteConditions(EXAMPLE_SITE);
   // The plan's front faces west (our reconstruction of Figure 1). The example's own table use is given as
   // options of the mapping; its carpet is the plan's "carpet" (lib/load/slab.ts: 0.21 m²·K/W, Table 17).
-  const loads = computeResidentialLoadFactorFacing(plan, site, 270, { rlf: { tableLookup: "nearest", airFactorElevationCorrection: false } });
+  const loads = computeResidentialLoadFactorFacing(plan, site, 270, {
+    rlf: { tableLookup: "nearest", airFactorElevationCorrection: false },
+  });
 
   /*
    * What still differs from the printed example (expected values are the printed ones):
@@ -233,9 +357,24 @@ describe("the example as the engine's plan input (EXAMPLE_PLAN / EXAMPLE_SITE), 
   });
 
   it("air: sensible 2235 W × 23.5/23 heating and 672 W × 9/9.1 cooling (±2 %: eq. 10 IDF); latent 903 W (±5 %: eq. 10, psychrolib ΔW)", () => {
-    expectNear(W(loads.heating.byComponent.infiltration + loads.heating.byComponent.ventilation), 2235 * HEAT_RATIO, { relative: 0.02 }, "heating");
-    expectNear(W(loads.cooling.sensibleByComponent.infiltration + loads.cooling.sensibleByComponent.ventilation), (672 * 9) / 9.1, { relative: 0.02 }, "cooling");
-    expectNear(W(loads.cooling.latentByComponent.infiltration + loads.cooling.latentByComponent.ventilation), 903, { relative: 0.05 }, "latent");
+    expectNear(
+      W(loads.heating.byComponent.infiltration + loads.heating.byComponent.ventilation),
+      2235 * HEAT_RATIO,
+      { relative: 0.02 },
+      "heating",
+    );
+    expectNear(
+      W(loads.cooling.sensibleByComponent.infiltration + loads.cooling.sensibleByComponent.ventilation),
+      (672 * 9) / 9.1,
+      { relative: 0.02 },
+      "cooling",
+    );
+    expectNear(
+      W(loads.cooling.latentByComponent.infiltration + loads.cooling.latentByComponent.ventilation),
+      903,
+      { relative: 0.05 },
+      "latent",
+    );
   });
 
   it("totals: heating 7807 W × 23.5/23 (±1.5 %), sensible cooling 4096 W (±2 %), latent 1014 W (±5 %)", () => {

@@ -8,7 +8,10 @@
 import { describe, expect, it } from "vitest";
 import { LoadInputError, parsePlanInput, parseSiteConditions, type PlanInputRaw } from "../../../lib/load";
 import { checkRlfApplicability } from "../../../lib/load/residential-load-factor/applicability";
-import { computeResidentialLoadFactorFacing, rlfHouseFromPlan } from "../../../lib/load/residential-load-factor/from-plan";
+import {
+  computeResidentialLoadFactorFacing,
+  rlfHouseFromPlan,
+} from "../../../lib/load/residential-load-factor/from-plan";
 import {
   residentialLoadFactorLoads,
   type RlfFenestrationGroup,
@@ -63,8 +66,8 @@ function window(overrides: Partial<RlfFenestrationGroup> = {}): RlfFenestrationG
   };
 }
 
-const glassDetail = (h: RlfHouse) => residentialLoadFactorLoads(h).rows.find((r) => r.kind === "fenestration")!.fenestration!;
-
+const glassDetail = (h: RlfHouse) =>
+  residentialLoadFactorLoads(h).rows.find((r) => r.kind === "fenestration")!.fenestration!;
 
 describe("HoF 2021 ch. 17 Tables 9 and 10 against each other", () => {
   // Table 10 as read (25°–60°; see tables.ts on the stored copy's shifted columns) against the Table 9
@@ -76,7 +79,10 @@ describe("HoF 2021 ch. 17 Tables 9 and 10 against each other", () => {
       const e = table9VerticalPeakIrradianceWm2(i / 4, L);
       expect(Math.abs(e.totalWm2 - row.totalWm2[k]), `${exposure} ${L}° E_t`).toBeLessThanOrEqual(0.6);
       expect(Math.abs(e.diffuseWm2 - row.diffuseWm2[k]), `${exposure} ${L}° E_d`).toBeLessThanOrEqual(0.6);
-      expect(Math.abs(row.directWm2[k] + row.diffuseWm2[k] - row.totalWm2[k]), `${exposure} ${L}° E_D + E_d = E_t`).toBeLessThanOrEqual(1);
+      expect(
+        Math.abs(row.directWm2[k] + row.diffuseWm2[k] - row.totalWm2[k]),
+        `${exposure} ${L}° E_D + E_d = E_t`,
+      ).toBeLessThanOrEqual(1);
     });
   });
 
@@ -102,19 +108,29 @@ describe("HoF 2021 ch. 17 eq. 10 against Table 5 (IDF)", () => {
   const F = (c: number) => c * 1.8 + 32;
   const idfs = (H: number, heatC: number, coolC: number) => {
     const r = residentialLoadFactorLoads(
-      house({ infiltration: { leakage: { method: "effective-leakage-area", elaIn2: 80 }, stackHeightFt: H / 0.3048 } }, {
-        heatingOutdoorDbF: F(heatC),
-        coolingOutdoorDbF: F(coolC),
-        indoorHeatingF: F(20),
-        indoorCoolingF: F(24),
-      }),
+      house(
+        {
+          infiltration: {
+            leakage: { method: "effective-leakage-area", elaIn2: 80 },
+            stackHeightFt: H / 0.3048,
+          },
+        },
+        {
+          heatingOutdoorDbF: F(heatC),
+          coolingOutdoorDbF: F(coolC),
+          indoorHeatingF: F(20),
+          indoorCoolingF: F(24),
+        },
+      ),
     );
     return { heating: r.air.idfHeatingLpsPerCm2, cooling: r.air.idfCoolingLpsPerCm2 };
   };
   const cells: Array<[number, string, number, number]> = [];
   TABLE_5_IDF.stackHeightsM.forEach((H, i) => {
     TABLE_5_IDF.heatingOutdoorC.forEach((t, j) => cells.push([H, "heating", t, TABLE_5_IDF.values[i][j]]));
-    TABLE_5_IDF.coolingOutdoorC.forEach((t, j) => cells.push([H, "cooling", t, TABLE_5_IDF.values[i][6 + j]]));
+    TABLE_5_IDF.coolingOutdoorC.forEach((t, j) =>
+      cells.push([H, "cooling", t, TABLE_5_IDF.values[i][6 + j]]),
+    );
   });
   it.each(cells.filter(([H, mode, t]) => !(H === 7 && mode === "cooling" && t === 35)))(
     "H %s m, %s at %s °C: printed %s (±4 % or ±0.0015, the table's rounding)",
@@ -136,7 +152,9 @@ describe("latitude and exposure lookups", () => {
   });
 
   it("nearest-column lookup takes the 35° column at 33.64°, as the chapter's example does (west E_t 734)", () => {
-    const d = glassDetail(house({ fenestration: [window()], options: { tableLookup: "nearest" } }, { latitudeDeg: 33.64 }));
+    const d = glassDetail(
+      house({ fenestration: [window()], options: { tableLookup: "nearest" } }, { latitudeDeg: 33.64 }),
+    );
     expect(d.pxiWm2).toBe(734);
   });
 
@@ -144,20 +162,34 @@ describe("latitude and exposure lookups", () => {
     for (let az = 0; az < 360; az += 45) {
       const g = [window({ orientation: { kind: "vertical", azimuthDeg: az } })];
       const t10 = glassDetail(house({ fenestration: g }, { latitudeDeg: 33.64 })).pxiWm2;
-      const t9 = glassDetail(house({ fenestration: g, options: { peakIrradiance: "table-9-equations" } }, { latitudeDeg: 33.64 })).pxiWm2;
+      const t9 = glassDetail(
+        house({ fenestration: g, options: { peakIrradiance: "table-9-equations" } }, { latitudeDeg: 33.64 }),
+      ).pxiWm2;
       expect(Math.abs(t9 - t10) / t10, `azimuth ${az}`).toBeLessThan(0.01);
     }
   });
 
   it("between exposures, Table 13 and Table 10 are interpolated in azimuth: 247.5° is halfway between SW and W", () => {
-    const d = glassDetail(house({ fenestration: [window({ orientation: { kind: "vertical", azimuthDeg: 247.5 } })] }));
+    const d = glassDetail(
+      house({ fenestration: [window({ orientation: { kind: "vertical", azimuthDeg: 247.5 } })] }),
+    );
     expect(d.solarLoadFactor).toBeCloseTo((0.58 + 0.56) / 2, 9); // Table 13 SW 0.58, W 0.56
     expect(d.pxiWm2).toBeCloseTo((589 + 734) / 2, 9); // Table 10 at 35°: SE/SW E_t 589, E/W 734
   });
 
   it("southern hemisphere: a north-facing window at 35°S takes the south row (Table 1, N and S reversed)", () => {
-    const south = glassDetail(house({ fenestration: [window({ orientation: { kind: "vertical", azimuthDeg: 180 } })] }, { latitudeDeg: 35 }));
-    const north = glassDetail(house({ fenestration: [window({ orientation: { kind: "vertical", azimuthDeg: 0 } })] }, { latitudeDeg: -35 }));
+    const south = glassDetail(
+      house(
+        { fenestration: [window({ orientation: { kind: "vertical", azimuthDeg: 180 } })] },
+        { latitudeDeg: 35 },
+      ),
+    );
+    const north = glassDetail(
+      house(
+        { fenestration: [window({ orientation: { kind: "vertical", azimuthDeg: 0 } })] },
+        { latitudeDeg: -35 },
+      ),
+    );
     expect(north.pxiWm2).toBe(south.pxiWm2);
     expect(north.solarLoadFactor).toBe(0.47); // Table 13 "South"
   });
@@ -172,17 +204,23 @@ describe("latitude and exposure lookups", () => {
 describe("exterior attenuation (Table 11, eq. 26–27)", () => {
   const base = glassDetail(house({ fenestration: [window()] }));
   it("an insect screen multiplies PXI by 0.64", () => {
-    const d = glassDetail(house({ fenestration: [window({ exteriorAttachment: { kind: "insect-screen" } })] }));
+    const d = glassDetail(
+      house({ fenestration: [window({ exteriorAttachment: { kind: "insect-screen" } })] }),
+    );
     expect(d.exteriorTransmission).toBe(0.64);
     expect(d.pxiWm2).toBeCloseTo(0.64 * base.pxiWm2, 9);
   });
   it("a shade screen uses its shading coefficient (0.5 → half the PXI)", () => {
-    const d = glassDetail(house({ fenestration: [window({ exteriorAttachment: { kind: "shade-screen", transmission: 0.5 } })] }));
+    const d = glassDetail(
+      house({ fenestration: [window({ exteriorAttachment: { kind: "shade-screen", transmission: 0.5 } })] }),
+    );
     expect(d.pxiWm2).toBeCloseTo(0.5 * base.pxiWm2, 9);
   });
   it("the solar part of CF scales with T_x; the conduction part U(Δt − 0.46·DR) does not", () => {
     const row = (tx?: RlfFenestrationGroup["exteriorAttachment"]) =>
-      residentialLoadFactorLoads(house({ fenestration: [window({ exteriorAttachment: tx })] })).rows.find((r) => r.kind === "fenestration")!;
+      residentialLoadFactorLoads(house({ fenestration: [window({ exteriorAttachment: tx })] })).rows.find(
+        (r) => r.kind === "fenestration",
+      )!;
     const conduction = 0.3 * (95 - 75 - 0.46 * 20); // eq. 25, Btu/h·ft²
     const solar1 = row().coolingFactorBtuhPerUnit - conduction;
     const solarScreen = row({ kind: "insect-screen" }).coolingFactorBtuhPerUnit - conduction;
@@ -193,7 +231,9 @@ describe("exterior attenuation (Table 11, eq. 26–27)", () => {
 describe("overhang shading, eq. 28 with Table 12", () => {
   // West at 35°N: SLF 1.1 (Table 12), E_D 570, E_d 164 (Table 10).
   const shaded = (depthFt: number, aboveFt: number, heightFt: number) =>
-    glassDetail(house({ fenestration: [window({ overhangDepthFt: depthFt, overhangAboveHeadFt: aboveFt, heightFt })] }));
+    glassDetail(
+      house({ fenestration: [window({ overhangDepthFt: depthFt, overhangAboveHeadFt: aboveFt, heightFt })] }),
+    );
   it("2 ft overhang 0.5 ft above a 4 ft window: F_shd = (1.1 × 2 − 0.5)/4 = 0.425; PXI = 164 + 0.575 × 570", () => {
     const d = shaded(2, 0.5, 4);
     expect(d.shadeLineFactor).toBe(1.1);
@@ -208,13 +248,22 @@ describe("overhang shading, eq. 28 with Table 12", () => {
   });
   it("south glass at 22.5°N interpolates SLF (20.0 + 14.0)/2 = 17 between the 20° and 25° columns", () => {
     const d = glassDetail(
-      house({ fenestration: [window({ orientation: { kind: "vertical", azimuthDeg: 180 }, overhangDepthFt: 0.1, heightFt: 5 })] }, { latitudeDeg: 22.5 }),
+      house(
+        {
+          fenestration: [
+            window({ orientation: { kind: "vertical", azimuthDeg: 180 }, overhangDepthFt: 0.1, heightFt: 5 }),
+          ],
+        },
+        { latitudeDeg: 22.5 },
+      ),
     );
     expect(d.shadeLineFactor).toBeCloseTo(17, 12);
     expect(d.shadedFraction).toBeCloseTo((17 * 0.1) / 5, 12);
   });
   it("a given shaded fraction (e.g. 1 for glass shaded by a neighbouring building) replaces eq. 28", () => {
-    const d = glassDetail(house({ fenestration: [window({ overhangDepthFt: 2, heightFt: 4, shadedFraction: 1 })] }));
+    const d = glassDetail(
+      house({ fenestration: [window({ overhangDepthFt: 2, heightFt: 4, shadedFraction: 1 })] }),
+    );
     expect(d.shadedFraction).toBe(1);
     expect(d.shadeLineFactor).toBeNull();
   });
@@ -223,9 +272,9 @@ describe("overhang shading, eq. 28 with Table 12", () => {
 describe("slab floor covering (eq. 22–23)", () => {
   const slabCf = (floorCoveringR: number) =>
     perM2(
-      residentialLoadFactorLoads(house({ slab: { perimeterFt: 180, fFactorBtuhPerFtF: 0.5, areaFt2: 2000, floorCoveringR } })).rows.find(
-        (r) => r.kind === "slab-area",
-      )!.coolingFactorBtuhPerUnit,
+      residentialLoadFactorLoads(
+        house({ slab: { perimeterFt: 180, fFactorBtuhPerFtF: 0.5, areaFt2: 2000, floorCoveringR } }),
+      ).rows.find((r) => r.kind === "slab-area")!.coolingFactorBtuhPerUnit,
     );
   it("bare slab: CF = 1.9 − 1.4/0.12 = −9.77 W/m²; carpet and pad (R 0.21 m²·K/W): −2.34 W/m² (the example's)", () => {
     expect(slabCf(0)).toBeCloseTo(1.9 - 1.4 / 0.12, 9);
@@ -236,7 +285,9 @@ describe("slab floor covering (eq. 22–23)", () => {
     expect(slabCf(0.21 * W_M2K_PER_BTUH_FT2F)).toBeLessThan(0);
   });
   it("the slab's heating loss is F_p × perimeter × Δt (ch. 17 Table 16)", () => {
-    const r = residentialLoadFactorLoads(house({ slab: { perimeterFt: 180, fFactorBtuhPerFtF: 0.5, areaFt2: 2000, floorCoveringR: 1 } }));
+    const r = residentialLoadFactorLoads(
+      house({ slab: { perimeterFt: 180, fFactorBtuhPerFtF: 0.5, areaFt2: 2000, floorCoveringR: 1 } }),
+    );
     expect(r.rows.find((x) => x.kind === "slab-perimeter")!.heatingBtuh).toBeCloseTo(0.5 * 180 * 45, 9);
   });
 });
@@ -245,7 +296,17 @@ describe("opaque surfaces (Table 7, eq. 21)", () => {
   it("ceiling under a vented attic: CF = U(0.62Δt + 14.3α − 4.5 K + (−0.19)DR); dark shingles gain more than white", () => {
     const cf = (alpha: number) =>
       residentialLoadFactorLoads(
-        house({ opaque: [{ label: "Ceiling", kind: "attic-ceiling", areaFt2: 2000, uBtuPerHrFt2F: 0.03, roofSolarAbsorptance: alpha }] }),
+        house({
+          opaque: [
+            {
+              label: "Ceiling",
+              kind: "attic-ceiling",
+              areaFt2: 2000,
+              uBtuPerHrFt2F: 0.03,
+              roofSolarAbsorptance: alpha,
+            },
+          ],
+        }),
       ).rows[0].coolingFactorBtuhPerUnit;
     // 0.03 × (0.62 × 20 + (14.3 × 0.92 − 4.5) × 1.8 − 0.19 × 20) Btu/h·ft² (OF_b converted K → °F).
     expect(cf(0.92)).toBeCloseTo(0.03 * (0.62 * 20 + (14.3 * 0.92 - 4.5) * 1.8 - 0.19 * 20), 12);
@@ -256,7 +317,9 @@ describe("opaque surfaces (Table 7, eq. 21)", () => {
     expect(r.rows[0].heatingBtuh).toBeCloseTo(0.09 * 1200 * 45, 9);
   });
   it("a shaded wall has no solar term: CF = U(Δt − 0.36·DR)", () => {
-    const r = residentialLoadFactorLoads(house({ opaque: [{ label: "W", kind: "wall", shaded: true, areaFt2: 100, uBtuPerHrFt2F: 0.1 }] }));
+    const r = residentialLoadFactorLoads(
+      house({ opaque: [{ label: "W", kind: "wall", shaded: true, areaFt2: 100, uBtuPerHrFt2F: 0.1 }] }),
+    );
     expect(r.rows[0].coolingFactorBtuhPerUnit).toBeCloseTo(0.1 * (20 - 0.36 * 20), 12);
   });
 });
@@ -274,14 +337,25 @@ describe("infiltration and ventilation (eq. 8–18)", () => {
   it("an HRV of sensible effectiveness 0.7 leaves 30 % of the balanced flow's sensible load (eq. 15)", () => {
     const plain = residentialLoadFactorLoads(house({ ventilation: { supplyCfm: 100, exhaustCfm: 100 } }));
     const hrv = residentialLoadFactorLoads(
-      house({ ventilation: { supplyCfm: 100, exhaustCfm: 100, heatRecoveryCfm: 100, sensibleRecoveryEffectiveness: 0.7 } }),
+      house({
+        ventilation: {
+          supplyCfm: 100,
+          exhaustCfm: 100,
+          heatRecoveryCfm: 100,
+          sensibleRecoveryEffectiveness: 0.7,
+        },
+      }),
     );
     expect(hrv.heating.ventilationBtuh).toBeCloseTo(0.3 * plain.heating.ventilationBtuh, 9);
     expect(hrv.cooling.latent.ventilationBtuh).toBeCloseTo(plain.cooling.latent.ventilationBtuh, 9); // no latent recovery given
   });
   it("blower-door ACH50 and the equivalent CFM50 give the same leakage area (ch. 16 eq. 40–41 via lib/load/infiltration.ts)", () => {
-    const a = residentialLoadFactorLoads(house({ infiltration: { leakage: { method: "blower-door-ach50", ach50: 5, volumeFt3: 18_000 } } }));
-    const b = residentialLoadFactorLoads(house({ infiltration: { leakage: { method: "blower-door", cfm50: 1500 } } }));
+    const a = residentialLoadFactorLoads(
+      house({ infiltration: { leakage: { method: "blower-door-ach50", ach50: 5, volumeFt3: 18_000 } } }),
+    );
+    const b = residentialLoadFactorLoads(
+      house({ infiltration: { leakage: { method: "blower-door", cfm50: 1500 } } }),
+    );
     expect(a.air.effectiveLeakageAreaIn2).toBeCloseTo(b.air.effectiveLeakageAreaIn2, 9);
   });
   it("outdoor air drier than indoor gives no latent credit, with a note", () => {
@@ -290,7 +364,9 @@ describe("infiltration and ventilation (eq. 8–18)", () => {
     expect(r.notes.join(" ")).toMatch(/no latent credit/);
   });
   it("with the wet bulb, ΔW comes from psychrolib at the site pressure (95 °F / 75 °F outdoor, 75 °F 50 % indoor: 98.46 − 64.65 gr/lb, tests/fixtures/engine/reference-checks.ts)", () => {
-    const r = residentialLoadFactorLoads(house({}, { humidityRatioDifference: undefined, coolingOutdoorWbF: 75, indoorCoolingRhPct: 50 }));
+    const r = residentialLoadFactorLoads(
+      house({}, { humidityRatioDifference: undefined, coolingOutdoorWbF: 75, indoorCoolingRhPct: 50 }),
+    );
     expect(r.conditions.humidityRatioDifference * 7000).toBeCloseTo(98.46 - 64.65, 1);
   });
 });
@@ -302,16 +378,31 @@ describe("applicability findings (ch. 17 Table 1)", () => {
     expect(f.severity).toBe("outside");
     expect(f.value).toBe(18);
     expect(f.exceedsBy).toBe(3);
-    expect(f.message).toBe("Fenestration on the back (west) facade is 18 % of floor area; the procedure is derived for at most 15 %.");
+    expect(f.message).toBe(
+      "Fenestration on the back (west) facade is 18 % of floor area; the procedure is derived for at most 15 %.",
+    );
   });
   it("total fenestration above 30 % of floor area", () => {
-    const g = [0, 90, 180, 270].map((az) => window({ orientation: { kind: "vertical", azimuthDeg: az }, areaFt2: 160 }));
-    const f = checkRlfApplicability(house({ fenestration: g })).filter((x) => x.limit === "fenestration-area");
-    expect(f.map((x) => x.message)).toEqual(["Fenestration in total is 32 % of floor area; the procedure is derived for at most 30 %."]);
+    const g = [0, 90, 180, 270].map((az) =>
+      window({ orientation: { kind: "vertical", azimuthDeg: az }, areaFt2: 160 }),
+    );
+    const f = checkRlfApplicability(house({ fenestration: g })).filter(
+      (x) => x.limit === "fenestration-area",
+    );
+    expect(f.map((x) => x.message)).toEqual([
+      "Fenestration in total is 32 % of floor area; the procedure is derived for at most 30 %.",
+    ]);
   });
   it("latitude, elevation, climate and construction outside Table 1", () => {
-    const h = house({ construction: "structural-masonry" }, { latitudeDeg: 15, elevationFt: 8000, coolingOutdoorDbF: 80, dailyRangeF: 20 });
-    const byLimit = Object.fromEntries(checkRlfApplicability(h).filter((x) => x.severity === "outside").map((x) => [x.limit, x]));
+    const h = house(
+      { construction: "structural-masonry" },
+      { latitudeDeg: 15, elevationFt: 8000, coolingOutdoorDbF: 80, dailyRangeF: 20 },
+    );
+    const byLimit = Object.fromEntries(
+      checkRlfApplicability(h)
+        .filter((x) => x.severity === "outside")
+        .map((x) => [x.limit, x]),
+    );
     expect(byLimit.latitude.exceedsBy).toBe(5);
     expect(byLimit.elevation.exceedsBy).toBe(Math.round(8000 * 0.3048 - 2000)); // 438 m above 2000 m
     // Design-day mean 80 − 0.536 × 20 = 69.3 °F (ch. 14 Table 6 mean fraction), below the indoor 75 °F.
@@ -320,47 +411,124 @@ describe("applicability findings (ch. 17 Table 1)", () => {
   });
   it("a mild climate with south glass draws the July 21 caution; a hot one does not", () => {
     const g = [window({ orientation: { kind: "vertical", azimuthDeg: 180 } })];
-    expect(checkRlfApplicability(house({ fenestration: g }, { coolingOutdoorDbF: 80 })).some((x) => x.limit === "date")).toBe(true);
+    expect(
+      checkRlfApplicability(house({ fenestration: g }, { coolingOutdoorDbF: 80 })).some(
+        (x) => x.limit === "date",
+      ),
+    ).toBe(true);
     expect(checkRlfApplicability(house({ fenestration: g })).some((x) => x.limit === "date")).toBe(false);
   });
   it("sloped glazing tilted 30° or more is outside; under 30° it counts as horizontal", () => {
-    const sky = (tiltDeg: number) => window({ label: "Skylight", orientation: { kind: "horizontal", tiltDeg } });
-    expect(checkRlfApplicability(house({ fenestration: [sky(45)] })).find((x) => x.limit === "fenestration-tilt")?.exceedsBy).toBe(15);
-    expect(checkRlfApplicability(house({ fenestration: [sky(26.6)] })).some((x) => x.limit === "fenestration-tilt")).toBe(false);
+    const sky = (tiltDeg: number) =>
+      window({ label: "Skylight", orientation: { kind: "horizontal", tiltDeg } });
+    expect(
+      checkRlfApplicability(house({ fenestration: [sky(45)] })).find((x) => x.limit === "fenestration-tilt")
+        ?.exceedsBy,
+    ).toBe(15);
+    expect(
+      checkRlfApplicability(house({ fenestration: [sky(26.6)] })).some(
+        (x) => x.limit === "fenestration-tilt",
+      ),
+    ).toBe(false);
   });
   it("more occupants than bedrooms + 1 and leaky ducts draw cautions; the method's assumptions are always listed", () => {
     const h = house({
       occupants: 8,
-      ducts: { method: "table-6", location: "attic", insulationR: 8, supplyLeakagePct: 15, returnLeakagePct: 15, heatingSystem: "furnace" },
+      ducts: {
+        method: "table-6",
+        location: "attic",
+        insulationR: 8,
+        supplyLeakagePct: 15,
+        returnLeakagePct: 15,
+        heatingSystem: "furnace",
+      },
     });
     const f = checkRlfApplicability(h);
     expect(f.find((x) => x.limit === "occupancy")?.exceedsBy).toBe(4);
     expect(f.find((x) => x.limit === "distribution-losses" && x.severity === "caution")?.exceedsBy).toBe(4);
-    expect(f.filter((x) => x.severity === "assumption").map((x) => x.limit)).toEqual(["temperature-swing", "distribution-losses"]);
+    expect(f.filter((x) => x.severity === "assumption").map((x) => x.limit)).toEqual([
+      "temperature-swing",
+      "distribution-losses",
+    ]);
   });
 });
 
 describe("bad input: LoadInputError names the field and the valid range", () => {
   it.each<[string, () => RlfHouse, string, RegExp]>([
-    ["negative opaque area", () => house({ opaque: [{ label: "W", kind: "wall", areaFt2: -1, uBtuPerHrFt2F: 0.1 }] }), "opaque.0.areaFt2", /out of range/],
-    ["SHGC above 1", () => house({ fenestration: [window({ shgc: 1.2 })] }), "fenestration.0.shgc", /valid range 0 to 1/],
+    [
+      "negative opaque area",
+      () => house({ opaque: [{ label: "W", kind: "wall", areaFt2: -1, uBtuPerHrFt2F: 0.1 }] }),
+      "opaque.0.areaFt2",
+      /out of range/,
+    ],
+    [
+      "SHGC above 1",
+      () => house({ fenestration: [window({ shgc: 1.2 })] }),
+      "fenestration.0.shgc",
+      /valid range 0 to 1/,
+    ],
     [
       "attic ceiling without roof absorptance",
       () => house({ opaque: [{ label: "C", kind: "attic-ceiling", areaFt2: 100, uBtuPerHrFt2F: 0.03 }] }),
       "opaque.0.roofSolarAbsorptance",
       /required/,
     ],
-    ["neither wet bulb nor humidity difference", () => house({}, { humidityRatioDifference: undefined }), "site.coolingOutdoorWbF", /required/],
-    ["both wet bulb and humidity difference", () => house({}, { coolingOutdoorWbF: 75 }), "site.humidityRatioDifference", /not both/],
-    ["heating outdoor above indoor", () => house({}, { heatingOutdoorDbF: 72 }), "site.heatingOutdoorDbF", /out of range/],
+    [
+      "neither wet bulb nor humidity difference",
+      () => house({}, { humidityRatioDifference: undefined }),
+      "site.coolingOutdoorWbF",
+      /required/,
+    ],
+    [
+      "both wet bulb and humidity difference",
+      () => house({}, { coolingOutdoorWbF: 75 }),
+      "site.humidityRatioDifference",
+      /not both/,
+    ],
+    [
+      "heating outdoor above indoor",
+      () => house({}, { heatingOutdoorDbF: 72 }),
+      "site.heatingOutdoorDbF",
+      /out of range/,
+    ],
     ["fractional stories", () => house({ stories: 1.5 }), "stories", /whole number/],
-    ["unknown opaque kind", () => house({ opaque: [{ label: "X", kind: "roof" as never, areaFt2: 1, uBtuPerHrFt2F: 0.1 }] }), "opaque.0.kind", /unknown opaque kind/],
-    ["buffer partition without temperatures", () => house({ opaque: [{ label: "P", kind: "buffer-partition", areaFt2: 1, uBtuPerHrFt2F: 0.1 }] }), "opaque.0.bufferHeatingF", /required/],
-    ["heat recovery flow above the balanced flow", () => house({ ventilation: { supplyCfm: 50, exhaustCfm: 100, heatRecoveryCfm: 80 } }), "ventilation.heatRecoveryCfm", /at most the balanced flow/],
-    ["overhang without window height", () => house({ fenestration: [window({ overhangDepthFt: 2 })] }), "fenestration.0.heightFt", /required/],
+    [
+      "unknown opaque kind",
+      () => house({ opaque: [{ label: "X", kind: "roof" as never, areaFt2: 1, uBtuPerHrFt2F: 0.1 }] }),
+      "opaque.0.kind",
+      /unknown opaque kind/,
+    ],
+    [
+      "buffer partition without temperatures",
+      () => house({ opaque: [{ label: "P", kind: "buffer-partition", areaFt2: 1, uBtuPerHrFt2F: 0.1 }] }),
+      "opaque.0.bufferHeatingF",
+      /required/,
+    ],
+    [
+      "heat recovery flow above the balanced flow",
+      () => house({ ventilation: { supplyCfm: 50, exhaustCfm: 100, heatRecoveryCfm: 80 } }),
+      "ventilation.heatRecoveryCfm",
+      /at most the balanced flow/,
+    ],
+    [
+      "overhang without window height",
+      () => house({ fenestration: [window({ overhangDepthFt: 2 })] }),
+      "fenestration.0.heightFt",
+      /required/,
+    ],
     [
       "duct leakage beyond what Table 6 can be stretched to",
-      () => house({ ducts: { method: "table-6", location: "attic", insulationR: 8, supplyLeakagePct: 30, returnLeakagePct: 30, heatingSystem: "furnace" } }),
+      () =>
+        house({
+          ducts: {
+            method: "table-6",
+            location: "attic",
+            insulationR: 8,
+            supplyLeakagePct: 30,
+            returnLeakagePct: 30,
+            heatingSystem: "furnace",
+          },
+        }),
       "ducts.supplyLeakagePct",
       /duct-factor table/,
     ],
@@ -387,12 +555,23 @@ describe("from the engine's plan input", () => {
   const frontGlassOnly = (): PlanInputRaw => {
     const p = symmetricPlan();
     const blank = { grossWallAreaFt2: 400 };
-    return { ...p, facades: { front: { grossWallAreaFt2: 400, window: { areaFt2: 60, uFactor: 0.3, shgc: 0.3 } }, left: blank, back: blank, right: blank } };
+    return {
+      ...p,
+      facades: {
+        front: { grossWallAreaFt2: 400, window: { areaFt2: 60, uFactor: 0.3, shgc: 0.3 } },
+        left: blank,
+        back: blank,
+        right: blank,
+      },
+    };
   };
 
   it("facade azimuths: left = facing + 90°, back + 180°, right + 270°", () => {
     const p = symmetricPlan();
-    const plan = parsePlanInput({ ...p, facades: { ...p.facades, left: { grossWallAreaFt2: 400, window: { areaFt2: 30 } } } });
+    const plan = parsePlanInput({
+      ...p,
+      facades: { ...p.facades, left: { grossWallAreaFt2: 400, window: { areaFt2: 30 } } },
+    });
     const h = rlfHouseFromPlan(plan, site, 0);
     const left = h.fenestration.find((g) => g.facade === "left")!;
     expect(left.orientation).toEqual({ kind: "vertical", azimuthDeg: 90 });
@@ -429,7 +608,10 @@ describe("from the engine's plan input", () => {
     expect(r.heating.garageF).toBe(40);
     // Buffer partition, eq. 35: U(t_i − t_b) with the entered garage temperature.
     const wallToGarage = r.rlf.rows.find((x) => x.label === "Wall to garage")!;
-    expect(wallToGarage.heatingFactorBtuhPerUnit).toBeCloseTo(r.house.opaque.find((c) => c.label === "Wall to garage")!.uBtuPerHrFt2F * (70 - 40), 9);
+    expect(wallToGarage.heatingFactorBtuhPerUnit).toBeCloseTo(
+      r.house.opaque.find((c) => c.label === "Wall to garage")!.uBtuPerHrFt2F * (70 - 40),
+      9,
+    );
   });
 
   it("the plan's slab covering, exterior attenuation and entered leakage area reach the RLF house", () => {
@@ -438,28 +620,38 @@ describe("from the engine's plan input", () => {
       parsePlanInput({
         ...p,
         foundation: { kind: "slab-on-grade", slabPerimeterFt: 160, slabFloorCovering: covering },
-        facades: { ...p.facades, front: { grossWallAreaFt2: 400, window: { areaFt2: 40, exteriorAttenuation: 0.64 } } },
+        facades: {
+          ...p.facades,
+          front: { grossWallAreaFt2: 400, window: { areaFt2: 40, exteriorAttenuation: 0.64 } },
+        },
         infiltration: { effectiveLeakageAreaIn2: 75 },
       });
     const carpet = computeResidentialLoadFactorFacing(withInputs("carpet"), site, 0);
     const bare = computeResidentialLoadFactorFacing(withInputs("bare"), site, 0);
     // Bare slab: a larger cooling credit (eq. 23) than carpet (lib/load/slab.ts: 0.21 m²·K/W, the ch. 17 example's).
     expect(bare.cooling.sensibleByComponent.slab).toBeLessThan(carpet.cooling.sensibleByComponent.slab);
-    expect(carpet.rlf.rows.find((r) => r.fenestration?.facade === "front")!.fenestration!.exteriorTransmission).toBe(0.64);
+    expect(
+      carpet.rlf.rows.find((r) => r.fenestration?.facade === "front")!.fenestration!.exteriorTransmission,
+    ).toBe(0.64);
     expect(carpet.effectiveLeakageAreaIn2).toBeCloseTo(75, 9);
   });
 
   it("the slab floor covering can be given; a bare slab lowers the cooling load", () => {
     const plan = parsePlanInput(symmetricPlan());
     const carpet = computeResidentialLoadFactorFacing(plan, site, 0).cooling.sensibleBtuh;
-    const bare = computeResidentialLoadFactorFacing(plan, site, 0, { slabFloorCoveringR: 0 }).cooling.sensibleBtuh;
+    const bare = computeResidentialLoadFactorFacing(plan, site, 0, { slabFloorCoveringR: 0 }).cooling
+      .sensibleBtuh;
     expect(bare).toBeLessThan(carpet);
   });
 
   it("the heating envelope scales with Δt (eq. 34 and Table 16: a UA·Δt sum)", () => {
     const at = (heatingOutdoorDbF: number) =>
-      residentialLoadFactorLoads(house({ slab: { perimeterFt: 100, fFactorBtuhPerFtF: 0.5, areaFt2: 1000, floorCoveringR: 1 } }, { heatingOutdoorDbF })).heating
-        .envelopeBtuh;
+      residentialLoadFactorLoads(
+        house(
+          { slab: { perimeterFt: 100, fFactorBtuhPerFtF: 0.5, areaFt2: 1000, floorCoveringR: 1 } },
+          { heatingOutdoorDbF },
+        ),
+      ).heating.envelopeBtuh;
     expect(at(20) / at(45)).toBeCloseTo(50 / 25, 9);
   });
 

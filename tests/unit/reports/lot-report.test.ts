@@ -8,7 +8,15 @@ import path from "node:path";
 import { PDFParse } from "pdf-parse";
 import { beforeAll, describe, expect, it } from "vitest";
 import { DEFAULT_SIZING_LIMITS, loadsFromFacing, selectEquipment } from "@/lib/equipment";
-import { ENGINE_VERSION, LOAD_PROCEDURE_LABELS, LoadInputError, computeFacingLoads, parseSiteConditions, type FacingLoads, type LoadProcedure } from "@/lib/load";
+import {
+  ENGINE_VERSION,
+  LOAD_PROCEDURE_LABELS,
+  LoadInputError,
+  computeFacingLoads,
+  parseSiteConditions,
+  type FacingLoads,
+  type LoadProcedure,
+} from "@/lib/load";
 import {
   PEAK_ONLY_NOTE,
   PROCEDURE_SHORT_LABELS,
@@ -23,7 +31,11 @@ import {
   type LotReport,
   type LotReportSource,
 } from "@/lib/reports";
-import { catalogForHeatingDesign, validateEquipmentTable, type EquipmentCatalogEntry } from "@/lib/workbook/equipment-columns";
+import {
+  catalogForHeatingDesign,
+  validateEquipmentTable,
+  type EquipmentCatalogEntry,
+} from "@/lib/workbook/equipment-columns";
 import { validatePlanTable, type ValidPlanRow } from "@/lib/workbook/plan-columns";
 import { readCsv } from "@/lib/workbook/table-io";
 
@@ -37,11 +49,18 @@ const SITE_RAW: unknown = JSON.parse(readTemplate("example-site.json"));
 const SITE = parseSiteConditions(SITE_RAW);
 const catalogTable = validateEquipmentTable(readCsv(readTemplate("example-equipment.csv")));
 if (!catalogTable.ok) throw new Error("templates/example-equipment.csv does not validate");
-const CATALOG: EquipmentCatalogEntry[] = catalogForHeatingDesign(catalogTable.systems, SITE.heatingOutdoorDbF);
+const CATALOG: EquipmentCatalogEntry[] = catalogForHeatingDesign(
+  catalogTable.systems,
+  SITE.heatingOutdoorDbF,
+);
 
 const GENERATED_AT = "2026-12-01T15:30:00.000Z";
 
-function sourceFor(index: number, overrides: Partial<LotReportSource> = {}, procedure: LoadProcedure = "hourly"): LotReportSource {
+function sourceFor(
+  index: number,
+  overrides: Partial<LotReportSource> = {},
+  procedure: LoadProcedure = "hourly",
+): LotReportSource {
   const plan = PLANS[index % PLANS.length];
   const facingDeg = [0, 90, 225][index % 3];
   const loads = computeFacingLoads(plan.input, SITE, facingDeg, { procedure });
@@ -50,12 +69,21 @@ function sourceFor(index: number, overrides: Partial<LotReportSource> = {}, proc
     builderAccountName: "Wrenfield Homes (invented)",
     communityName: "Prairie Lantern (invented)",
     lot: { lotNumber: `L-${201 + index}`, address: `${310 + 4 * index} Quillwort Lane` },
-    plan: { code: plan.planCode, name: plan.planName, revisionNumber: 3 + index, status: index === 0 ? "approved" : "draft", input: plan.input },
+    plan: {
+      code: plan.planCode,
+      name: plan.planName,
+      revisionNumber: 3 + index,
+      status: index === 0 ? "approved" : "draft",
+      input: plan.input,
+    },
     site: SITE_RAW,
     loads,
     selection: systemChoiceFromSelection(selection),
     sizingLimits: DEFAULT_SIZING_LIMITS,
-    approval: index === 0 ? { reviewerName: "Morgan Ellery (invented)", credential: "PE", approvedOn: "2026-11-28" } : null,
+    approval:
+      index === 0
+        ? { reviewerName: "Morgan Ellery (invented)", credential: "PE", approvedOn: "2026-11-28" }
+        : null,
     generatedAt: GENERATED_AT,
     ...overrides,
   };
@@ -72,7 +100,17 @@ describe("a 3-lot permit packet from engine output", () => {
   beforeAll(async () => {
     // Lot 3 gets a purchaser's override (the 3-ton air conditioner) to show it is kept and shown.
     const override = CATALOG.find((system) => system.id === "AC36-F60");
-    reports = [sourceFor(0), sourceFor(1), sourceFor(2, { selection: { system: override as EquipmentCatalogEntry, overridden: true, overrideNote: "matches the neighbouring lots" } })].map(lotReportFromResults);
+    reports = [
+      sourceFor(0),
+      sourceFor(1),
+      sourceFor(2, {
+        selection: {
+          system: override as EquipmentCatalogEntry,
+          overridden: true,
+          overrideNote: "matches the neighbouring lots",
+        },
+      }),
+    ].map(lotReportFromResults);
     bytes = await renderLotReportsPdf(reports);
     // pdf-parse hands its buffer to a worker (the caller's copy is detached): give it a copy.
     const parser = new PDFParse({ data: new Uint8Array(bytes) });
@@ -87,7 +125,9 @@ describe("a 3-lot permit packet from engine output", () => {
     expect(pages[0]).toMatch(/Permit packet/);
     for (const report of reports) {
       expect(pages[0]).toContain(report.lotNumber); // the cover lists every lot
-      const first = pages.findIndex((page) => page.includes(`Heating and cooling load report Lot ${report.lotNumber}`));
+      const first = pages.findIndex((page) =>
+        page.includes(`Heating and cooling load report Lot ${report.lotNumber}`),
+      );
       expect(first, report.lotNumber).toBeGreaterThan(0);
       expect(pages[first].indexOf("Heating and cooling load report")).toBeLessThan(5); // at the top of its page
     }
@@ -124,16 +164,26 @@ describe("a 3-lot permit packet from engine output", () => {
   it("lists the ADDED insulation values as entered in the plan library", () => {
     // The first lot's plan row in templates/example-plans.csv, read here as input (not engine output).
     const plan = PLANS[0].input;
-    const page = pages.find((p) => p.includes(`Heating and cooling load report Lot ${reports[0].lotNumber}`)) as string;
-    expect(page).toContain(`All facades ${plan.wall.baseId} R-${plan.wall.cavityR} R-${plan.wall.continuousR}`);
-    expect(page).toContain(`Ceiling under vented attic ${plan.attic.ceiling.baseId} R-${plan.attic.ceiling.cavityR}`);
+    const page = pages.find((p) =>
+      p.includes(`Heating and cooling load report Lot ${reports[0].lotNumber}`),
+    ) as string;
+    expect(page).toContain(
+      `All facades ${plan.wall.baseId} R-${plan.wall.cavityR} R-${plan.wall.continuousR}`,
+    );
+    expect(page).toContain(
+      `Ceiling under vented attic ${plan.attic.ceiling.baseId} R-${plan.attic.ceiling.cavityR}`,
+    );
     expect(page).toContain(`${plan.infiltration.ach50?.toFixed(1)} ACH50`);
     expect(page).toContain(`${plan.ducts.location}, R-${plan.ducts.insulationR}`);
-    expect(page).toContain(`R-${plan.foundation.slabEdgeInsulationR}, ${plan.foundation.slabEdgeInsulationDepthFt.toFixed(1)} ft deep`);
+    expect(page).toContain(
+      `R-${plan.foundation.slabEdgeInsulationR}, ${plan.foundation.slabEdgeInsulationDepthFt.toFixed(1)} ft deep`,
+    );
     // The encapsulated plan (third lot) shows its roof-deck insulation instead.
     const encapsulated = PLANS[2].input;
     expect(encapsulated.attic.kind).toBe("encapsulated");
-    expect(allText).toContain(`Roof deck of encapsulated attic ${encapsulated.attic.roofDeck.baseId} R-${encapsulated.attic.roofDeck.cavityR}`);
+    expect(allText).toContain(
+      `Roof deck of encapsulated attic ${encapsulated.attic.roofDeck.baseId} R-${encapsulated.attic.roofDeck.cavityR}`,
+    );
   });
 
   it("shows loads, the chart's axes, the system or why none fits, the limits used and the approval", () => {
@@ -150,7 +200,8 @@ describe("a 3-lot permit packet from engine output", () => {
     expect(allText).toContain("Approved by Morgan Ellery (invented), PE, on 2026-11-28");
     expect(allText).toContain("Not approved");
     for (const report of reports) {
-      if (report.equipment.status === "none") expect(allText).toContain(squash(report.equipment.reason).slice(0, 60));
+      if (report.equipment.status === "none")
+        expect(allText).toContain(squash(report.equipment.reason).slice(0, 60));
       else expect(allText).toContain(`${report.equipment.systemCode} · `);
     }
   });
@@ -173,7 +224,9 @@ describe("the report states its load procedure", () => {
     expect(all.split(`Procedure: ${PROCEDURE_SHORT_LABELS.hourly}`)).toHaveLength(1 + reports.length); // above each lot's loads
     for (const report of reports) {
       expect(report.cooling.peakHour).not.toBeNull();
-      expect(all).toContain(`COOLING TOTAL ${report.cooling.totalBtuh.toLocaleString("en-US")} Btu/h at solar hour ${report.cooling.peakHour}`);
+      expect(all).toContain(
+        `COOLING TOTAL ${report.cooling.totalBtuh.toLocaleString("en-US")} Btu/h at solar hour ${report.cooling.peakHour}`,
+      );
       expect(all).toContain(`Cooling at hour ${report.cooling.peakHour} (Btu/h)`);
     }
     expect(all.split("24-hour sensible cooling profile")).toHaveLength(1 + reports.length);
@@ -187,9 +240,13 @@ describe("the report states its load procedure", () => {
     expect(report.cooling.hourlySensibleBtuh).toEqual([]);
     const { all } = await textOf([report]);
     expect(all).toContain(squash(`Load procedure ${PROCEDURE_STATEMENTS["residential-load-factor"]}`));
-    expect(PROCEDURE_STATEMENTS["residential-load-factor"]).toMatch(/as implemented in Platload, not a certified or approved implementation/);
+    expect(PROCEDURE_STATEMENTS["residential-load-factor"]).toMatch(
+      /as implemented in Platload, not a certified or approved implementation/,
+    );
     expect(all).toContain(`Procedure: ${PROCEDURE_SHORT_LABELS["residential-load-factor"]}`);
-    expect(all).toContain(`COOLING TOTAL ${report.cooling.totalBtuh.toLocaleString("en-US")} Btu/h at the design peak`);
+    expect(all).toContain(
+      `COOLING TOTAL ${report.cooling.totalBtuh.toLocaleString("en-US")} Btu/h at the design peak`,
+    );
     expect(all).toContain("Cooling at the design peak (Btu/h)");
     expect(all).toContain(squash(PEAK_ONLY_NOTE));
     expect(all).not.toContain("24-hour sensible cooling profile");
@@ -197,17 +254,33 @@ describe("the report states its load procedure", () => {
   });
 
   it("a packet of lots by both procedures lists both on the cover", async () => {
-    const reports = [lotReportFromResults(sourceFor(0)), lotReportFromResults(sourceFor(1, {}, "residential-load-factor"))];
+    const reports = [
+      lotReportFromResults(sourceFor(0)),
+      lotReportFromResults(sourceFor(1, {}, "residential-load-factor")),
+    ];
     const { pages } = await textOf(reports);
-    expect(pages[0]).toContain(`Load procedure ${PROCEDURE_SHORT_LABELS.hourly}; ${PROCEDURE_SHORT_LABELS["residential-load-factor"]}`);
+    expect(pages[0]).toContain(
+      `Load procedure ${PROCEDURE_SHORT_LABELS.hourly}; ${PROCEDURE_SHORT_LABELS["residential-load-factor"]}`,
+    );
   });
 
   it("a report without a known procedure, or with a profile of the wrong length, is refused by field", async () => {
     const good = lotReportFromResults(sourceFor(0));
-    await expect(renderLotReportsPdf([{ ...good, procedure: "monthly" as LoadProcedure }])).rejects.toThrow(/reports\.0\.procedure: must be one of residential-load-factor, hourly/);
+    await expect(renderLotReportsPdf([{ ...good, procedure: "monthly" as LoadProcedure }])).rejects.toThrow(
+      /reports\.0\.procedure: must be one of residential-load-factor, hourly/,
+    );
     const { procedure: _dropped, ...withoutProcedure } = good;
-    await expect(renderLotReportsPdf([withoutProcedure as LotReport])).rejects.toThrow(/reports\.0\.procedure/);
-    await expect(renderLotReportsPdf([{ ...good, cooling: { ...good.cooling, hourlySensibleBtuh: good.cooling.hourlySensibleBtuh.slice(0, 12) } }])).rejects.toThrow(/reports\.0\.cooling\.hourlySensibleBtuh: must hold 24 hourly values/);
+    await expect(renderLotReportsPdf([withoutProcedure as LotReport])).rejects.toThrow(
+      /reports\.0\.procedure/,
+    );
+    await expect(
+      renderLotReportsPdf([
+        {
+          ...good,
+          cooling: { ...good.cooling, hourlySensibleBtuh: good.cooling.hourlySensibleBtuh.slice(0, 12) },
+        },
+      ]),
+    ).rejects.toThrow(/reports\.0\.cooling\.hourlySensibleBtuh: must hold 24 hourly values/);
     expect(LOAD_PROCEDURE_LABELS[good.procedure]).toBe(LOAD_PROCEDURE_LABELS.hourly);
   });
 });
@@ -222,7 +295,10 @@ describe("lotReportFromResults", () => {
     expect(report.equipment.heatingOutputBtuh).toBe(20_260);
     expect(report.equipment.heatingOutputNote).toMatch(/24 °F/);
     expect(report.equipment.coolingRatioPct).toBeCloseTo((100 * 28_700) / loads.cooling.totalBtuh, 1);
-    expect(report.equipment.heatingRatioPct).toBeCloseTo((100 * (20_260 + 34_100)) / loads.heating.totalBtuh, 1);
+    expect(report.equipment.heatingRatioPct).toBeCloseTo(
+      (100 * (20_260 + 34_100)) / loads.heating.totalBtuh,
+      1,
+    );
     expect(report.sizingLimits).toEqual(DEFAULT_SIZING_LIMITS);
   });
 
@@ -234,25 +310,55 @@ describe("lotReportFromResults", () => {
   });
 
   it("the account's own limits are the ones stated", () => {
-    const limits = { coolingMinPct: 90, coolingMaxPct: 130, heatPumpCoolingMaxPct: 140, heatingMinPct: 100, heatingMaxPct: 200 };
+    const limits = {
+      coolingMinPct: 90,
+      coolingMaxPct: 130,
+      heatPumpCoolingMaxPct: 140,
+      heatingMinPct: 100,
+      heatingMaxPct: 200,
+    };
     const report = lotReportFromResults(sourceFor(0, { sizingLimits: limits }));
     expect(report.sizingLimits).toEqual(limits);
   });
 
   it("when nothing fits, the reason names the closest system's shortfall", () => {
-    const choice = systemChoiceFromSelection(selectEquipment({ loads: { heatingBtuh: 90_000, coolingSensibleBtuh: 60_000, coolingLatentBtuh: 8_000, coolingTotalBtuh: 68_000 }, catalog: CATALOG }));
+    const choice = systemChoiceFromSelection(
+      selectEquipment({
+        loads: {
+          heatingBtuh: 90_000,
+          coolingSensibleBtuh: 60_000,
+          coolingLatentBtuh: 8_000,
+          coolingTotalBtuh: 68_000,
+        },
+        catalog: CATALOG,
+      }),
+    );
     expect(choice.system).toBeNull();
-    if (choice.system === null) expect(choice.reason).toMatch(/No catalog system fits within the sizing limits\. Closest: AC48-F80, cooling 46,100 Btu\/h is below 95 %/);
+    if (choice.system === null)
+      expect(choice.reason).toMatch(
+        /No catalog system fits within the sizing limits\. Closest: AC48-F80, cooling 46,100 Btu\/h is below 95 %/,
+      );
   });
 
   it("bad input is named by field", async () => {
-    expect(() => lotReportFromResults(sourceFor(0, { site: { ...(SITE_RAW as object), latitudeDeg: 95 } }))).toThrow(LoadInputError);
-    expect(() => lotReportFromResults(sourceFor(0, { site: { ...(SITE_RAW as object), latitudeDeg: 95 } }))).toThrow(/site\.latitudeDeg/);
-    expect(() => lotReportFromResults(sourceFor(0, { lot: { lotNumber: " " } }))).toThrow(/lotNumber: required: the lot number/);
+    expect(() =>
+      lotReportFromResults(sourceFor(0, { site: { ...(SITE_RAW as object), latitudeDeg: 95 } })),
+    ).toThrow(LoadInputError);
+    expect(() =>
+      lotReportFromResults(sourceFor(0, { site: { ...(SITE_RAW as object), latitudeDeg: 95 } })),
+    ).toThrow(/site\.latitudeDeg/);
+    expect(() => lotReportFromResults(sourceFor(0, { lot: { lotNumber: " " } }))).toThrow(
+      /lotNumber: required: the lot number/,
+    );
     const good = lotReportFromResults(sourceFor(0));
-    const broken = { ...good, cooling: { ...good.cooling, hourlySensibleBtuh: good.cooling.hourlySensibleBtuh.slice(0, 23) } };
+    const broken = {
+      ...good,
+      cooling: { ...good.cooling, hourlySensibleBtuh: good.cooling.hourlySensibleBtuh.slice(0, 23) },
+    };
     await expect(renderLotReportsPdf([good, broken])).rejects.toThrow(ReportInputError);
-    await expect(renderLotReportsPdf([good, broken])).rejects.toThrow(/reports\.1\.cooling\.hourlySensibleBtuh: must hold 24 hourly values/);
+    await expect(renderLotReportsPdf([good, broken])).rejects.toThrow(
+      /reports\.1\.cooling\.hourlySensibleBtuh: must hold 24 hourly values/,
+    );
     await expect(renderLotReportsPdf([])).rejects.toThrow(/at least one lot report/);
   });
 
@@ -268,9 +374,16 @@ describe("lotReportFromResults", () => {
 describe("direct inputs on the report", () => {
   it("a direct wall U-factor and an effective leakage area are stated as entered, not as unused R-values or 'not given'", async () => {
     const base = PLANS[0].input;
-    const input = { ...base, wall: { ...base.wall, uFactor: 0.05 }, infiltration: { ...base.infiltration, ach50: undefined, cfm50: undefined, effectiveLeakageAreaIn2: 80 } };
+    const input = {
+      ...base,
+      wall: { ...base.wall, uFactor: 0.05 },
+      infiltration: { ...base.infiltration, ach50: undefined, cfm50: undefined, effectiveLeakageAreaIn2: 80 },
+    };
     const loads = computeFacingLoads(input, SITE, 0, { procedure: "hourly", validated: true });
-    const source = sourceFor(0, { plan: { code: PLANS[0].planCode, name: PLANS[0].planName, revisionNumber: 3, status: "draft", input }, loads });
+    const source = sourceFor(0, {
+      plan: { code: PLANS[0].planCode, name: PLANS[0].planName, revisionNumber: 3, status: "draft", input },
+      loads,
+    });
     const bytes = await renderLotReportsPdf([lotReportFromResults(source)]);
     const parser = new PDFParse({ data: bytes });
     const text = squash((await parser.getText()).text);
@@ -283,11 +396,24 @@ describe("direct inputs on the report", () => {
 
 describe("small helpers", () => {
   it("compass labels of eight points", () => {
-    expect([0, 44, 46, 90, 180, 225, 315, 359, 360, -90].map(compassLabel)).toEqual(["N", "NE", "NE", "E", "S", "SW", "NW", "N", "N", "W"]);
+    expect([0, 44, 46, 90, 180, 225, 315, 359, 360, -90].map(compassLabel)).toEqual([
+      "N",
+      "NE",
+      "NE",
+      "E",
+      "S",
+      "SW",
+      "NW",
+      "N",
+      "N",
+      "W",
+    ]);
   });
 
   it("text the standard PDF fonts cannot show is spelled out; ° ² × ÷ stay", () => {
-    expect(pdfSafeText("τb 0.5 ≤ 1 → ok, 70 °F, ft², 2 × 3 ÷ 4")).toBe("tau b 0.5 <= 1 -> ok, 70 °F, ft², 2 × 3 ÷ 4");
+    expect(pdfSafeText("τb 0.5 ≤ 1 → ok, 70 °F, ft², 2 × 3 ÷ 4")).toBe(
+      "tau b 0.5 <= 1 -> ok, 70 °F, ft², 2 × 3 ÷ 4",
+    );
   });
 
   it("loads from the engine keep their own caution and version", () => {

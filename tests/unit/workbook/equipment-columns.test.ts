@@ -25,13 +25,42 @@ const templates = path.resolve(__dirname, "../../../templates");
 const read = (name: string) => readFileSync(path.join(templates, name));
 
 /** A table in file order from cells by key (blank where not given). */
-function tableOf(rows: readonly Record<string, string>[], headers: readonly string[] = EQUIPMENT_HEADERS): RawTable {
-  const keys = headers.map((header) => EQUIPMENT_COLUMNS.find((column) => column.header === header)?.key ?? header);
-  return { headers: [...headers], rows: rows.map((row, index) => ({ rowNumber: index + 2, cells: keys.map((key) => row[key] ?? "") })) };
+function tableOf(
+  rows: readonly Record<string, string>[],
+  headers: readonly string[] = EQUIPMENT_HEADERS,
+): RawTable {
+  const keys = headers.map(
+    (header) => EQUIPMENT_COLUMNS.find((column) => column.header === header)?.key ?? header,
+  );
+  return {
+    headers: [...headers],
+    rows: rows.map((row, index) => ({ rowNumber: index + 2, cells: keys.map((key) => row[key] ?? "") })),
+  };
 }
 
-const GOOD_AC = { system_code: "T-AC30", system_type: "ac-furnace", outdoor_model: "T-C30", indoor_model: "T-E30", furnace_model: "T-G40", nominal_tons: "2.5", cooling_total_btuh: "28,800", cooling_sensible_btuh: "22,000", furnace_output_btuh: "38,000", price_usd: "$4,100" };
-const GOOD_HP = { system_code: "T-HP30", system_type: "heat-pump", outdoor_model: "T-H30", indoor_model: "T-A30", nominal_tons: "2.5", cooling_total_btuh: "28,700", cooling_sensible_btuh: "22,000", heat_pump_47f_btuh: "29,000", heat_pump_17f_btuh: "17,600" };
+const GOOD_AC = {
+  system_code: "T-AC30",
+  system_type: "ac-furnace",
+  outdoor_model: "T-C30",
+  indoor_model: "T-E30",
+  furnace_model: "T-G40",
+  nominal_tons: "2.5",
+  cooling_total_btuh: "28,800",
+  cooling_sensible_btuh: "22,000",
+  furnace_output_btuh: "38,000",
+  price_usd: "$4,100",
+};
+const GOOD_HP = {
+  system_code: "T-HP30",
+  system_type: "heat-pump",
+  outdoor_model: "T-H30",
+  indoor_model: "T-A30",
+  nominal_tons: "2.5",
+  cooling_total_btuh: "28,700",
+  cooling_sensible_btuh: "22,000",
+  heat_pump_47f_btuh: "29,000",
+  heat_pump_17f_btuh: "17,600",
+};
 
 function errorsOf(rows: readonly Record<string, string>[], headers?: readonly string[]) {
   const result = validateEquipmentTable(tableOf(rows, headers));
@@ -45,14 +74,39 @@ describe("equipment catalog: the example file and the templates", () => {
     if (!result.ok) throw new Error(JSON.stringify(result.errors));
     expect(result.systems.length).toBeGreaterThanOrEqual(8);
     expect(result.systems.length).toBeLessThanOrEqual(10);
-    expect(new Set(result.systems.map((s) => s.type))).toEqual(new Set(["ac-furnace", "heat-pump", "heat-pump-backup", "furnace"]));
+    expect(new Set(result.systems.map((s) => s.type))).toEqual(
+      new Set(["ac-furnace", "heat-pump", "heat-pump-backup", "furnace"]),
+    );
     const ac = result.systems.find((s) => s.id === "AC30-F40");
-    expect(ac).toMatchObject({ modelNumber: "NV-C30S / NV-E30B / NV-G40M", nominalTons: 2.5, coolingTotalBtuh: 28_800, coolingSensibleBtuh: 22_400, heatingOutputBtuh: 38_000, priceUsd: 4090, efficiency: "SEER2 14.3, AFUE 96 %" });
+    expect(ac).toMatchObject({
+      modelNumber: "NV-C30S / NV-E30B / NV-G40M",
+      nominalTons: 2.5,
+      coolingTotalBtuh: 28_800,
+      coolingSensibleBtuh: 22_400,
+      heatingOutputBtuh: 38_000,
+      priceUsd: 4090,
+      efficiency: "SEER2 14.3, AFUE 96 %",
+    });
     // Until the site is known a heat pump counts its 17 °F output.
     const hp = result.systems.find((s) => s.id === "HP30-B10");
-    expect(hp).toMatchObject({ heatingOutputBtuh: 17_600, heatPump47FBtuh: 29_000, heatPump17FBtuh: 17_600, backupHeatBtuh: 34_100 });
+    expect(hp).toMatchObject({
+      heatingOutputBtuh: 17_600,
+      heatPump47FBtuh: 29_000,
+      heatPump17FBtuh: 17_600,
+      backupHeatBtuh: 34_100,
+    });
     // Every system goes through lib/equipment's selection without a catalog error.
-    expect(() => selectEquipment({ loads: { heatingBtuh: 20_000, coolingSensibleBtuh: 18_000, coolingLatentBtuh: 3_000, coolingTotalBtuh: 21_000 }, catalog: result.systems })).not.toThrow();
+    expect(() =>
+      selectEquipment({
+        loads: {
+          heatingBtuh: 20_000,
+          coolingSensibleBtuh: 18_000,
+          coolingLatentBtuh: 3_000,
+          coolingTotalBtuh: 21_000,
+        },
+        catalog: result.systems,
+      }),
+    ).not.toThrow();
   });
 
   it("example capacities are plausible: total 0.95–0.97 × tons × 12,000 Btu/h, sensible 0.72–0.78 of total (common practice; a ton is 12,000 Btu/h by definition)", () => {
@@ -69,7 +123,10 @@ describe("equipment catalog: the example file and the templates", () => {
   });
 
   it("the CSV and XLSX templates have every column and one example row that imports", async () => {
-    for (const table of [readCsv(read("equipment-catalog-template.csv").toString("utf8")), await readXlsx(new Uint8Array(read("equipment-catalog-template.xlsx")))]) {
+    for (const table of [
+      readCsv(read("equipment-catalog-template.csv").toString("utf8")),
+      await readXlsx(new Uint8Array(read("equipment-catalog-template.xlsx"))),
+    ]) {
       expect(table.headers).toEqual([...EQUIPMENT_HEADERS]);
       const result = validateEquipmentTable(table);
       if (!result.ok) throw new Error(JSON.stringify(result.errors));
@@ -78,14 +135,27 @@ describe("equipment catalog: the example file and the templates", () => {
   });
 
   it("the files are up to date with the column list (regenerate with equipmentTemplateFiles)", async () => {
-    expect(read("equipment-catalog-template.csv").toString("utf8")).toBe(writeCsv(EQUIPMENT_HEADERS, equipmentExampleCells([EQUIPMENT_TEMPLATE_ROW])) + "\r\n");
-    expect(read("example-equipment.csv").toString("utf8")).toBe(writeCsv(EQUIPMENT_HEADERS, equipmentExampleCells(EXAMPLE_EQUIPMENT_ROWS)) + "\r\n");
+    expect(read("equipment-catalog-template.csv").toString("utf8")).toBe(
+      writeCsv(EQUIPMENT_HEADERS, equipmentExampleCells([EQUIPMENT_TEMPLATE_ROW])) + "\r\n",
+    );
+    expect(read("example-equipment.csv").toString("utf8")).toBe(
+      writeCsv(EQUIPMENT_HEADERS, equipmentExampleCells(EXAMPLE_EQUIPMENT_ROWS)) + "\r\n",
+    );
     expect(read("EQUIPMENT.md").toString("utf8")).toBe(renderEquipmentTemplatesDoc());
     const files = await equipmentTemplateFiles();
-    expect(files.map((file) => file.name)).toEqual(["equipment-catalog-template.csv", "equipment-catalog-template.xlsx", "example-equipment.csv", "EQUIPMENT.md"]);
-    for (const file of files) if (typeof file.content === "string") expect(read(file.name).toString("utf8"), file.name).toBe(file.content);
+    expect(files.map((file) => file.name)).toEqual([
+      "equipment-catalog-template.csv",
+      "equipment-catalog-template.xlsx",
+      "example-equipment.csv",
+      "EQUIPMENT.md",
+    ]);
+    for (const file of files)
+      if (typeof file.content === "string")
+        expect(read(file.name).toString("utf8"), file.name).toBe(file.content);
     const xlsx = files.find((file) => file.name.endsWith(".xlsx"))?.content as Uint8Array;
-    expect((await readXlsx(xlsx)).rows).toEqual((await readXlsx(new Uint8Array(read("equipment-catalog-template.xlsx")))).rows);
+    expect((await readXlsx(xlsx)).rows).toEqual(
+      (await readXlsx(new Uint8Array(read("equipment-catalog-template.xlsx")))).rows,
+    );
   });
 
   it("EQUIPMENT.md documents every column by key and header, and carries the caution", () => {
@@ -102,12 +172,20 @@ describe("equipment catalog: the example file and the templates", () => {
 describe("equipment catalog: bad rows are reported by row and column, and nothing is returned", () => {
   it("a good table reads; units and prices as builders type them", () => {
     const result = validateEquipmentTable(
-      tableOf([{ ...GOOD_AC, cooling_total_btuh: "28800 btuh", price_usd: "4,250.50 USD" }, GOOD_HP, { ...GOOD_AC, system_code: "T-F", cooling_total_btuh: "=nominal_tons*12000*0.96", afue_pct: "96%" }]),
+      tableOf([
+        { ...GOOD_AC, cooling_total_btuh: "28800 btuh", price_usd: "4,250.50 USD" },
+        GOOD_HP,
+        { ...GOOD_AC, system_code: "T-F", cooling_total_btuh: "=nominal_tons*12000*0.96", afue_pct: "96%" },
+      ]),
     );
     if (!result.ok) throw new Error(JSON.stringify(result.errors));
     expect(result.systems[0]).toMatchObject({ coolingTotalBtuh: 28_800, priceUsd: 4250.5 });
     expect(result.systems[1]).toMatchObject({ type: "heat-pump", heatingOutputBtuh: 17_600 });
-    expect(result.systems[2]).toMatchObject({ coolingTotalBtuh: 28_800, afuePct: 96, efficiency: "AFUE 96 %" }); // 2.5 × 12,000 × 0.96
+    expect(result.systems[2]).toMatchObject({
+      coolingTotalBtuh: 28_800,
+      afuePct: 96,
+      efficiency: "AFUE 96 %",
+    }); // 2.5 × 12,000 × 0.96
   });
 
   it("text in a number cell, a negative capacity, a unit of another kind, a bad price", () => {
@@ -131,13 +209,31 @@ describe("equipment catalog: bad rows are reported by row and column, and nothin
     const errors = errorsOf([
       { ...GOOD_AC, cooling_sensible_btuh: "30,000" },
       { ...GOOD_HP, heat_pump_47f_btuh: "" },
-      { system_code: "T-F40", system_type: "furnace", furnace_model: "T-G40", furnace_output_btuh: "38,000", cooling_total_btuh: "24,000" },
+      {
+        system_code: "T-F40",
+        system_type: "furnace",
+        furnace_model: "T-G40",
+        furnace_output_btuh: "38,000",
+        cooling_total_btuh: "24,000",
+      },
       { ...GOOD_HP, system_code: "t-ac30" },
     ]);
     expect(errors).toEqual([
-      { row: 2, column: "Cooling sensible at design (Btu/h)", reason: expect.stringMatching(/above the cooling total of 28800/) },
-      { row: 3, column: "Heat pump heating at 47 °F (Btu/h)", reason: expect.stringMatching(/required for a heat-pump/) },
-      { row: 4, column: "Cooling total at design (Btu/h)", reason: expect.stringMatching(/furnace alone has no cooling/) },
+      {
+        row: 2,
+        column: "Cooling sensible at design (Btu/h)",
+        reason: expect.stringMatching(/above the cooling total of 28800/),
+      },
+      {
+        row: 3,
+        column: "Heat pump heating at 47 °F (Btu/h)",
+        reason: expect.stringMatching(/required for a heat-pump/),
+      },
+      {
+        row: 4,
+        column: "Cooling total at design (Btu/h)",
+        reason: expect.stringMatching(/furnace alone has no cooling/),
+      },
       { row: 5, column: "System code", reason: expect.stringMatching(/already used on row 2/) },
     ]);
   });
@@ -156,7 +252,9 @@ describe("equipment catalog: bad rows are reported by row and column, and nothin
       [5, "Backup heat (Btu/h)"],
     ]);
     expect(errors[0].reason).toMatch(/swapped/);
-    expect(errors[2].reason).toMatch(/not one of the choices: ac-furnace, heat-pump, heat-pump-backup, furnace/);
+    expect(errors[2].reason).toMatch(
+      /not one of the choices: ac-furnace, heat-pump, heat-pump-backup, furnace/,
+    );
   });
 
   it("a missing required column and an unknown column are reported on row 1", () => {
@@ -164,14 +262,25 @@ describe("equipment catalog: bad rows are reported by row and column, and nothin
     const errors = errorsOf([GOOD_AC], [...headers, "Colour"]);
     expect(errors).toEqual(
       expect.arrayContaining([
-        expect.objectContaining({ row: 1, column: "System type", reason: expect.stringMatching(/required column and is missing/) }),
-        expect.objectContaining({ row: 1, column: "Colour", reason: expect.stringMatching(/not a known column/) }),
+        expect.objectContaining({
+          row: 1,
+          column: "System type",
+          reason: expect.stringMatching(/required column and is missing/),
+        }),
+        expect.objectContaining({
+          row: 1,
+          column: "Colour",
+          reason: expect.stringMatching(/not a known column/),
+        }),
       ]),
     );
   });
 
   it("an empty table is an error, not an empty catalog", () => {
-    expect(validateEquipmentTable(tableOf([]))).toEqual({ ok: false, errors: [{ row: 2, column: "System code", reason: "the table has no system rows" }] });
+    expect(validateEquipmentTable(tableOf([]))).toEqual({
+      ok: false,
+      errors: [{ row: 2, column: "System code", reason: "the table has no system rows" }],
+    });
   });
 });
 
@@ -179,7 +288,12 @@ describe("equipment catalog: export", () => {
   it("export → CSV → import gives the same systems; formula-like text is escaped", () => {
     const first = validateEquipmentTable(readCsv(read("example-equipment.csv").toString("utf8")));
     if (!first.ok) throw new Error("example does not validate");
-    const tricky: EquipmentCatalogEntry = { ...first.systems[0], id: "T-X", outdoorModel: "=HYPERLINK(\"x\")", modelNumber: "=HYPERLINK(\"x\") / NV-E18A / NV-G30M" };
+    const tricky: EquipmentCatalogEntry = {
+      ...first.systems[0],
+      id: "T-X",
+      outdoorModel: '=HYPERLINK("x")',
+      modelNumber: '=HYPERLINK("x") / NV-E18A / NV-G30M',
+    };
     const systems = [...first.systems, tricky];
     const table = equipmentRowsToTable(systems);
     expect(table.headers).toEqual([...EQUIPMENT_HEADERS]);
@@ -191,7 +305,17 @@ describe("equipment catalog: export", () => {
   });
 
   it("numbers are written as numbers", () => {
-    const table = equipmentRowsToTable([{ id: "F1", modelNumber: "G1", type: "furnace", furnaceModel: "G1", heatingOutputBtuh: 38_000, furnaceOutputBtuh: 38_000, priceUsd: 1500 }]);
+    const table = equipmentRowsToTable([
+      {
+        id: "F1",
+        modelNumber: "G1",
+        type: "furnace",
+        furnaceModel: "G1",
+        heatingOutputBtuh: 38_000,
+        furnaceOutputBtuh: 38_000,
+        priceUsd: 1500,
+      },
+    ]);
     const byHeader = Object.fromEntries(table.headers.map((header, i) => [header, table.rows[0][i]]));
     expect(byHeader["Furnace heating output (Btu/h)"]).toBe(38_000);
     expect(byHeader["Price (USD)"]).toBe(1500);
@@ -218,13 +342,24 @@ describe("heat pump output at the heating design temperature", () => {
     const result = validateEquipmentTable(readCsv(read("example-equipment.csv").toString("utf8")));
     if (!result.ok) throw new Error("example does not validate");
     // HP24: 23,600 Btu/h at 47 °F, 14,400 at 17 °F → at 24 °F: 14,400 + 7 × 9,200 / 30 = 16,546.7 Btu/h.
-    const loads = { heatingBtuh: 16_000, coolingSensibleBtuh: 15_500, coolingLatentBtuh: 3_000, coolingTotalBtuh: 20_500 };
+    const loads = {
+      heatingBtuh: 16_000,
+      coolingSensibleBtuh: 15_500,
+      coolingLatentBtuh: 3_000,
+      coolingTotalBtuh: 20_500,
+    };
     const at24 = selectEquipment({ loads, catalog: catalogForHeatingDesign(result.systems, 24) });
-    expect(catalogForHeatingDesign(result.systems, 24).find((s) => s.id === "HP24")?.heatingOutputBtuh).toBe(16_547);
+    expect(catalogForHeatingDesign(result.systems, 24).find((s) => s.id === "HP24")?.heatingOutputBtuh).toBe(
+      16_547,
+    );
     expect(at24.bestFit?.system.id).toBe("HP24");
     const at17 = selectEquipment({ loads, catalog: catalogForHeatingDesign(result.systems, 17) });
-    expect(at17.notFitting.find((e) => e.system.id === "HP24")?.reasons.map((r) => r.reason)).toEqual(["heating-short"]);
+    expect(at17.notFitting.find((e) => e.system.id === "HP24")?.reasons.map((r) => r.reason)).toEqual([
+      "heating-short",
+    ]);
     // Furnaces are unchanged.
-    expect(catalogForHeatingDesign(result.systems, 17).find((s) => s.id === "F40")?.heatingOutputBtuh).toBe(38_000);
+    expect(catalogForHeatingDesign(result.systems, 17).find((s) => s.id === "F40")?.heatingOutputBtuh).toBe(
+      38_000,
+    );
   });
 });

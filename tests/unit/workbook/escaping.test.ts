@@ -1,10 +1,27 @@
 import ExcelJS from "exceljs";
 import { describe, expect, it } from "vitest";
-import { escapeCsvText, needsFormulaEscape, parsePastedBlock, readCsv, readXlsx, writeCsv, writeXlsx } from "@/lib/workbook/table-io";
+import {
+  escapeCsvText,
+  needsFormulaEscape,
+  parsePastedBlock,
+  readCsv,
+  readXlsx,
+  writeCsv,
+  writeXlsx,
+} from "@/lib/workbook/table-io";
 
 // Cells a spreadsheet program would run as formulas (OWASP "CSV injection" list: = + - @,
 // tab and carriage return at the start), plus harmless text and numbers.
-const DANGEROUS = ["=1+1", "+SUM(A1:A2)", "-2+3", "@SUM(A1)", "\t=1+1", "\r=1+1", "  =HYPERLINK(\"http://example.invalid\")", "=1\n+2"];
+const DANGEROUS = [
+  "=1+1",
+  "+SUM(A1:A2)",
+  "-2+3",
+  "@SUM(A1)",
+  "\t=1+1",
+  "\r=1+1",
+  '  =HYPERLINK("http://example.invalid")',
+  "=1\n+2",
+];
 const HARMLESS = ["The Juniper", "R-19", "1,250 sf", "a=b", "", "O'Brien"];
 
 describe("escaping cells that could run as formulas", () => {
@@ -15,11 +32,14 @@ describe("escaping cells that could run as formulas", () => {
   });
 
   it("CSV: a leading quote on every dangerous text cell, numbers left as numbers, read back as entered", () => {
-    const csv = writeCsv(["name", "value"], [...DANGEROUS.map((text) => [text, -5]), ...HARMLESS.map((text) => [text, 12.5])]);
+    const csv = writeCsv(
+      ["name", "value"],
+      [...DANGEROUS.map((text) => [text, -5]), ...HARMLESS.map((text) => [text, 12.5])],
+    );
     // In the written file, no record's cell begins with a formula trigger.
     const raw = readCsv(csv.replace(/^\uFEFF/, ""));
     const parsedWithoutUnescape = csv.split(/\r\n/).slice(1, DANGEROUS.length + 1);
-    for (const line of parsedWithoutUnescape) expect(line.startsWith('"\'')).toBe(true);
+    for (const line of parsedWithoutUnescape) expect(line.startsWith("\"'")).toBe(true);
     // Negative numbers stay numbers: the line ends in ,-5, not ,'-5.
     expect(parsedWithoutUnescape[0].endsWith(",-5")).toBe(true);
     // Our reader removes our own escape, so a round trip gives the text back.
@@ -28,7 +48,10 @@ describe("escaping cells that could run as formulas", () => {
   });
 
   it("XLSX: dangerous text is stored as plain string cells, never as formulas", async () => {
-    const bytes = await writeXlsx(["name", "value"], [...DANGEROUS.map((text) => [text, -5]), ["The Juniper", 1250]]);
+    const bytes = await writeXlsx(
+      ["name", "value"],
+      [...DANGEROUS.map((text) => [text, -5]), ["The Juniper", 1250]],
+    );
     const workbook = new ExcelJS.Workbook();
     await workbook.xlsx.load(Buffer.from(bytes) as unknown as ExcelJS.Buffer);
     const sheet = workbook.worksheets[0];
@@ -44,7 +67,9 @@ describe("escaping cells that could run as formulas", () => {
     });
     const table = await readXlsx(bytes);
     expect(table.headers).toEqual(["name", "value"]);
-    expect(table.rows.slice(0, DANGEROUS.length).map((row) => row.cells[0])).toEqual(DANGEROUS.map((text) => text.replace(/\r/g, "\n")));
+    expect(table.rows.slice(0, DANGEROUS.length).map((row) => row.cells[0])).toEqual(
+      DANGEROUS.map((text) => text.replace(/\r/g, "\n")),
+    );
   });
 
   it("XLSX: a formula made by a spreadsheet program is read as its computed result", async () => {

@@ -86,7 +86,8 @@ describe("reading a facing", () => {
   });
 
   it("a blank facing is required", () => {
-    for (const input of ["", "  ", null, undefined]) expect(parseFacing(input)).toMatchObject({ ok: false, reason: expect.stringContaining("required") });
+    for (const input of ["", "  ", null, undefined])
+      expect(parseFacing(input)).toMatchObject({ ok: false, reason: expect.stringContaining("required") });
   });
 
   it("labels compass azimuths with their point and others in degrees", () => {
@@ -115,7 +116,10 @@ describe("facings in a lots file", () => {
       [4, "Facing"],
     ]);
     expect(result.errors[0].reason).toContain("315");
-    const good = validateLotTable(readCsv([LOT_HEADERS.join(","), rows[0].join(","), rows[3].join(",")].join("\n")), { planCodes: new Set(["AS-1450"]) });
+    const good = validateLotTable(
+      readCsv([LOT_HEADERS.join(","), rows[0].join(","), rows[3].join(",")].join("\n")),
+      { planCodes: new Set(["AS-1450"]) },
+    );
     expect(good.ok && good.lots.map((l) => l.facingDeg)).toEqual([45, 315]);
   });
 });

@@ -1,12 +1,25 @@
 import { describe, expect, it } from "vitest";
-import { evaluateFormula, evaluateRow, isFormula, isFormulaSafeKey, type RowCellValue } from "@/lib/workbook/formula";
+import {
+  evaluateFormula,
+  evaluateRow,
+  isFormula,
+  isFormulaSafeKey,
+  type RowCellValue,
+} from "@/lib/workbook/formula";
 import { PLAN_COLUMNS, rowToPlanInput } from "@/lib/workbook/plan-columns";
 import { readQuantity } from "@/lib/workbook/units";
 
-const noReferences = () => ({ ok: false as const, reason: "no references in this test", unknownName: true as const });
+const noReferences = () => ({
+  ok: false as const,
+  reason: "no references in this test",
+  unknownName: true as const,
+});
 
 /** A row of area columns; "label" is a text column. */
-function evaluate(cells: Record<string, string>, defaults: Record<string, number> = {}): Map<string, RowCellValue> {
+function evaluate(
+  cells: Record<string, string>,
+  defaults: Record<string, number> = {},
+): Map<string, RowCellValue> {
   return evaluateRow({
     cells,
     isColumn: (key) => key in cells || key === "label" || key in defaults,
@@ -69,7 +82,11 @@ describe("cell formulas", () => {
 
   it("refers to other columns of the row by key, with their units read", () => {
     const row = evaluate({ front_wall_ft2: "1,250 sf", front_window_ft2: "=front_wall_ft2*0.15" });
-    expect(row.get("front_window_ft2")).toEqual({ status: "value", value: 187.5, formula: "=front_wall_ft2*0.15" });
+    expect(row.get("front_window_ft2")).toEqual({
+      status: "value",
+      value: 187.5,
+      formula: "=front_wall_ft2*0.15",
+    });
   });
 
   it("follows chains of formula cells in any order", () => {
@@ -80,14 +97,24 @@ describe("cell formulas", () => {
   });
 
   it("reports a circular reference on every cell of the cycle, and a dependent cell as depending on it", () => {
-    const row = evaluate({ a_ft2: "=b_ft2+1", b_ft2: "=c_ft2+1", c_ft2: "=a_ft2+1", d_ft2: "=a_ft2*2", e_ft2: "=e_ft2" });
-    for (const key of ["a_ft2", "b_ft2", "c_ft2"]) expect(errorOf(row.get(key))).toMatch(/circular reference: a_ft2 → b_ft2 → c_ft2 → a_ft2/);
+    const row = evaluate({
+      a_ft2: "=b_ft2+1",
+      b_ft2: "=c_ft2+1",
+      c_ft2: "=a_ft2+1",
+      d_ft2: "=a_ft2*2",
+      e_ft2: "=e_ft2",
+    });
+    for (const key of ["a_ft2", "b_ft2", "c_ft2"])
+      expect(errorOf(row.get(key))).toMatch(/circular reference: a_ft2 → b_ft2 → c_ft2 → a_ft2/);
     expect(errorOf(row.get("d_ft2"))).toMatch(/refers to a_ft2, which has an error \(circular/);
     expect(errorOf(row.get("e_ft2"))).toMatch(/circular reference: e_ft2 → e_ft2/);
   });
 
   it("never turns a bad reference into 0", () => {
-    const row = evaluate({ a_ft2: "", b_ft2: "=a_ft2+5", c_ft2: "abc", d_ft2: "=c_ft2*2", e_ft2: "=label*2", f_ft2: "=g_ft2+1" }, { g_ft2: 7 });
+    const row = evaluate(
+      { a_ft2: "", b_ft2: "=a_ft2+5", c_ft2: "abc", d_ft2: "=c_ft2*2", e_ft2: "=label*2", f_ft2: "=g_ft2+1" },
+      { g_ft2: 7 },
+    );
     expect(errorOf(row.get("b_ft2"))).toMatch(/refers to a_ft2, which is blank/);
     expect(errorOf(row.get("c_ft2"))).toMatch(/not a number/);
     expect(errorOf(row.get("d_ft2"))).toMatch(/refers to c_ft2, which has an error/);
@@ -125,11 +152,25 @@ describe("cell formulas", () => {
       expect(good.input.facades.right.grossWallAreaFt2).toBe(320);
       expect(good.input.infiltration.ach50).toBe(3);
     }
-    const bad = rowToPlanInput({ ...base, front_window_ft2: "=front_wall_ft2-400", front_window_shgc: "=1/0" });
+    const bad = rowToPlanInput({
+      ...base,
+      front_window_ft2: "=front_wall_ft2-400",
+      front_window_shgc: "=1/0",
+    });
     expect(bad.ok).toBe(false);
     if (!bad.ok) {
-      expect(bad.errors).toContainEqual(expect.objectContaining({ key: "front_window_ft2", reason: expect.stringMatching(/formula gives -88.*cannot be below 0/) }));
-      expect(bad.errors).toContainEqual(expect.objectContaining({ key: "front_window_shgc", reason: expect.stringMatching(/division by zero/) }));
+      expect(bad.errors).toContainEqual(
+        expect.objectContaining({
+          key: "front_window_ft2",
+          reason: expect.stringMatching(/formula gives -88.*cannot be below 0/),
+        }),
+      );
+      expect(bad.errors).toContainEqual(
+        expect.objectContaining({
+          key: "front_window_shgc",
+          reason: expect.stringMatching(/division by zero/),
+        }),
+      );
     }
   });
 });

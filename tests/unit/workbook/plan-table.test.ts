@@ -2,7 +2,12 @@ import { readFileSync } from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
 import type { TableCellError } from "@/lib/workbook/columns";
-import { PLAN_COLUMN_BY_KEY, PLAN_COLUMNS, PLAN_HEADERS, validatePlanTable } from "@/lib/workbook/plan-columns";
+import {
+  PLAN_COLUMN_BY_KEY,
+  PLAN_COLUMNS,
+  PLAN_HEADERS,
+  validatePlanTable,
+} from "@/lib/workbook/plan-columns";
 import { readCsv, readXlsx, writeCsv, writeXlsx, type OutputCell } from "@/lib/workbook/table-io";
 
 const root = path.resolve(__dirname, "../../..");
@@ -20,7 +25,12 @@ function exampleTable(): { headers: string[]; rows: string[][] } {
   return { headers: [...table.headers], rows: table.rows.map((row) => [...row.cells]) };
 }
 
-function setCell(table: { headers: string[]; rows: string[][] }, dataRowIndex: number, key: string, text: string): void {
+function setCell(
+  table: { headers: string[]; rows: string[][] },
+  dataRowIndex: number,
+  key: string,
+  text: string,
+): void {
   table.rows[dataRowIndex][table.headers.indexOf(header(key))] = text;
 }
 
@@ -38,7 +48,13 @@ describe("validating a plan-library table", () => {
     const result = validatePlanTable(readCsv(exampleCsv));
     expect(result.ok).toBe(true);
     if (!result.ok) return;
-    expect(result.plans.map((plan) => plan.planCode)).toEqual(["WF-1480", "WF-1860", "WF-2240", "WF-2650", "WF-3150"]);
+    expect(result.plans.map((plan) => plan.planCode)).toEqual([
+      "WF-1480",
+      "WF-1860",
+      "WF-2240",
+      "WF-2650",
+      "WF-3150",
+    ]);
     const juniper = result.plans[0];
     expect(juniper.rowNumber).toBe(2);
     expect(juniper.planName).toBe("The Juniper");
@@ -56,9 +72,21 @@ describe("validating a plan-library table", () => {
     table.headers[table.headers.indexOf(header("bedrooms"))] = "Bedroom count";
     table.headers[table.headers.indexOf(header("stories"))] = header("plan_name");
     const errors = errorsOf(validate(table));
-    expect(errors).toContainEqual({ row: 1, column: "Bedroom count", reason: expect.stringMatching(/not a known column/) });
-    expect(errors).toContainEqual({ row: 1, column: header("plan_name"), reason: expect.stringMatching(/appears twice/) });
-    expect(errors).toContainEqual({ row: 1, column: header("bedrooms"), reason: expect.stringMatching(/required column and is missing/) });
+    expect(errors).toContainEqual({
+      row: 1,
+      column: "Bedroom count",
+      reason: expect.stringMatching(/not a known column/),
+    });
+    expect(errors).toContainEqual({
+      row: 1,
+      column: header("plan_name"),
+      reason: expect.stringMatching(/appears twice/),
+    });
+    expect(errors).toContainEqual({
+      row: 1,
+      column: header("bedrooms"),
+      reason: expect.stringMatching(/required column and is missing/),
+    });
   });
 
   it("reports text in a number cell, a negative area and a bad formula with row and column", () => {
@@ -68,10 +96,26 @@ describe("validating a plan-library table", () => {
     setCell(table, 2, "left_wall_ft2", "=front_wall_ft2*");
     setCell(table, 3, "ceiling_cavity_r", "1,250 sf");
     const errors = errorsOf(validate(table));
-    expect(errors).toContainEqual({ row: 2, column: header("conditioned_area_ft2"), reason: expect.stringMatching(/is not a number/) });
-    expect(errors).toContainEqual({ row: 3, column: header("back_window_ft2"), reason: expect.stringMatching(/negative/) });
-    expect(errors).toContainEqual({ row: 4, column: header("left_wall_ft2"), reason: expect.stringMatching(/formula/) });
-    expect(errors).toContainEqual({ row: 5, column: header("ceiling_cavity_r"), reason: expect.stringMatching(/ft² is a unit of area; this column takes R-value/) });
+    expect(errors).toContainEqual({
+      row: 2,
+      column: header("conditioned_area_ft2"),
+      reason: expect.stringMatching(/is not a number/),
+    });
+    expect(errors).toContainEqual({
+      row: 3,
+      column: header("back_window_ft2"),
+      reason: expect.stringMatching(/negative/),
+    });
+    expect(errors).toContainEqual({
+      row: 4,
+      column: header("left_wall_ft2"),
+      reason: expect.stringMatching(/formula/),
+    });
+    expect(errors).toContainEqual({
+      row: 5,
+      column: header("ceiling_cavity_r"),
+      reason: expect.stringMatching(/ft² is a unit of area; this column takes R-value/),
+    });
     expect(errors).toHaveLength(4);
   });
 
@@ -81,7 +125,9 @@ describe("validating a plan-library table", () => {
     setCell(table, 0, "front_window_shgc", "1.4");
     setCell(table, 0, "duct_location", "roof");
     const errors = errorsOf(validate(table));
-    expect(errors.map((error) => error.column).sort()).toEqual([header("bedrooms"), header("duct_location"), header("front_window_shgc")].sort());
+    expect(errors.map((error) => error.column).sort()).toEqual(
+      [header("bedrooms"), header("duct_location"), header("front_window_shgc")].sort(),
+    );
     expect(errors.every((error) => error.row === 2)).toBe(true);
   });
 
@@ -89,20 +135,26 @@ describe("validating a plan-library table", () => {
     const lines = exampleCsv.split("\r\n");
     lines[3] += ",stray note";
     const headerCount = readCsv(exampleCsv).headers.length;
-    expect(errorsOf(validatePlanTable(readCsv(lines.join("\r\n"))))).toEqual([{ row: 1, column: `(column ${headerCount + 1})`, reason: "has data but no header" }]);
+    expect(errorsOf(validatePlanTable(readCsv(lines.join("\r\n"))))).toEqual([
+      { row: 1, column: `(column ${headerCount + 1})`, reason: "has data but no header" },
+    ]);
   });
 
   it("reports a duplicated plan code on the later row, naming the first", () => {
     const table = exampleTable();
     setCell(table, 3, "plan_code", "wf-1480");
     const errors = errorsOf(validate(table));
-    expect(errors).toEqual([{ row: 5, column: header("plan_code"), reason: expect.stringMatching(/already used on row 2/) }]);
+    expect(errors).toEqual([
+      { row: 5, column: header("plan_code"), reason: expect.stringMatching(/already used on row 2/) },
+    ]);
   });
 
   it("reports a required cell left blank", () => {
     const table = exampleTable();
     setCell(table, 1, "right_wall_ft2", "");
-    expect(errorsOf(validate(table))).toEqual([{ row: 3, column: header("right_wall_ft2"), reason: "is required and is blank" }]);
+    expect(errorsOf(validate(table))).toEqual([
+      { row: 3, column: header("right_wall_ft2"), reason: "is required and is blank" },
+    ]);
   });
 
   it("maps the engine's cross-field checks back to a column", () => {
@@ -112,21 +164,45 @@ describe("validating a plan-library table", () => {
     setCell(table, 2, "blower_door_ach50", "");
     setCell(table, 3, "occupants", "0"); // engine range 1–50
     const errors = errorsOf(validate(table));
-    expect(errors).toContainEqual({ row: 2, column: header("front_window_ft2"), reason: expect.stringMatching(/exceed the front facade's gross wall area/) });
-    expect(errors).toContainEqual({ row: 3, column: header("duct_location"), reason: expect.stringMatching(/not a vented crawlspace/) });
-    expect(errors).toContainEqual({ row: 4, column: header("blower_door_ach50"), reason: expect.stringMatching(/ach50 or cfm50/) });
-    expect(errors).toContainEqual({ row: 5, column: header("occupants"), reason: expect.stringMatching(/valid range 1 to 50/) });
+    expect(errors).toContainEqual({
+      row: 2,
+      column: header("front_window_ft2"),
+      reason: expect.stringMatching(/exceed the front facade's gross wall area/),
+    });
+    expect(errors).toContainEqual({
+      row: 3,
+      column: header("duct_location"),
+      reason: expect.stringMatching(/not a vented crawlspace/),
+    });
+    expect(errors).toContainEqual({
+      row: 4,
+      column: header("blower_door_ach50"),
+      reason: expect.stringMatching(/ach50 or cfm50/),
+    });
+    expect(errors).toContainEqual({
+      row: 5,
+      column: header("occupants"),
+      reason: expect.stringMatching(/valid range 1 to 50/),
+    });
   });
 
   it("keeps the sheet's row numbers across blank rows, and finds columns by key or header in any order", () => {
     const table = exampleTable();
-    const headers = [...table.headers].reverse().map((text) => PLAN_COLUMNS.find((column) => column.header === text)?.key ?? text);
+    const headers = [...table.headers]
+      .reverse()
+      .map((text) => PLAN_COLUMNS.find((column) => column.header === text)?.key ?? text);
     const rows = table.rows.map((row) => [...row].reverse());
-    rows.splice(1, 0, headers.map(() => ""));
+    rows.splice(
+      1,
+      0,
+      headers.map(() => ""),
+    );
     const lastRow = rows.length - 1;
     rows[lastRow][headers.indexOf("bedrooms")] = "many";
     const errors = errorsOf(validate({ headers, rows }));
-    expect(errors).toEqual([{ row: lastRow + 2, column: header("bedrooms"), reason: expect.stringMatching(/not a number/) }]);
+    expect(errors).toEqual([
+      { row: lastRow + 2, column: header("bedrooms"), reason: expect.stringMatching(/not a number/) },
+    ]);
   });
 
   it("reads the same library from XLSX, with its errors on the same rows and columns", async () => {
@@ -134,7 +210,9 @@ describe("validating a plan-library table", () => {
     setCell(table, 1, "back_window_ft2", "-95");
     const bytes = await writeXlsx(table.headers, table.rows);
     const errors = errorsOf(validatePlanTable(await readXlsx(bytes)));
-    expect(errors).toEqual([{ row: 3, column: header("back_window_ft2"), reason: expect.stringMatching(/negative/) }]);
+    expect(errors).toEqual([
+      { row: 3, column: header("back_window_ft2"), reason: expect.stringMatching(/negative/) },
+    ]);
     const good = validatePlanTable(await readXlsx(await writeXlsx(PLAN_HEADERS, exampleTable().rows)));
     expect(good.ok && good.plans.length).toBe(5);
   });

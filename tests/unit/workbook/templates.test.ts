@@ -12,7 +12,10 @@ const read = (name: string) => readFileSync(path.join(templates, name));
 
 describe("templates/", () => {
   it("the CSV and XLSX templates have every column and one example row that imports", async () => {
-    for (const table of [readCsv(read("plan-library-template.csv").toString("utf8")), await readXlsx(new Uint8Array(read("plan-library-template.xlsx")))]) {
+    for (const table of [
+      readCsv(read("plan-library-template.csv").toString("utf8")),
+      await readXlsx(new Uint8Array(read("plan-library-template.xlsx"))),
+    ]) {
       expect(table.headers).toEqual([...PLAN_HEADERS]);
       const result = validatePlanTable(table);
       expect(result.ok).toBe(true);
@@ -40,9 +43,14 @@ describe("templates/", () => {
   });
 
   it("the files are up to date with the column list (run npx tsx scripts/make-templates.ts)", () => {
-    const cells = (rows: readonly Record<string, string>[]) => rows.map((row) => PLAN_COLUMNS.map((column) => row[column.key] ?? ""));
-    expect(read("plan-library-template.csv").toString("utf8")).toBe(writeCsv(PLAN_HEADERS, cells([TEMPLATE_EXAMPLE_ROW])) + "\r\n");
-    expect(read("example-plans.csv").toString("utf8")).toBe(writeCsv(PLAN_HEADERS, cells(EXAMPLE_PLAN_ROWS)) + "\r\n");
+    const cells = (rows: readonly Record<string, string>[]) =>
+      rows.map((row) => PLAN_COLUMNS.map((column) => row[column.key] ?? ""));
+    expect(read("plan-library-template.csv").toString("utf8")).toBe(
+      writeCsv(PLAN_HEADERS, cells([TEMPLATE_EXAMPLE_ROW])) + "\r\n",
+    );
+    expect(read("example-plans.csv").toString("utf8")).toBe(
+      writeCsv(PLAN_HEADERS, cells(EXAMPLE_PLAN_ROWS)) + "\r\n",
+    );
     expect(read("README.md").toString("utf8")).toBe(renderTemplatesReadme());
   });
 

@@ -6,7 +6,15 @@ import { useState } from "react";
 import { Button, FormError, TextField } from "@/components/ui/field";
 import { api, ApiError } from "@/lib/client/api";
 
-export function AcceptInvitationForm({ token, email, defaultName }: { token: string; email: string; defaultName: string }) {
+export function AcceptInvitationForm({
+  token,
+  email,
+  defaultName,
+}: {
+  token: string;
+  email: string;
+  defaultName: string;
+}) {
   const router = useRouter();
   const [name, setName] = useState(defaultName);
   const [password, setPassword] = useState("");
@@ -23,7 +31,10 @@ export function AcceptInvitationForm({ token, email, defaultName }: { token: str
     setBusy(true);
     setError(null);
     try {
-      await api(`/api/invitations/${encodeURIComponent(token)}`, { method: "POST", body: { name, password } });
+      await api(`/api/invitations/${encodeURIComponent(token)}`, {
+        method: "POST",
+        body: { name, password },
+      });
       const result = await signIn("credentials", { email, password, redirect: false });
       if (result?.error) throw new Error(result.error);
       router.push("/accounts");
@@ -38,8 +49,24 @@ export function AcceptInvitationForm({ token, email, defaultName }: { token: str
     <form onSubmit={submit} noValidate>
       <FormError message={error} />
       <TextField label="Your name" name="name" value={name} onChange={setName} autoComplete="name" />
-      <TextField label="Password (at least 10 characters)" name="password" type="password" value={password} onChange={setPassword} autoComplete="new-password" required />
-      <TextField label="Password again" name="confirm" type="password" value={confirm} onChange={setConfirm} autoComplete="new-password" required />
+      <TextField
+        label="Password (at least 10 characters)"
+        name="password"
+        type="password"
+        value={password}
+        onChange={setPassword}
+        autoComplete="new-password"
+        required
+      />
+      <TextField
+        label="Password again"
+        name="confirm"
+        type="password"
+        value={confirm}
+        onChange={setConfirm}
+        autoComplete="new-password"
+        required
+      />
       <Button type="submit" disabled={busy} className="mt-2 w-full">
         {busy ? "Joining…" : "Set password and join"}
       </Button>

@@ -13,7 +13,9 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
     return (
       <div data-testid="invitation-invalid">
         <h1 className="mb-2 text-base font-semibold">This link is not valid any more</h1>
-        <p className="text-zinc-600">It was used already, withdrawn or expired. Ask your admin for a new invitation.</p>
+        <p className="text-zinc-600">
+          It was used already, withdrawn or expired. Ask your admin for a new invitation.
+        </p>
       </div>
     );
   }
@@ -21,7 +23,8 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
     <div>
       <h1 className="mb-1 text-base font-semibold">Join {invitation.accountName}</h1>
       <p className="mb-4 text-zinc-600">
-        You are invited as <strong>{ROLE_LABELS[invitation.role]}</strong> with the e-mail {invitation.email}. Set a password to finish.
+        You are invited as <strong>{ROLE_LABELS[invitation.role]}</strong> with the e-mail {invitation.email}.
+        Set a password to finish.
       </p>
       <AcceptInvitationForm token={token} email={invitation.email} defaultName={invitation.name} />
     </div>

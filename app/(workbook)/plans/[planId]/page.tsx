@@ -6,7 +6,13 @@ import { parseId } from "@/lib/http/ids";
 
 export const metadata: Metadata = { title: "Plan sheet" };
 
-export default async function PlanSheetPage({ params, searchParams }: { params: Promise<{ planId: string }>; searchParams: Promise<{ communityId?: string }> }) {
+export default async function PlanSheetPage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ planId: string }>;
+  searchParams: Promise<{ communityId?: string }>;
+}) {
   const { member, permissions } = await getPageContext();
   const { planId } = await params;
   const { communityId } = await searchParams;

@@ -3,7 +3,9 @@ import { apiRoute, parseJsonBody } from "@/lib/auth/route";
 import { loadProcedureSchema } from "./schema";
 
 /** Every member may see which procedure sizes the account's equipment. */
-export const GET = apiRoute({ permission: "read" }, async ({ db, member }) => getLoadProcedure({ db, accountId: member.accountId }));
+export const GET = apiRoute({ permission: "read" }, async ({ db, member }) =>
+  getLoadProcedure({ db, accountId: member.accountId }),
+);
 
 /** An admin picks the procedure; every lot is recomputed by it (frozen lots keep their snapshot). */
 export const PUT = apiRoute({ permission: "account.settings" }, async ({ db, member, request }) => {

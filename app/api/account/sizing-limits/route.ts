@@ -4,7 +4,9 @@ import { z } from "zod";
 
 const bodySchema = z.object({ limits: z.record(z.string(), z.number()) });
 
-export const GET = apiRoute({ permission: "read" }, async ({ db, member }) => getSizingLimits({ db, accountId: member.accountId }));
+export const GET = apiRoute({ permission: "read" }, async ({ db, member }) =>
+  getSizingLimits({ db, accountId: member.accountId }),
+);
 
 /** An admin sets the sizing limits (checked by lib/equipment's schema); every lot is reselected. */
 export const PUT = apiRoute({ permission: "account.settings" }, async ({ db, member, request }) => {

@@ -11,5 +11,11 @@ export const GET = apiRoute({ permission: "read" }, async ({ db, member, request
   const { format } = querySchema.parse(Object.fromEntries(request.nextUrl.searchParams));
   const systems = await listCatalog({ db, accountId: member.accountId });
   const rows = systems.map((s) => EQUIPMENT_COLUMNS.map((c) => s.cells[c.key] ?? null));
-  return tableDownload({ format, fileBase: `equipment-catalog-${new Date().toISOString().slice(0, 10)}`, sheetName: "Equipment catalog", headers: EQUIPMENT_HEADERS, rows });
+  return tableDownload({
+    format,
+    fileBase: `equipment-catalog-${new Date().toISOString().slice(0, 10)}`,
+    sheetName: "Equipment catalog",
+    headers: EQUIPMENT_HEADERS,
+    rows,
+  });
 });

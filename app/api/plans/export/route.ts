@@ -10,7 +10,19 @@ import { exportQuerySchema } from "./schema";
  */
 export const GET = apiRoute({ permission: "read" }, async ({ db, member, request }) => {
   const query = exportQuerySchema.parse(Object.fromEntries(request.nextUrl.searchParams));
-  const library = await listPlanLibrary({ db, accountId: member.accountId, communityId: query.communityId, full: true });
-  const table = planLibraryExportTable(library.plans.map((p) => ({ cells: p.cells, results: p.results ?? null })));
-  return tableDownload({ format: query.format, fileBase: `plan-library-${new Date().toISOString().slice(0, 10)}`, sheetName: "Plan library", ...table });
+  const library = await listPlanLibrary({
+    db,
+    accountId: member.accountId,
+    communityId: query.communityId,
+    full: true,
+  });
+  const table = planLibraryExportTable(
+    library.plans.map((p) => ({ cells: p.cells, results: p.results ?? null })),
+  );
+  return tableDownload({
+    format: query.format,
+    fileBase: `plan-library-${new Date().toISOString().slice(0, 10)}`,
+    sheetName: "Plan library",
+    ...table,
+  });
 });

@@ -5,6 +5,13 @@ import { readUploadedFile } from "@/lib/http/body";
 /** Upload a plan library file (multipart field "file"): kept and queued (202); progress on GET /api/imports/:id. */
 export const POST = apiRoute({ permission: "plans.edit" }, async ({ db, member, request }) => {
   const { fileName, data } = await readUploadedFile(request);
-  const { importId } = await queueImport({ db, accountId: member.accountId, userId: member.userId, kind: "plans", fileName, data });
+  const { importId } = await queueImport({
+    db,
+    accountId: member.accountId,
+    userId: member.userId,
+    kind: "plans",
+    fileName,
+    data,
+  });
   return Response.json({ importId }, { status: 202 });
 });

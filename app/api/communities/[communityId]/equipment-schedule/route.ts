@@ -11,10 +11,14 @@ const querySchema = z.object({ format: z.enum(["xlsx", "csv", "json"]).default("
  * per table) or CSV (tables one after another), text that could run as a formula written as text;
  * JSON for the Schedules page.
  */
-export const GET = apiRoute<{ communityId: string }>({ permission: "read" }, async ({ db, member, params, request }) => {
-  const { format } = querySchema.parse(Object.fromEntries(request.nextUrl.searchParams));
-  const communityId = idParam(params.communityId, "That community");
-  if (format === "json") return communityEquipmentSchedule({ db, accountId: member.accountId, communityId });
-  const file = await equipmentScheduleFile({ db, accountId: member.accountId, communityId, format });
-  return fileResponse(file, "attachment");
-});
+export const GET = apiRoute<{ communityId: string }>(
+  { permission: "read" },
+  async ({ db, member, params, request }) => {
+    const { format } = querySchema.parse(Object.fromEntries(request.nextUrl.searchParams));
+    const communityId = idParam(params.communityId, "That community");
+    if (format === "json")
+      return communityEquipmentSchedule({ db, accountId: member.accountId, communityId });
+    const file = await equipmentScheduleFile({ db, accountId: member.accountId, communityId, format });
+    return fileResponse(file, "attachment");
+  },
+);

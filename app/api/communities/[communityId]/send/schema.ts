@@ -8,7 +8,13 @@ export const MAX_RECIPIENTS = 20;
 export const sendBodySchema = z
   .object({
     to: z
-      .array(z.string({ error: "each address must be text" }).trim().pipe(z.email({ error: (issue) => `"${String(issue.input)}" is not an e-mail address` })), { error: "to must be a list of e-mail addresses" })
+      .array(
+        z
+          .string({ error: "each address must be text" })
+          .trim()
+          .pipe(z.email({ error: (issue) => `"${String(issue.input)}" is not an e-mail address` })),
+        { error: "to must be a list of e-mail addresses" },
+      )
       .min(1, { error: "at least one e-mail address is needed" })
       .max(MAX_RECIPIENTS, { error: `at most ${MAX_RECIPIENTS} addresses at a time` }),
     what: z.enum(PACKET_KINDS, { error: `what must be one of ${PACKET_KINDS.join(", ")}` }),
